@@ -1,0 +1,20 @@
+/**
+ * The command registry. Each command module is loaded only when it is run, so a
+ * scripting call never loads the workbench (Ink, React) or other commands.
+ */
+import type {Command} from '../command.js';
+
+export interface CommandEntry {
+  name: string;
+  summary: string;
+  load: () => Promise<Command>;
+}
+
+export const COMMANDS: CommandEntry[] = [
+  {name: 'check', summary: 'compute a joint: preload, stresses, stripping, margins, flags', load: async () => (await import('./check.js')).command},
+  {name: 'repair', summary: 'ranked repairs for a weak or stripped thread', load: async () => (await import('./repair.js')).command},
+  {name: 'screw', summary: 'power screws (lead screws and nuts): torque, efficiency, stresses, buckling', load: async () => (await import('./screw.js')).command},
+  {name: 'threads', summary: 'geometry and limits of size of a thread designation', load: async () => (await import('./threads.js')).command},
+  {name: 'materials', summary: 'bolt grades, nut classes and parent materials with their sources', load: async () => (await import('./materials.js')).command},
+  {name: 'presets', summary: 'saved joints: list, show, save, rename, delete, import, export', load: async () => (await import('./presets.js')).command},
+];

@@ -1,0 +1,40 @@
+/**
+ * Process entry: wires the real process to runCli. The workbench is imported
+ * only when it is about to start, so commands never load Ink or React.
+ */
+import {runCli} from './main.js';
+import type {CliIo} from './io.js';
+
+const io: CliIo = {
+  out: t => {
+    process.stdout.write(t);
+  },
+  err: t => {
+    process.stderr.write(t);
+  },
+  env: process.env,
+  cwd: process.cwd(),
+  stdinIsTTY: Boolean(process.stdin.isTTY),
+  stdoutIsTTY: Boolean(process.stdout.isTTY),
+  now: () => new Date(),
+};
+
+async function launchWorkbench(args: string[], cliIo: CliIo): Promise<number> {
+  const {launch} = await import('../ui/launch.js');
+  return launch(args, cliIo);
+}
+
+// A closed pipe (`tapwright threads M10 | head -1`) is not an error worth a stack trace.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(0);
+});
+
+runCli(process.argv.slice(2), io, launchWorkbench).then(
+  code => {
+    process.exitCode = code;
+  },
+  (e: unknown) => {
+    process.stderr.write(`tapwright: internal error: ${String(e)}\n`);
+    process.exitCode = 1;
+  },
+);

@@ -1,0 +1,87 @@
+/**
+ * Entry point shared by the bin, the single-file build and the tests:
+ * `runCli(argv, io)` returns the exit code and never throws.
+ */
+import {COMMANDS} from './commands/index.js';
+import {EXIT, UsageError, type CliIo} from './io.js';
+import {CAUTION_LINES} from '../core/cautions.js';
+import {VERSION} from '../version.js';
+
+export function topHelp(): string {
+  const width = Math.max(...COMMANDS.map(c => c.name.length));
+  return [
+    'tapwright - workbench for threaded joints',
+    '',
+    'Usage:',
+    '  tapwright                     open the interactive workbench (needs a terminal)',
+    '  tapwright <command> [options] run one command; see tapwright <command> --help',
+    '',
+    'Commands:',
+    ...COMMANDS.map(c => `  ${c.name.padEnd(width)}  ${c.summary}`),
+    '',
+    'Options:',
+    '  --help, -h     this text',
+    '  --version      print the version',
+    '  --preset NAME  open the workbench on a saved or shipped preset',
+    '  --ascii        workbench with ASCII borders and symbols',
+    '',
+    'Exit codes: 0 ok; 2 bad input or usage; 3 computed, but a check failed; 1 internal error.',
+    'JSON output (--json) is always in SI units: mm, N, MPa, N·m.',
+    '',
+    ...CAUTION_LINES,
+    '',
+  ].join('\n');
+}
+
+function reportError(e: unknown, io: CliIo): number {
+  if (e instanceof UsageError) {
+    io.err(`tapwright: ${e.message}\n`);
+    return EXIT.usage;
+  }
+  const msg = e instanceof Error ? e.message : String(e);
+  io.err(`tapwright: internal error: ${msg}\nPlease report this with the command you ran.\n`);
+  if (io.env.TAPWRIGHT_DEBUG && e instanceof Error && e.stack) io.err(`${e.stack}\n`);
+  return EXIT.internal;
+}
+
+/** Run the CLI. `launchWorkbench` is injected by the bin so tests never start Ink. */
+export async function runCli(
+  argv: string[],
+  io: CliIo,
+  launchWorkbench?: (args: string[], io: CliIo) => Promise<number>,
+): Promise<number> {
+  try {
+    const [first, ...rest] = argv;
+    if (first === '--version' || first === '-V') {
+      io.out(`${VERSION}\n`);
+      return EXIT.ok;
+    }
+    if (first === '--help' || first === '-h' || first === 'help') {
+      if (first === 'help' && rest[0]) return runCli([rest[0], '--help'], io, launchWorkbench);
+      io.out(topHelp());
+      return EXIT.ok;
+    }
+    if (first === undefined || first.startsWith('-')) {
+      if (!launchWorkbench) {
+        io.err('tapwright: the workbench is not available here; use a command (see tapwright --help)\n');
+        return EXIT.usage;
+      }
+      return await launchWorkbench(argv, io);
+    }
+    const entry = COMMANDS.find(c => c.name === first);
+    if (!entry) {
+      const near = COMMANDS.filter(c => c.name.startsWith(first.slice(0, 2))).map(c => c.name);
+      throw new UsageError(
+        `unknown command "${first}"${near.length ? `; did you mean ${near.join(' or ')}?` : ''} (commands: ${COMMANDS.map(c => c.name).join(', ')})`,
+      );
+    }
+    const command = await entry.load();
+    if (rest.includes('--help') || rest.includes('-h')) {
+      io.out(command.help.endsWith('\n') ? command.help : `${command.help}\n`);
+      return EXIT.ok;
+    }
+    return await command.run(rest, io);
+  } catch (e) {
+    return reportError(e, io);
+  }
+}

@@ -1,0 +1,13 @@
+/**
+ * The cautions shown by the workbench, every report and the CLI help.
+ * One wording, kept here so the screens and reports cannot drift apart.
+ */
+export const CAUTION_SHORT =
+  'Estimates only. Follow the equipment maker, local codes and licensed engineering practice.';
+
+export const CAUTION_LINES: readonly string[] = [
+  'CAUTION: these results are engineering estimates from published methods, not a guarantee.',
+  'Follow the equipment maker\'s instructions, local codes and licensed engineering practice.',
+  'Lifting equipment, pressure boundaries and safety-critical joints need a qualified person\'s sign-off.',
+  'Check material strengths against the certificates; typical values here are marked as such.',
+];

@@ -1,0 +1,91 @@
+/**
+ * The result of checking a joint. Its shape is the `check --json` contract
+ * (keys may be added, never removed or renamed): SI working units throughout.
+ */
+import type {Flag, Provenance, ThreadGeometry} from '../types.js';
+
+export interface PreloadRange {
+  /** N */
+  min: number;
+  nominal: number;
+  max: number;
+}
+
+export interface StressSet {
+  /** Axial normal stress, MPa (tension +). */
+  axial: number;
+  /** Root bending stress, MPa. */
+  bending: number;
+  /** Tangential (transverse) shear from the thread torque, MPa. */
+  shear: number;
+  /** Body torsion, MPa. */
+  torsion: number;
+  /** Thread bearing (flank) stress, MPa (compressive, reported as a magnitude or signed as documented). */
+  bearing: number;
+  /** Full 3D von Mises equivalent, MPa. */
+  vonMises: number;
+}
+
+export interface StrippingSide {
+  /** Stripping force, N. */
+  force: number;
+  /** Shear area over the effective engagement, mm². */
+  shearArea: number;
+  /** Shear strength used, MPa. */
+  shearStrength: number;
+}
+
+export interface CheckResult {
+  geometry: ThreadGeometry;
+  /** Resolved materials with their provenance, for display and the report. */
+  materials: {
+    bolt: {id: string; name: string; rm: number; rp: number; shear: number; provenance: Provenance};
+    internal: {id: string; name: string; rm: number; shear: number; provenance: Provenance};
+  };
+  tightening: {
+    preload: PreloadRange;
+    /** Tightening torque, N·m (given, or computed from the target). */
+    torque: number;
+    /** Assembly von Mises stress / Rp0.2 at the max preload. */
+    utilisation: number;
+    /** Permissible preload and torque for the utilisation limit (VDI 2230 closed form), N and N·m. */
+    permissiblePreload: number;
+    permissibleTorque: number;
+    /** Assembly von Mises stress in the threaded section at max preload, MPa. */
+    assemblyVonMises: number;
+    method: 'friction' | 'nut-factor';
+  };
+  stress: {
+    firstThread: StressSet;
+    shank: {axial: number; torsion: number; vonMises: number};
+  };
+  /** Fraction of the load carried by each engaged thread, first (loaded face) first. */
+  loadShare: number[];
+  stripping: {
+    external: StrippingSide;
+    internal: StrippingSide;
+    /** Bolt break force As x Rm, N. */
+    boltBreakForce: number;
+    weaker: 'external' | 'internal';
+    /** Required effective engagement so the bolt breaks first, mm. */
+    requiredEngagement: {fedStd: number; alexander: number};
+    /** Effective (fully formed) engagement used, mm. */
+    effectiveEngagement: number;
+    /** Engaged full threads (effective engagement / pitch). */
+    engagedThreads: number;
+    /** Which limits of size the areas were computed at. */
+    limitsUsed: 'worst-case' | 'basic';
+  };
+  margin: {
+    /** Weaker thread's stripping force / largest load it can see. */
+    stripping: number;
+    /** Weaker stripping force / bolt break force. */
+    boltBreaksFirst: number;
+    /** First-thread von Mises / yield, bolt and internal part. */
+    firstThreadYieldBolt: number;
+    firstThreadYieldInternal: number;
+  };
+  flags: Flag[];
+  /** Sources of every method used, for the report and the help screen. */
+  sources: string[];
+}
