@@ -8,7 +8,12 @@ import path from 'node:path';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const at = p => path.join(root, p);
-rmSync(at('dist'), {recursive: true, force: true});
+// `--out DIR` builds somewhere else (tests build into a temporary folder so they
+// never race a running copy of dist/).
+const outIndex = process.argv.indexOf('--out');
+const outDir = outIndex > 0 ? path.resolve(process.argv[outIndex + 1]) : at('dist');
+const out = p => path.join(outDir, p);
+rmSync(outDir, {recursive: true, force: true});
 
 const common = {
   platform: 'node',
@@ -23,7 +28,7 @@ const common = {
 await build({
   ...common,
   entryPoints: {entry: at('src/cli/entry.ts')},
-  outdir: at('dist/lib'),
+  outdir: out('lib'),
   splitting: true,
   packages: 'external',
   chunkNames: 'chunks/[name]-[hash]',
@@ -32,7 +37,7 @@ await build({
 await build({
   ...common,
   entryPoints: [at('src/cli/entry.ts')],
-  outfile: at('dist/tapwright.mjs'),
+  outfile: out('tapwright.mjs'),
   minify: true,
   legalComments: 'none',
   alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
@@ -40,4 +45,4 @@ await build({
     js: "#!/usr/bin/env node\nimport {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);",
   },
 });
-chmodSync(at('dist/tapwright.mjs'), 0o755);
+chmodSync(out('tapwright.mjs'), 0o755);
