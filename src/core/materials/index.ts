@@ -1,0 +1,144 @@
+/**
+ * The material library: bolt grades, nut classes, parent materials and the
+ * standard head and nut dimensions used as defaults. Pure data, validated by
+ * the zod schema in schema.ts when this module loads (a bad entry throws here,
+ * before any calculation). Units: MPa for strengths and moduli, mm for sizes.
+ *
+ * Every number carries a Provenance: a standard and table, a book, or the
+ * admission "typical value, from memory: verify against the material certificate".
+ */
+import type {Provenance} from '../types.js';
+import {validateMaterialData, type BoltGrade, type NutClass, type ParentMaterial} from './schema.js';
+import {BOLT_GRADE_ROWS} from './bolt-grades.js';
+import {NUT_CLASS_ROWS} from './nut-classes.js';
+import {PARENT_MATERIAL_ROWS} from './parent-materials.js';
+import {HEX_HEAD_ROWS, NUT_DIMENSION_ROWS} from './hardware.js';
+
+export type {BoltGrade, NutClass, ParentMaterial, MaterialData} from './schema.js';
+export {validateMaterialData, MEMORY_WORDING, MaterialDataSchema, BoltGradeSchema, NutClassSchema, ParentMaterialSchema} from './schema.js';
+export {KSI_MPA} from './bolt-grades.js';
+
+const DATA = validateMaterialData({
+  boltGrades: BOLT_GRADE_ROWS,
+  nutClasses: NUT_CLASS_ROWS,
+  parentMaterials: PARENT_MATERIAL_ROWS,
+  hexHeads: HEX_HEAD_ROWS,
+  nutDimensions: NUT_DIMENSION_ROWS,
+});
+
+/** Sizes closer than this are the same size, mm (inch sizes convert to long decimals). */
+const SIZE_EPS = 1e-6;
+
+function inRange(row: {sizeMinMm?: number | undefined; sizeMaxMm?: number | undefined}, d: number): boolean {
+  const aboveMin = row.sizeMinMm === undefined || d > row.sizeMinMm + SIZE_EPS;
+  const belowMax = row.sizeMaxMm === undefined || d <= row.sizeMaxMm + SIZE_EPS;
+  return aboveMin && belowMax;
+}
+
+function norm(id: string): string {
+  return id.trim().toUpperCase();
+}
+
+/**
+ * The bolt grade `id` for a nominal diameter `nominalMm` (mm), with the size
+ * split resolved (ISO 898-1 class 8.8: d <= 16 mm / d > 16 mm; SAE J429 by inch
+ * size). Ids are matched case-insensitively ("sae-5", "a2-70").
+ * Returns undefined for an unknown id or a size outside the grade's rows
+ * (for example 9.8 above M16); `boltGradeRows(id)` tells which sizes exist.
+ * Sources: ISO 898-1:2013 Table 3, ISO 3506-1, SAE J429 (see bolt-grades.ts).
+ */
+export function boltGrade(id: string, nominalMm: number): BoltGrade | undefined {
+  const key = norm(id);
+  return DATA.boltGrades.find(g => norm(g.id) === key && inRange(g, nominalMm));
+}
+
+/** Every row of one bolt grade id (one per size range), smallest sizes first; [] if unknown. */
+export function boltGradeRows(id: string): BoltGrade[] {
+  const key = norm(id);
+  return DATA.boltGrades.filter(g => norm(g.id) === key);
+}
+
+/** Every bolt grade row, in display order (a grade with a size split has one row per range). */
+export function listBoltGrades(): BoltGrade[] {
+  return [...DATA.boltGrades];
+}
+
+/** Distinct bolt grade ids, in display order. */
+export function boltGradeIds(): string[] {
+  return [...new Set(DATA.boltGrades.map(g => g.id))];
+}
+
+/** The parent material `id` (case-insensitive), or undefined. */
+export function parentMaterial(id: string): ParentMaterial | undefined {
+  const key = norm(id);
+  return DATA.parentMaterials.find(m => norm(m.id) === key);
+}
+
+export function listParentMaterials(): ParentMaterial[] {
+  return [...DATA.parentMaterials];
+}
+
+/**
+ * The nut class `id` (ISO 898-2 "8", "10", ...; SAE J995 "SAE-5", "SAE-8") for a
+ * nominal diameter in mm, or undefined for an unknown id or a size outside its rows.
+ */
+export function nutClass(id: string, nominalMm: number): NutClass | undefined {
+  const key = norm(id);
+  return DATA.nutClasses.find(n => norm(n.id) === key && inRange(n, nominalMm));
+}
+
+/** Every row of one nut class id; [] if unknown. */
+export function nutClassRows(id: string): NutClass[] {
+  const key = norm(id);
+  return DATA.nutClasses.filter(n => norm(n.id) === key);
+}
+
+export function listNutClasses(): NutClass[] {
+  return [...DATA.nutClasses];
+}
+
+/**
+ * Hexagon-head bearing data for a metric nominal diameter (mm): dw,min of
+ * ISO 4014/4017 and the ISO 273 medium clearance hole, both mm. The VDI 2230
+ * default bearing diameter is DKm = (dwMin + clearanceHole) / 2.
+ * Undefined for sizes not tabulated (including every inch size: no source at hand).
+ */
+export function hexHeadBearing(nominalMm: number): {dwMin: number; clearanceHole: number; provenance: Provenance} | undefined {
+  const r = DATA.hexHeads.find(h => Math.abs(h.d - nominalMm) < 1e-3);
+  return r ? {dwMin: r.dwMin, clearanceHole: r.clearanceHole, provenance: r.provenance} : undefined;
+}
+
+/**
+ * ISO 4032 style 1 hexagon nut for a metric nominal diameter (mm): height m min/max
+ * and width across flats s, mm. Undefined for sizes not tabulated.
+ */
+export function nutDimensions(nominalMm: number): {heightMin: number; heightMax: number; flats: number; provenance: Provenance} | undefined {
+  const r = DATA.nutDimensions.find(n => Math.abs(n.d - nominalMm) < 1e-3);
+  return r ? {heightMin: r.heightMin, heightMax: r.heightMax, flats: r.flats, provenance: r.provenance} : undefined;
+}
+
+/** A plain-language reason why a bolt grade lookup failed, naming the accepted ids or sizes. */
+export function boltGradeProblem(id: string, nominalMm: number): string | undefined {
+  if (boltGrade(id, nominalMm)) return undefined;
+  const rows = boltGradeRows(id);
+  if (rows.length === 0) return `unknown bolt grade "${id}"; accepted: ${boltGradeIds().join(', ')}`;
+  return `bolt grade ${rows[0]?.id} is not defined for ${fmtMm(nominalMm)} mm; it covers ${describeRange(rows)}`;
+}
+
+/** A plain-language reason why a nut class lookup failed. */
+export function nutClassProblem(id: string, nominalMm: number): string | undefined {
+  if (nutClass(id, nominalMm)) return undefined;
+  const rows = nutClassRows(id);
+  if (rows.length === 0) return `unknown nut class "${id}"; accepted: ${[...new Set(DATA.nutClasses.map(n => n.id))].join(', ')}`;
+  return `nut class ${rows[0]?.id} is not defined for ${fmtMm(nominalMm)} mm; it covers ${describeRange(rows)}`;
+}
+
+function fmtMm(x: number): string {
+  return String(Math.round(x * 1000) / 1000);
+}
+
+function describeRange(rows: {sizeMinMm?: number | undefined; sizeMaxMm?: number | undefined}[]): string {
+  const lo = Math.min(...rows.map(r => r.sizeMinMm ?? 0));
+  const hi = Math.max(...rows.map(r => r.sizeMaxMm ?? Infinity));
+  return `${fmtMm(lo)} to ${fmtMm(hi)} mm nominal diameter`;
+}
