@@ -6,18 +6,24 @@
  *   clearance hole, read from the standards' dimension tables as reproduced in a
  *   distributor catalogue; with DKm = (dw,min + dh)/2 these reproduce the VDI 2230
  *   Part 1 tightening tables (see test/core/materials).
- * - M3 to M6 and M27 to M36 (M27 up: product grade B): from memory.
+ * - M3 to M6: ISO 273 medium clearance hole read from a stored page reproducing the
+ *   ISO 273 table; dw,min from memory.
+ * - M27 to M36 (M27 up: product grade B): from memory.
  * Unified (inch) hexagon heads: no source at hand, so no default is offered.
  *
- * ISO 4032 regular (style 1) hexagon nuts: width across flats s for M6 to M22 read
- * from a distributor catalogue reproducing the standard; the heights m min / m max
- * and the other sizes are from memory.
+ * ISO 4032 regular (style 1) hexagon nuts: the preferred sizes (M3 to M12, M16, M20,
+ * M24, M30, M36) read from a stored copy of BS EN ISO 4032:2001 Table 1 (m max, m min,
+ * s); the non-preferred sizes (M14, M18, M22, M27, M33, ISO 4032 Table 2) from memory.
  */
 import type {Provenance} from '../types.js';
 
 const HEAD_STD: Provenance = {
   source: 'ISO 4014/4017 dimension table, dw,min (product grade A); ISO 273 clearance holes, medium series',
   kind: 'standard',
+};
+const HEAD_273: Provenance = {
+  source: 'ISO 273 clearance hole, medium series, from the standard\'s table; ISO 4014/4017 dw,min from memory: verify against the standard',
+  kind: 'memory',
 };
 const HEAD_MEM: Provenance = {
   source: 'ISO 4014/4017 dw,min and ISO 273 medium clearance hole, typical value, from memory: verify against the standards',
@@ -27,9 +33,9 @@ const NUT_MEM: Provenance = {
   source: 'ISO 4032 style 1 hexagon nut, height m min/max and width across flats s, from memory: verify against the standard',
   kind: 'memory',
 };
-const NUT_S_STD: Provenance = {
-  source: 'ISO 4032 style 1 hexagon nut: s from the dimension table; height m min/max from memory: verify against the standard',
-  kind: 'memory',
+const NUT_STD: Provenance = {
+  source: 'ISO 4032:2001 Table 1 (preferred sizes), m min/max and s',
+  kind: 'standard',
 };
 
 const head = (d: number, dwMin: number, clearanceHole: number, provenance: Provenance) => ({d, dwMin, clearanceHole, provenance});
@@ -43,10 +49,10 @@ const nut = (d: number, heightMin: number, heightMax: number, flats: number, pro
 
 /** Raw rows; validated by the schema in index.ts. */
 export const HEX_HEAD_ROWS: unknown[] = [
-  head(3, 4.57, 3.4, HEAD_MEM),
-  head(4, 5.88, 4.5, HEAD_MEM),
-  head(5, 6.88, 5.5, HEAD_MEM),
-  head(6, 8.88, 6.6, HEAD_MEM),
+  head(3, 4.57, 3.4, HEAD_273),
+  head(4, 5.88, 4.5, HEAD_273),
+  head(5, 6.88, 5.5, HEAD_273),
+  head(6, 8.88, 6.6, HEAD_273),
   head(8, 11.63, 9, HEAD_STD),
   head(10, 14.63, 11, HEAD_STD),
   head(12, 16.63, 13.5, HEAD_STD),
@@ -63,21 +69,21 @@ export const HEX_HEAD_ROWS: unknown[] = [
 ];
 
 export const NUT_DIMENSION_ROWS: unknown[] = [
-  nut(3, 2.15, 2.4, 5.5, NUT_MEM),
-  nut(4, 2.9, 3.2, 7, NUT_MEM),
-  nut(5, 4.4, 4.7, 8, NUT_MEM),
-  nut(6, 4.9, 5.2, 10, NUT_S_STD),
-  nut(8, 6.44, 6.8, 13, NUT_S_STD),
-  nut(10, 8.04, 8.4, 16, NUT_S_STD),
-  nut(12, 10.37, 10.8, 18, NUT_S_STD),
-  nut(14, 12.1, 12.8, 21, NUT_S_STD),
-  nut(16, 14.1, 14.8, 24, NUT_S_STD),
-  nut(18, 15.1, 15.8, 27, NUT_S_STD),
-  nut(20, 16.9, 18, 30, NUT_S_STD),
-  nut(22, 18.1, 19.4, 34, NUT_S_STD),
-  nut(24, 20.2, 21.5, 36, NUT_MEM),
+  nut(3, 2.15, 2.4, 5.5, NUT_STD),
+  nut(4, 2.9, 3.2, 7, NUT_STD),
+  nut(5, 4.4, 4.7, 8, NUT_STD),
+  nut(6, 4.9, 5.2, 10, NUT_STD),
+  nut(8, 6.44, 6.8, 13, NUT_STD),
+  nut(10, 8.04, 8.4, 16, NUT_STD),
+  nut(12, 10.37, 10.8, 18, NUT_STD),
+  nut(14, 12.1, 12.8, 21, NUT_MEM),
+  nut(16, 14.1, 14.8, 24, NUT_STD),
+  nut(18, 15.1, 15.8, 27, NUT_MEM),
+  nut(20, 16.9, 18, 30, NUT_STD),
+  nut(22, 18.1, 19.4, 34, NUT_MEM),
+  nut(24, 20.2, 21.5, 36, NUT_STD),
   nut(27, 22.5, 23.8, 41, NUT_MEM),
-  nut(30, 24.3, 25.6, 46, NUT_MEM),
+  nut(30, 24.3, 25.6, 46, NUT_STD),
   nut(33, 27.4, 28.7, 50, NUT_MEM),
-  nut(36, 29.4, 31, 55, NUT_MEM),
+  nut(36, 29.4, 31, 55, NUT_STD),
 ];

@@ -40,8 +40,10 @@ function row(
   elasticModulusProvenance: Provenance,
   note: string,
   provenance: Provenance = MEM,
+  yieldProvenance?: Provenance,
 ): Record<string, unknown> {
   return {
+    ...(yieldProvenance ? {yieldProvenance} : {}),
     id,
     name,
     group,
@@ -56,6 +58,15 @@ function row(
     note,
   };
 }
+
+/** EN 1561 Table 1: tensile strength of separately cast samples (read in a stored foundry page reproducing it). */
+const EN1561: Provenance = {source: 'EN 1561 Table 1, tensile strength Rm min of a separately cast sample', kind: 'standard'};
+const GJL_RP: Provenance = {source: '0.1 % proof stress about 0.65 Rm for grey cast iron, typical value, from memory: verify against the material certificate', kind: 'memory'};
+/** EN 1563:1997, mechanical properties on test pieces machined from separately cast samples (stored foundry page reproducing the table). */
+const EN1563: Provenance = {
+  source: 'EN 1563:1997, table of Rm min and Rp0.2 min on test pieces machined from separately cast samples',
+  kind: 'standard',
+};
 
 const E_STEEL = e(210, 'carbon and low-alloy steel');
 const E_AL = e(70, 'aluminium alloys');
@@ -75,15 +86,15 @@ export const PARENT_MATERIAL_ROWS: unknown[] = [
     'hot-rolled bar; cold-drawn bar is stronger; sulphide inclusions lower the thread strength across the grain'),
   // Cast irons
   row('EN-GJL-200', 'grey cast iron EN-GJL-200 (EN 1561)', 'cast-iron', 200, 130, 0.9, TAU_GJL, 88, e(88, 'grey cast iron, low end'),
-    'tensile strength of a separately cast test bar; yield given as the 0.1 % proof stress; thick sections are weaker'),
+    'separately cast test bar; EN 1561 expects less in walls thicker than about 10 mm; yield given as the 0.1 % proof stress', EN1561, GJL_RP),
   row('EN-GJL-250', 'grey cast iron EN-GJL-250 (EN 1561)', 'cast-iron', 250, 165, 0.9, TAU_GJL, 103, e(103, 'grey cast iron, low end'),
-    'tensile strength of a separately cast test bar; yield given as the 0.1 % proof stress; thick sections are weaker'),
+    'separately cast test bar; EN 1561 expects less in walls thicker than about 10 mm; yield given as the 0.1 % proof stress', EN1561, GJL_RP),
   row('EN-GJL-300', 'grey cast iron EN-GJL-300 (EN 1561)', 'cast-iron', 300, 195, 0.9, TAU_GJL, 108, e(108, 'grey cast iron, low end'),
-    'tensile strength of a separately cast test bar; yield given as the 0.1 % proof stress; thick sections are weaker'),
+    'separately cast test bar; EN 1561 expects less in walls thicker than about 10 mm; yield given as the 0.1 % proof stress', EN1561, GJL_RP),
   row('EN-GJS-400-15', 'ductile (nodular) iron EN-GJS-400-15 (EN 1563)', 'cast-iron', 400, 250, 0.9, TAU_GJS, 169, e(169, 'nodular cast iron'),
-    'separately cast test piece'),
+    'separately cast test piece; castings with thick walls are weaker', EN1563),
   row('EN-GJS-500-7', 'ductile (nodular) iron EN-GJS-500-7 (EN 1563)', 'cast-iron', 500, 320, 0.9, TAU_GJS, 169, e(169, 'nodular cast iron'),
-    'separately cast test piece'),
+    'separately cast test piece; castings with thick walls are weaker', EN1563),
   // Wrought aluminium
   row('6061-T6', 'wrought aluminium 6061-T6', 'aluminium', 260, 240, 0.6, TAU_AL, 69, E_AL,
     'extruded or drawn product minimum'),

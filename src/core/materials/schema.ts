@@ -61,7 +61,10 @@ export const ParentMaterialSchema = z
     shear: stress,
     shearRatio: ratio,
     elasticModulus: modulus,
+    /** Provenance of rm (and of yield unless yieldProvenance is given). */
     provenance: ProvenanceSchema,
+    /** Provenance of the yield value where it differs from that of rm. */
+    yieldProvenance: ProvenanceSchema.optional(),
     shearRatioProvenance: ProvenanceSchema,
     elasticModulusProvenance: ProvenanceSchema,
     note: z.string().optional(),
