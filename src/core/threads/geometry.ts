@@ -1,0 +1,99 @@
+/**
+ * Basic geometry and limits of size of fastener threads (ISO metric, unified).
+ *
+ * Basic profile, ISO 68-1 / ISO 724 and ASME B1.1 (same 60° profile), mm:
+ *   H = 0.866025P, d2 = D2 = d - 0.649519P, D1 = d - 1.082532P,
+ *   d3 = d - 1.226869P (ISO, rounded root H/6) or d - 1.299038P (unified, dr used for At).
+ * Stress area: ISO 898-1 As = (π/4)((d2 + d3)/2)²;
+ *   ASME B1.1 At = 0.7854 (D - 0.9743/n)² (here in mm: 0.7854 (D - 0.9743P)²).
+ */
+import type {ThreadGeometry, ThreadSpec} from '../types.js';
+import {metricLimits} from './metric-limits.js';
+import {unifiedLimits} from './unified-limits.js';
+import {parseMetricClass, parseUnifiedClass} from './tolerance-class.js';
+
+const IN = 25.4;
+
+/** Basic profile dimensions, mm. `family` picks the external minor diameter rule. */
+export function basicProfile(d: number, P: number, family: 'metric' | 'unified') {
+  const H = (Math.sqrt(3) / 2) * P;
+  const d2 = d - 0.75 * H;
+  const D1 = d - 1.25 * H;
+  const d3 = family === 'metric' ? d - (17 / 12) * H : d - 1.5 * H;
+  return {H, d2, D1, d3};
+}
+
+function must<T>(p: {ok: true; value: T} | {ok: false; error: string}): T {
+  if (!p.ok) throw new Error(p.error);
+  return p.value;
+}
+
+/**
+ * Full geometry (mm, mm²) and limits of size of a metric or unified thread pair.
+ * Throws an Error with a plain message for power-screw threads, whose geometry
+ * belongs to src/core/screw.
+ */
+export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
+  if (spec.family !== 'metric' && spec.family !== 'unified') {
+    throw new Error(
+      `threadGeometry covers ISO metric and unified fastener threads; ${spec.designation} is a ${spec.family} power-screw thread (see tapwright screw)`,
+    );
+  }
+  const d = spec.nominal;
+  const P = spec.pitch;
+  const {H, d2, D1, d3} = basicProfile(d, P, spec.family);
+  const notes: string[] = [];
+  if (!spec.isStandardPitch) {
+    notes.push(
+      spec.family === 'metric'
+        ? `Special thread: pitch ${P} mm is not in the ISO 261 series for M${d}.`
+        : `Special thread: ${spec.tpi ?? ''} threads per inch is not in the UNC, UNF or UNEF series for ${spec.sizeLabel} in (ASME B1.1 UN special).`,
+    );
+  }
+  if (spec.family === 'metric') {
+    const stressArea = (Math.PI / 4) * ((d2 + d3) / 2) ** 2;
+    const ext = must(parseMetricClass(spec.toleranceExternal, 'external'));
+    const int = must(parseMetricClass(spec.toleranceInternal, 'internal'));
+    const lim = metricLimits(d, P, ext, int);
+    return {
+      spec,
+      nominal: d,
+      pitch: P,
+      fundamentalHeight: H,
+      pitchDiameter: d2,
+      minorDiameterExternal: d3,
+      minorDiameterInternal: D1,
+      stressArea,
+      minorArea: (Math.PI / 4) * d3 * d3,
+      limits: {external: lim.external, internal: lim.internal},
+      limitsProvenance: lim.provenance,
+      notes: [...notes, ...lim.notes],
+    };
+  }
+  const stressArea = 0.7854 * (d - 0.9743 * P) ** 2;
+  const ext = must(parseUnifiedClass(spec.toleranceExternal));
+  const int = must(parseUnifiedClass(spec.toleranceInternal));
+  const tpi = spec.tpi ?? IN / P;
+  const lim = unifiedLimits(d / IN, tpi, ext, int);
+  notes.push(
+    'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by 0.0001 in.',
+  );
+  return {
+    spec,
+    nominal: d,
+    pitch: P,
+    fundamentalHeight: H,
+    pitchDiameter: d2,
+    minorDiameterExternal: d3,
+    minorDiameterInternal: D1,
+    stressArea,
+    minorArea: (Math.PI / 4) * d3 * d3,
+    limits: {external: lim.external, internal: lim.internal},
+    limitsProvenance: {
+      source: 'ASME B1.1 tolerance formulas (recalled), rounded as in the ASME B1.1 tables',
+      kind: 'formula',
+      method: 'formula',
+    },
+    notes,
+  };
+}
