@@ -1,0 +1,205 @@
+/**
+ * Every key of the workbench, as data: the handler looks commands up here, the
+ * hint line shows the bindings of the current context, and the help screen is
+ * generated from this table, so the three can never disagree.
+ */
+import type {KeyEvent, KeyName} from './keys.js';
+
+export type Context =
+  | 'any'
+  | 'screens'
+  | 'joint'
+  | 'edit'
+  | 'picker'
+  | 'presets'
+  | 'report'
+  | 'repairs'
+  | 'help'
+  | 'prompt'
+  | 'confirm'
+  | 'draft';
+
+export interface KeySpec {
+  name: KeyName;
+  char?: string;
+  ctrl?: boolean;
+  shift?: boolean;
+  /** A class of characters instead of one: digits and the decimal point. */
+  digits?: boolean;
+  /** Any printable character. */
+  printable?: boolean;
+}
+
+export interface Binding {
+  command: string;
+  keys: KeySpec[];
+  context: Context;
+  /** Short word for the hint line; no hint when absent. */
+  hint?: string;
+  description: string;
+}
+
+const c = (char: string, extra: Partial<KeySpec> = {}): KeySpec => ({name: 'char', char, ...extra});
+const k = (name: KeyName, extra: Partial<KeySpec> = {}): KeySpec => ({name, ...extra});
+
+export const CONTEXT_TITLES: Record<Context, string> = {
+  any: 'Everywhere',
+  screens: 'On every screen (not while typing)',
+  joint: 'Joint screen',
+  edit: 'Typing a value',
+  picker: 'Choosing from a list',
+  presets: 'Presets screen',
+  report: 'Report screen',
+  repairs: 'Repairs screen',
+  help: 'Help screen',
+  prompt: 'Typing a name or file path',
+  confirm: 'A yes/no question',
+  draft: 'Start-up: unsaved draft found',
+};
+
+export const KEYMAP: readonly Binding[] = [
+  {command: 'app.interrupt', keys: [c('c', {ctrl: true})], context: 'any', description: 'Quit at once; unsaved edits are kept as a draft'},
+  {command: 'app.quit', keys: [c('q')], context: 'screens', hint: 'quit', description: 'Quit; unsaved edits are kept as a draft for the next start'},
+  {command: 'go.joint', keys: [c('j')], context: 'screens', hint: 'joint', description: 'Joint screen: inputs and live results'},
+  {command: 'go.repairs', keys: [c('r')], context: 'screens', hint: 'repairs', description: 'Repairs screen: ranked fixes for this hole'},
+  {command: 'go.presets', keys: [c('p')], context: 'screens', hint: 'presets', description: 'Presets screen: load, save, rename, import, export'},
+  {command: 'go.report', keys: [c('w')], context: 'screens', hint: 'report', description: 'Report screen: preview and write the work-order report'},
+  {command: 'go.help', keys: [c('?'), c('h')], context: 'screens', hint: 'help', description: 'This help'},
+  {command: 'units.toggle', keys: [c('u')], context: 'screens', hint: 'SI/US', description: 'Switch units between SI and US customary'},
+
+  {command: 'field.prev', keys: [k('up')], context: 'joint', hint: 'field', description: 'Previous field'},
+  {command: 'field.next', keys: [k('down')], context: 'joint', description: 'Next field'},
+  {command: 'step.next', keys: [k('right'), k('tab')], context: 'joint', hint: 'step', description: 'Next step (Thread, Parts, Engagement, Tightening, Hole state)'},
+  {command: 'step.prev', keys: [k('left'), k('tab', {shift: true})], context: 'joint', description: 'Previous step'},
+  {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
+  {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
+  {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},
+  {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
+  {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},
+
+  {command: 'edit.commit', keys: [k('enter')], context: 'edit', hint: 'keep', description: 'Keep the typed value'},
+  {command: 'edit.cancel', keys: [k('escape')], context: 'edit', hint: 'undo', description: 'Put the old value back'},
+  {command: 'edit.erase', keys: [k('backspace')], context: 'edit', hint: 'erase', description: 'Erase the last character'},
+  {command: 'edit.clear', keys: [c('u', {ctrl: true})], context: 'edit', description: 'Erase the whole value'},
+  {command: 'edit.commitPrev', keys: [k('up')], context: 'edit', description: 'Keep the value and go to the previous field'},
+  {command: 'edit.commitNext', keys: [k('down'), k('tab')], context: 'edit', description: 'Keep the value and go to the next field'},
+  {command: 'edit.insert', keys: [{name: 'char', printable: true}], context: 'edit', description: 'Type; a unit may follow the number (12mm, 0.5in, 40Nm)'},
+
+  {command: 'pick.up', keys: [k('up')], context: 'picker', hint: 'choose', description: 'Previous entry'},
+  {command: 'pick.down', keys: [k('down')], context: 'picker', description: 'Next entry'},
+  {command: 'pick.take', keys: [k('enter')], context: 'picker', hint: 'take', description: 'Take the marked entry (or, for a thread, the text as typed)'},
+  {command: 'pick.cancel', keys: [k('escape')], context: 'picker', hint: 'undo', description: 'Close the list, keep the old value'},
+  {command: 'pick.erase', keys: [k('backspace')], context: 'picker', description: 'Erase the last character of the filter'},
+  {command: 'pick.type', keys: [{name: 'char', printable: true}], context: 'picker', description: 'Type to narrow the list'},
+
+  {command: 'list.up', keys: [k('up')], context: 'presets', hint: 'choose', description: 'Previous preset'},
+  {command: 'list.down', keys: [k('down')], context: 'presets', description: 'Next preset'},
+  {command: 'preset.load', keys: [k('enter')], context: 'presets', hint: 'load', description: 'Load the marked preset into the joint screen'},
+  {command: 'preset.search', keys: [c('/')], context: 'presets', hint: 'search', description: 'Search presets by name or notes'},
+  {command: 'preset.save', keys: [c('s')], context: 'presets', hint: 'save', description: 'Save the joint into the current preset'},
+  {command: 'preset.saveAs', keys: [c('a')], context: 'presets', hint: 'save as', description: 'Save the joint under a new name'},
+  {command: 'preset.rename', keys: [c('n')], context: 'presets', hint: 'rename', description: 'Rename the marked preset'},
+  {command: 'preset.duplicate', keys: [c('d')], context: 'presets', hint: 'copy', description: 'Duplicate the marked preset under a new name'},
+  {command: 'preset.delete', keys: [c('x')], context: 'presets', hint: 'delete', description: 'Delete the marked preset (asks first)'},
+  {command: 'preset.import', keys: [c('i')], context: 'presets', hint: 'import', description: 'Import presets from a JSON file'},
+  {command: 'preset.export', keys: [c('e')], context: 'presets', hint: 'export', description: 'Export the marked preset to a JSON file'},
+  {command: 'screen.back', keys: [k('escape')], context: 'presets', description: 'Back to the joint screen'},
+
+  {command: 'scroll.up', keys: [k('up')], context: 'report', hint: 'scroll', description: 'Scroll up a line'},
+  {command: 'scroll.down', keys: [k('down')], context: 'report', description: 'Scroll down a line'},
+  {command: 'scroll.pageUp', keys: [k('pageup')], context: 'report', description: 'Scroll up a page'},
+  {command: 'scroll.pageDown', keys: [k('pagedown'), c(' ')], context: 'report', description: 'Scroll down a page'},
+  {command: 'report.format', keys: [c('t')], context: 'report', hint: 'text/Markdown', description: 'Switch the report between plain text and Markdown'},
+  {command: 'report.write', keys: [k('enter')], context: 'report', hint: 'write file', description: 'Write the report to a file (asks for the path)'},
+  {command: 'screen.back', keys: [k('escape')], context: 'report', description: 'Back to the joint screen'},
+
+  {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'choose', description: 'Previous repair'},
+  {command: 'list.down', keys: [k('down')], context: 'repairs', description: 'Next repair'},
+  {command: 'repair.hole', keys: [k('enter')], context: 'repairs', hint: 'hole state', description: 'Edit the hole state (joint screen, Hole state step)'},
+  {command: 'screen.back', keys: [k('escape')], context: 'repairs', description: 'Back to the joint screen'},
+
+  {command: 'scroll.up', keys: [k('up')], context: 'help', hint: 'scroll', description: 'Scroll up a line'},
+  {command: 'scroll.down', keys: [k('down')], context: 'help', description: 'Scroll down a line'},
+  {command: 'scroll.pageUp', keys: [k('pageup')], context: 'help', description: 'Scroll up a page'},
+  {command: 'scroll.pageDown', keys: [k('pagedown'), c(' ')], context: 'help', description: 'Scroll down a page'},
+  {command: 'screen.back', keys: [k('escape')], context: 'help', hint: 'back', description: 'Back to the screen before'},
+
+  {command: 'prompt.ok', keys: [k('enter')], context: 'prompt', hint: 'ok', description: 'Accept'},
+  {command: 'prompt.cancel', keys: [k('escape')], context: 'prompt', hint: 'cancel', description: 'Cancel'},
+  {command: 'prompt.erase', keys: [k('backspace')], context: 'prompt', description: 'Erase the last character'},
+  {command: 'prompt.type', keys: [{name: 'char', printable: true}], context: 'prompt', description: 'Type'},
+
+  {command: 'confirm.yes', keys: [c('y')], context: 'confirm', hint: 'yes', description: 'Yes, do it'},
+  {command: 'confirm.no', keys: [c('n'), k('escape')], context: 'confirm', hint: 'no', description: 'No, leave it'},
+
+  {command: 'draft.restore', keys: [c('y'), k('enter')], context: 'draft', hint: 'restore draft', description: 'Restore the unsaved edits of the last session'},
+  {command: 'draft.discard', keys: [c('n')], context: 'draft', hint: 'discard it', description: 'Throw the draft away and start from the preset'},
+];
+
+function matches(spec: KeySpec, ev: KeyEvent): boolean {
+  if (spec.name !== ev.name) return false;
+  if (Boolean(spec.ctrl) !== Boolean(ev.ctrl)) return false;
+  if (spec.name === 'tab' && Boolean(spec.shift) !== Boolean(ev.shift)) return false;
+  if (spec.name !== 'char') return true;
+  const ch = ev.char ?? '';
+  if (spec.digits) return /^[0-9.,]$/.test(ch);
+  if (spec.printable) return ch >= ' ' && !ev.ctrl;
+  return spec.char === ch;
+}
+
+/** The command a key means in a list of contexts, searched in order. */
+export function lookup(ev: KeyEvent, contexts: readonly Context[]): string | undefined {
+  for (const ctx of contexts) {
+    const b = KEYMAP.find(x => x.context === ctx && x.keys.some(s => matches(s, ev)));
+    if (b) return b.command;
+  }
+  return undefined;
+}
+
+/** How a key is written on screen. */
+export function keyLabel(spec: KeySpec, ascii: boolean): string {
+  const arrows: Partial<Record<KeyName, [string, string]>> = {
+    up: ['↑', 'Up'], down: ['↓', 'Down'], left: ['←', 'Left'], right: ['→', 'Right'],
+  };
+  const arrow = arrows[spec.name];
+  if (arrow) return ascii ? arrow[1] : arrow[0];
+  if (spec.digits) return '0-9 .';
+  if (spec.printable) return 'letters';
+  const named: Partial<Record<KeyName, string>> = {
+    enter: 'Enter', escape: 'Esc', backspace: 'Backspace', tab: 'Tab', pageup: 'PgUp', pagedown: 'PgDn', home: 'Home', end: 'End',
+  };
+  if (spec.name === 'tab' && spec.shift) return 'Shift-Tab';
+  if (spec.name !== 'char') return named[spec.name] ?? spec.name;
+  if (spec.char === ' ') return 'Space';
+  return spec.ctrl ? `Ctrl-${(spec.char ?? '').toUpperCase()}` : (spec.char ?? '');
+}
+
+/** The hint line: the keys that work now, most specific context first. */
+export function hintText(contexts: readonly Context[], ascii: boolean, width: number): string {
+  const parts: string[] = [];
+  const seen = new Set<string>();
+  for (const ctx of contexts) {
+    for (const b of KEYMAP) {
+      if (b.context !== ctx || !b.hint || seen.has(b.command)) continue;
+      seen.add(b.command);
+      const same = KEYMAP.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
+      const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);
+      parts.push(`${keys.map(s => keyLabel(s, ascii)).join('')} ${b.hint}`);
+    }
+  }
+  let line = '';
+  for (const p of parts) {
+    const next = line === '' ? p : `${line}  ${p}`;
+    if (next.length > width) break;
+    line = next;
+  }
+  return line;
+}
+
+/** Commands whose key is shown together with another's on the hint line (↑↓ field). */
+function pairOf(command: string): string | undefined {
+  const pairs: Record<string, string> = {
+    'field.prev': 'field.next', 'step.next': 'step.prev', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down',
+  };
+  return pairs[command];
+}

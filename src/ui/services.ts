@@ -1,0 +1,108 @@
+/**
+ * What the workbench needs from the rest of tapwright, as one injected object.
+ * launch.ts wires the real core, store and report modules; tests pass fixtures.
+ * The workbench computes nothing itself: every number comes through here.
+ */
+import type {CheckResult} from '../core/joint/result.js';
+import type {JointInput} from '../core/joint/input.js';
+import type {RepairInput} from '../core/repair/input.js';
+import type {Provenance} from '../core/types.js';
+import type {FormValues, PickSource} from './state/fields.js';
+
+/** One entry of a picker (grade, material, nut class) with where its numbers come from. */
+export interface PickItem {
+  id: string;
+  name: string;
+  /** The key numbers in working units, already formatted, e.g. "Rm 800 MPa, Rp0.2 640 MPa". */
+  detail: string;
+  provenance: Provenance;
+}
+
+export interface PresetEntry {
+  name: string;
+  /** Shipped demo presets are read-only: "save as" copies them. */
+  readOnly: boolean;
+  savedAt?: string;
+  notes?: string;
+}
+
+export interface LoadedPreset {
+  name: string;
+  readOnly: boolean;
+  values: FormValues;
+  notes?: string;
+}
+
+export interface Draft {
+  savedAt: string;
+  presetName: string;
+  values: FormValues;
+}
+
+/** One ranked repair, already computed by the repair planner (working units). */
+export interface RepairRow {
+  rank: number;
+  kind: string;
+  title: string;
+  feasible: boolean;
+  meetsMargin: boolean;
+  reason?: string;
+  marginStripping?: number;
+  marginBoltBreaksFirst?: number;
+  drill?: number;
+  tapThread?: string;
+  holeDepth?: number;
+  torque?: number;
+  work?: string;
+  steps?: string[];
+}
+
+export interface RepairPlan {
+  rows: RepairRow[];
+  rankingRule: string;
+}
+
+export interface ReportMeta {
+  presetName: string;
+  date: Date;
+  units: 'si' | 'us';
+}
+
+export interface PresetPort {
+  list(): PresetEntry[];
+  load(name: string): LoadedPreset;
+  /** Save under a name; throws when it exists and overwrite is false, or is read-only. */
+  save(name: string, values: FormValues, options: {overwrite: boolean; notes?: string}): void;
+  rename(from: string, to: string): void;
+  duplicate(from: string, to: string): void;
+  remove(name: string): void;
+  /** Import presets from a JSON file; returns the names imported. */
+  importFile(path: string): string[];
+  /** Export one preset (or all when name is undefined) to a JSON file. */
+  exportFile(path: string, name: string | undefined, overwrite: boolean): void;
+}
+
+export interface DraftPort {
+  load(): Draft | undefined;
+  save(draft: Draft): void;
+  clear(): void;
+}
+
+export interface WorkbenchServices {
+  /** The joint check; throws on input it cannot compute (unknown thread, ...). */
+  check(input: JointInput): CheckResult;
+  /** Designations for the type-ahead, best match first. */
+  designations(query: string, limit: number): string[];
+  picks(source: PickSource): PickItem[];
+  /** The ranked repair list; undefined while the repair planner is not in this build. */
+  repairs?: (joint: JointInput, hole: RepairInput) => RepairPlan;
+  presets: PresetPort;
+  draft: DraftPort;
+  /** The work-order report as text or Markdown; undefined while the report module is not in this build. */
+  report?: (format: 'text' | 'markdown', result: CheckResult, input: JointInput, meta: ReportMeta) => string;
+  /** Write a file; throws when it exists and overwrite is false. */
+  writeFile(path: string, text: string, overwrite: boolean): void;
+  /** Where the preset name comes from at start: the shipped default preset. */
+  defaultPreset: string;
+  now(): Date;
+}
