@@ -1,0 +1,143 @@
+/**
+ * Small settings through conf 15: settings.json in the config folder (conf's
+ * cwd, so no "-nodejs" suffix). zod checks every field on read; a broken file
+ * never throws: it is moved aside and defaults are used, with a warning.
+ * conf's own schema, migrations and clearInvalidConfig are not used (they
+ * throw or wipe the file; see the terminal notes).
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import Conf from 'conf';
+import {z} from 'zod';
+import {StoreError} from './errors.js';
+import {FILES, fileStamp} from './paths.js';
+import {describeFsError} from './file-ops.js';
+import {describeZodError} from './schema.js';
+
+export const SettingsSchema = z.object({
+  /** Display units; JSON output is always SI. */
+  units: z.enum(['si', 'us']).default('si'),
+  /** ASCII borders and symbols in the workbench. */
+  ascii: z.boolean().default(false),
+  /** The preset the workbench had open last. */
+  lastPreset: z.string().min(1).max(64).optional(),
+  /** Default tightening-method scatter factor alphaA (1 = friction range only). */
+  scatterDefault: z.number().min(1).max(4).default(1),
+});
+export type Settings = z.output<typeof SettingsSchema>;
+
+const FIELD_RULE: Record<keyof Settings, string> = {
+  units: 'si or us',
+  ascii: 'true or false',
+  lastPreset: 'a preset name of 1 to 64 characters',
+  scatterDefault: 'a number from 1 to 4',
+};
+
+export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});
+
+export interface SettingsHandle {
+  get(): Settings;
+  /** Change some settings; throws StoreError naming the field for a bad value. */
+  set(patch: Partial<Settings>): void;
+  warnings(): string[];
+  readonly file: string;
+}
+
+type Store = Record<string, unknown>;
+
+export function openSettings(dir: string): SettingsHandle {
+  const file = path.join(dir, FILES.settings);
+  const notes: string[] = [];
+  const warn = (m: string) => {
+    if (!notes.includes(m)) notes.push(m);
+  };
+  let memory: Store | undefined;
+  const make = () => new Conf<Store>({cwd: dir, configName: 'settings', projectSuffix: '', projectName: 'tapwright'});
+  let conf: Conf<Store> | undefined;
+
+  const moveAside = (why: string): void => {
+    const aside = `${file}.corrupt-${fileStamp()}`;
+    try {
+      fs.renameSync(file, aside);
+      warn(`settings file was ${why}; moved aside to ${aside}; using default settings`);
+    } catch (e) {
+      warn(`settings file ${file} was ${why} and cannot be moved aside (${describeFsError(e)}); using default settings`);
+    }
+  };
+  try {
+    conf = make();
+  } catch (e) {
+    if (e instanceof SyntaxError && fs.existsSync(file)) {
+      moveAside('not valid JSON');
+      try {
+        conf = make();
+      } catch (e2) {
+        warn(`cannot open settings in ${dir} (${describeFsError(e2)}); using defaults for this session`);
+      }
+    } else {
+      warn(`cannot open settings in ${dir} (${describeFsError(e)}); using defaults for this session`);
+    }
+  }
+  if (!conf) memory = {};
+
+  function raw(): Store {
+    if (memory) return memory;
+    try {
+      const s = conf!.store as unknown;
+      if (typeof s !== 'object' || s === null || Array.isArray(s)) {
+        moveAside('not an object');
+        return {};
+      }
+      return {...(s as Store)};
+    } catch (e) {
+      if (e instanceof SyntaxError) moveAside('not valid JSON');
+      else warn(`cannot read ${file} (${describeFsError(e)}); using default settings`);
+      return {};
+    }
+  }
+
+  return {
+    file,
+    get() {
+      const r = raw();
+      const out: Record<string, unknown> = {...DEFAULT_SETTINGS};
+      for (const key of Object.keys(SettingsSchema.shape) as Array<keyof Settings>) {
+        if (!(key in r)) continue;
+        const field = SettingsSchema.shape[key].safeParse(r[key]);
+        if (field.success) out[key] = field.data;
+        else warn(`${file}: ${key} ${JSON.stringify(r[key])} is not accepted (${FIELD_RULE[key]}); using ${JSON.stringify(DEFAULT_SETTINGS[key]) ?? 'nothing'}`);
+      }
+      return out as Settings;
+    },
+    set(patch) {
+      const checked = SettingsSchema.partial().strict().safeParse(patch);
+      if (!checked.success) {
+        const key = checked.error.issues[0]?.path[0];
+        const rule = typeof key === 'string' && key in FIELD_RULE ? ` (accepted: ${FIELD_RULE[key as keyof Settings]})` : '';
+        throw new StoreError(`setting not changed: ${describeZodError(checked.error)}${rule}`);
+      }
+      const keys = Object.keys(patch) as Array<keyof Settings>;
+      if (memory || !conf) {
+        for (const k of keys) {
+          if (patch[k] === undefined) delete memory![k];
+          else memory![k] = patch[k];
+        }
+        return;
+      }
+      try {
+        raw(); // moves a file broken since start-up aside before conf reads it again
+        for (const k of keys) {
+          if (patch[k] === undefined) conf.delete(k);
+        }
+        const defined = Object.fromEntries(keys.filter(k => patch[k] !== undefined).map(k => [k, patch[k]]));
+        if (Object.keys(defined).length) conf.set(defined);
+      } catch (e) {
+        memory = {...raw(), ...patch};
+        warn(`cannot save settings to ${file} (${describeFsError(e)}); the change holds for this session only`);
+      }
+    },
+    warnings() {
+      return [...notes];
+    },
+  };
+}

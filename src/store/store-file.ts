@@ -1,0 +1,194 @@
+/**
+ * Reading and writing presets.json: per-item validation with quarantine,
+ * migration of older versions, and recovery of a damaged file.
+ * Pure reads here; the caller holds the lock around anything that writes.
+ */
+import fs from 'node:fs';
+import {
+  CURRENT_SCHEMA_VERSION,
+  PresetSchema,
+  QuarantineEntrySchema,
+  StoreDocSchema,
+  describeZodError,
+  type Preset,
+  type QuarantineEntry,
+} from './schema.js';
+import {findForbiddenKey, isPlainObject, jsonDepth} from './guard.js';
+import {VersionError, migrate} from './migrate.js';
+import {salvage} from './salvage.js';
+import {isShippedName} from './shipped.js';
+import {errCode, writeFileAtomic} from './file-ops.js';
+import {fileStamp} from './paths.js';
+
+/** A store file bigger than this is not read (presets are about 1 kB each). */
+export const MAX_STORE_BYTES = 32 * 1024 * 1024;
+const STORE_MAX_DEPTH = 64;
+
+export interface Entry {
+  preset: Preset;
+  /** The item as stored: written back unchanged, so fields from a newer tapwright survive. */
+  raw: unknown;
+}
+
+export interface State {
+  status: 'ok' | 'missing' | 'damaged' | 'migrated' | 'newer';
+  entries: Entry[];
+  quarantine: QuarantineEntry[];
+  materials: unknown[];
+  inserts: unknown[];
+  /** The file's text as read (the content of the next .bak). */
+  text?: string;
+  /** Damaged: what was wrong. Newer: the version message. */
+  reason?: string;
+  fromVersion?: number;
+  /** Presets taken from presets.json.bak during a recovery. */
+  fromBackup?: number;
+}
+
+export const keyOf = (name: string): string => name.trim().toLowerCase();
+
+function emptyState(status: State['status']): State {
+  return {status, entries: [], quarantine: [], materials: [], inserts: []};
+}
+
+/** Split raw items into valid entries and quarantine, never dropping anything. */
+function itemize(state: State, items: unknown[], quarantine: unknown[], now: Date): void {
+  const at = now.toISOString();
+  for (const q of quarantine) {
+    const r = QuarantineEntrySchema.safeParse(q);
+    state.quarantine.push(r.success ? r.data : {reason: 'unreadable quarantine entry', at, raw: q});
+  }
+  const seen = new Set<string>();
+  items.forEach((raw, i) => {
+    const name = isPlainObject(raw) && typeof raw.name === 'string' ? raw.name : undefined;
+    const hold = (reason: string) => state.quarantine.push({...(name !== undefined ? {name} : {}), reason, at, raw});
+    const bad = findForbiddenKey(raw);
+    if (bad !== undefined) return hold(`item ${i + 1} has the forbidden key ${bad}`);
+    const r = PresetSchema.safeParse(raw);
+    if (!r.success) return hold(describeZodError(r.error));
+    const key = keyOf(r.data.name);
+    if (seen.has(key)) return hold(`a second preset named "${r.data.name}"`);
+    if (isShippedName(r.data.name)) return hold(`"${r.data.name}" is the name of a shipped demo preset`);
+    seen.add(key);
+    state.entries.push({preset: r.data, raw});
+  });
+}
+
+function readText(file: string): string | undefined {
+  try {
+    const size = fs.statSync(file).size;
+    if (size > MAX_STORE_BYTES) return `\u0000too-big:${size}`;
+    return fs.readFileSync(file, 'utf8');
+  } catch (e) {
+    if (errCode(e) === 'ENOENT') return undefined;
+    throw e;
+  }
+}
+
+/** Read and classify the store file (no writes). A damaged file comes back salvaged. */
+export function readState(file: string, now: Date): State {
+  const text = readText(file);
+  if (text === undefined) return emptyState('missing');
+  if (text.startsWith('\u0000too-big:')) {
+    const s = emptyState('damaged');
+    s.reason = `bigger than ${MAX_STORE_BYTES / 1024 / 1024} MiB`;
+    return s;
+  }
+  const damaged = (reason: string): State => recover(file, text, reason, now);
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  if (body.trim() === '') return damaged('empty');
+  if (jsonDepth(body) > STORE_MAX_DEPTH) return damaged('nested too deep');
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(body);
+  } catch {
+    return damaged('not valid JSON (truncated or corrupt)');
+  }
+  let migrated: {doc: Record<string, unknown>; from: number};
+  try {
+    migrated = migrate(parsed);
+  } catch (e) {
+    if (e instanceof VersionError && isPlainObject(parsed) && typeof parsed.schemaVersion === 'number' && parsed.schemaVersion > CURRENT_SCHEMA_VERSION) {
+      const s = emptyState('newer');
+      s.reason = e.message;
+      s.text = text;
+      return s;
+    }
+    return damaged(e instanceof Error ? e.message : String(e));
+  }
+  const doc = StoreDocSchema.safeParse(migrated.doc);
+  if (!doc.success) return damaged(`wrong layout (${describeZodError(doc.error)})`);
+  const s = emptyState(migrated.from < CURRENT_SCHEMA_VERSION ? 'migrated' : 'ok');
+  s.fromVersion = migrated.from;
+  s.text = text;
+  s.materials = doc.data.materials;
+  s.inserts = doc.data.inserts;
+  itemize(s, doc.data.presets, doc.data.quarantine, now);
+  return s;
+}
+
+/** Salvage a damaged file, topped up from presets.json.bak. */
+function recover(file: string, text: string, reason: string, now: Date): State {
+  const s = emptyState('damaged');
+  s.reason = reason;
+  s.text = text;
+  const found = salvage(text);
+  itemize(s, found.presets, found.quarantine, now);
+  const bak = `${file}.bak`;
+  if (fs.existsSync(bak)) {
+    let fromBak = 0;
+    try {
+      const b = readState(bak, now);
+      if (b.status === 'ok' || b.status === 'migrated') {
+        const have = new Set(s.entries.map(e => keyOf(e.preset.name)));
+        for (const e of b.entries) {
+          if (!have.has(keyOf(e.preset.name))) {
+            s.entries.push(e);
+            fromBak++;
+          }
+        }
+      }
+    } catch {
+      /* an unreadable backup adds nothing */
+    }
+    s.fromBackup = fromBak;
+  }
+  return s;
+}
+
+export function serialize(s: State): string {
+  const doc = {
+    schemaVersion: CURRENT_SCHEMA_VERSION,
+    presets: s.entries.map(e => e.raw),
+    quarantine: s.quarantine,
+    materials: s.materials,
+    inserts: s.inserts,
+  };
+  return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+/**
+ * Write the state (caller holds the lock). A good previous file becomes
+ * presets.json.bak; a damaged one is kept as presets.json.corrupt-<time>; a
+ * file of an older version is kept as presets.json.schema<N>-<time>.
+ * Returns the path of the file kept aside, if any.
+ */
+export function writeState(file: string, s: State, now: Date): string | undefined {
+  let aside: string | undefined;
+  if (s.status === 'damaged') {
+    aside = `${file}.corrupt-${fileStamp(now)}`;
+    if (s.text !== undefined) writeFileAtomic(aside, s.text);
+    else fs.renameSync(file, aside);
+  } else if (s.status === 'migrated' && s.text !== undefined) {
+    aside = `${file}.schema${s.fromVersion}-${fileStamp(now)}`;
+    writeFileAtomic(aside, s.text);
+  } else if (s.status === 'ok' && s.text !== undefined) {
+    writeFileAtomic(`${file}.bak`, s.text);
+  }
+  const out = serialize(s);
+  writeFileAtomic(file, out);
+  s.status = 'ok';
+  s.text = out;
+  delete s.reason;
+  return aside;
+}
