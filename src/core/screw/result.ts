@@ -1,0 +1,79 @@
+/**
+ * Result of a power-screw check. SI working units: mm, N, N·m, MPa, degrees.
+ * The JSON contract of `tapwright screw --json` is this object.
+ */
+import type {Flag, ThreadSpec} from '../types.js';
+import type {EndCondition} from './buckling.js';
+
+export interface ScrewResult {
+  thread: ThreadSpec;
+  geometry: {
+    major: number;
+    pitch: number;
+    starts: number;
+    meanDiameter: number;
+    rootDiameter: number;
+    nutMinorDiameter: number;
+    nutMajorDiameter: number;
+    flankAngle: number;
+    engagementDepth: number;
+    source: string;
+  };
+  /** Lead, mm. */
+  lead: number;
+  /** Lead angle at the mean diameter, degrees. */
+  leadAngle: number;
+  friction: {thread: {min: number; max: number}; collar: number; collarDiameter: number};
+  /** Torques, N·m. raise and lower include the collar. */
+  torque: {
+    raise: number;
+    lower: number;
+    collar: number;
+    raiseThread: number;
+    lowerThread: number;
+  };
+  /** Raising efficiency with the collar, F l / (2 pi T_raise). */
+  efficiency: number;
+  /** Raising efficiency of the thread alone. */
+  threadEfficiency: number;
+  /** Thread alone holds the load (lowering thread torque > 0 at the lowest friction). */
+  selfLocking: boolean;
+  /** Thread friction below which the thread alone back-drives: tan(lambda) cos(alpha). */
+  selfLockingFriction: number;
+  stress: {
+    body: {axial: number; torsion: number; vonMises: number};
+    firstThread: {
+      bearing: number;
+      bending: number;
+      shear: number;
+      vonMises: number;
+      maxShear: number;
+      principal: [number, number, number];
+      share: number;
+    };
+  };
+  nut: {
+    material: string;
+    materialSource: string;
+    engagedThreads: number;
+    bearingPressure: number;
+    allowablePressure: {min: number; max: number; condition: string; source: string} | null;
+    stripping: {nutForce: number; screwForce: number; nutArea: number; screwArea: number; weaker: 'nut' | 'screw'; margin: number};
+  };
+  screw: {material: string; materialSource: string; yield: number; rm: number; elasticModulus: number};
+  buckling: {
+    checked: boolean;
+    /** Critical load, N; null when not checked (tension, or no length given). */
+    criticalLoad: number | null;
+    method: 'euler' | 'johnson' | null;
+    slenderness: number | null;
+    transitionSlenderness: number | null;
+    ends: EndCondition;
+    endConstant: number;
+    margin: number | null;
+    source: string;
+  };
+  flags: Flag[];
+  sources: string[];
+  notes: string[];
+}
