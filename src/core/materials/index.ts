@@ -142,3 +142,13 @@ function describeRange(rows: {sizeMinMm?: number | undefined; sizeMaxMm?: number
   const hi = Math.max(...rows.map(r => r.sizeMaxMm ?? Infinity));
   return `${fmtMm(lo)} to ${fmtMm(hi)} mm nominal diameter`;
 }
+
+/** Every tabulated hexagon head row (metric, mm), smallest first. */
+export function listHexHeads(): {d: number; dwMin: number; clearanceHole: number; provenance: Provenance}[] {
+  return DATA.hexHeads.map(h => ({...h}));
+}
+
+/** Every tabulated ISO 4032 nut row (mm), smallest first. */
+export function listNutDimensions(): {d: number; heightMin: number; heightMax: number; flats: number; provenance: Provenance}[] {
+  return DATA.nutDimensions.map(n => ({...n}));
+}
