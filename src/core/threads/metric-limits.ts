@@ -42,9 +42,9 @@ export function metricTolerances(
   P: number,
   ext: MetricClass,
   int: MetricClass,
-): {tol: MetricTolerances; method: 'table' | 'formula'; source: string; missing: string[]} {
+): {tol: MetricTolerances; method: 'table' | 'formula'; source: string; checked: boolean; missing: string[]} {
   const t = tableTolerances(d, P, ext, int);
-  if (t.complete) return {tol: t.values as MetricTolerances, method: 'table', source: t.source, missing: []};
+  if (t.complete) return {tol: t.values as MetricTolerances, method: 'table', source: t.source, checked: t.checked, missing: []};
   const f: MetricTolerances = {
     es: formulaDeviation(ext.position, P),
     Td: formulaTd(P, ext.crestGrade),
@@ -56,7 +56,8 @@ export function metricTolerances(
   return {
     tol: f,
     method: 'formula',
-    source: 'ISO 965-1 generating formulas (from memory of ISO 965-1 clause 9), rounded to 1 µm',
+    source: 'ISO 965-1 generating formulas (from memory of ISO 965-1), rounded to 1 µm',
+    checked: false,
     missing: t.missing,
   };
 }
@@ -66,7 +67,7 @@ export function metricLimits(d: number, P: number, ext: MetricClass, int: Metric
   const H = 0.8660254037844386 * P;
   const d2 = d - 0.649519052838329 * P;
   const D1 = d - 1.0825317547305482 * P;
-  const {tol, method, source, missing} = metricTolerances(d, P, ext, int);
+  const {tol, method, source, checked, missing} = metricTolerances(d, P, ext, int);
   const es = tol.es / 1000;
   const EI = tol.EI / 1000;
   const pitchMax = r3(d2 + es);
@@ -95,12 +96,15 @@ export function metricLimits(d: number, P: number, ext: MetricClass, int: Metric
         'the published tables round differently, so these may differ from ISO 965-2/-3 by a few µm. Check against the standard before gauging.',
     );
   }
+  if (method === 'table' && !checked) {
+    notes.push('Grades other than 6 and positions e, f, G come from memory of the ISO 965-1 tables: verify against the standard before gauging.');
+  }
   notes.push('External minor diameter min assumes the minimum root radius 0.125P of ISO 965-1.');
   return {
     external,
     internal,
     tolerances: tol,
-    provenance: {source, kind: method === 'table' ? 'standard' : 'formula', method},
+    provenance: {source, kind: method === 'formula' ? 'formula' : checked ? 'standard' : 'memory', method},
     notes,
   };
 }
