@@ -1,0 +1,74 @@
+/**
+ * The repair planner with its dependencies passed in (see context.ts); index.ts
+ * wires the real core. Fast: a few dozen calls of the mechanics core.
+ */
+import type {JointInput} from '../joint/input.js';
+import {CAUTION_LINES} from '../cautions.js';
+import type {PlanContext} from './common.js';
+import type {RepairDeps} from './context.js';
+import {plainDesignation, HELICAL_SOURCES, type ThreadBasics} from './helical.js';
+import {HOLE_SOURCES} from './holes.js';
+import {helicalOptions, solidOptions} from './inserts.js';
+import type {RepairInput} from './input.js';
+import {rankOptions, REPAIR_RANKING_RULE} from './rank.js';
+import {oversizeOptions, throughBoltOption} from './resize.js';
+import {longerEngagementOption, reuseOption} from './same-thread.js';
+import type {RepairPlan} from './types.js';
+
+/** Build the per-call context. Throws only when the joint itself is rejected by the mechanics core. */
+export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairInput): PlanContext {
+  const base = deps.check(joint);
+  const spec = base.geometry.spec;
+  const thread: ThreadBasics = {family: spec.family, nominal: base.geometry.nominal, pitch: base.geometry.pitch, tpi: spec.tpi, sizeLabel: spec.sizeLabel, series: spec.series};
+  const stripped = repair.holeState === 'stripped';
+  const reach = joint.engagement;
+  const strippedDepth = stripped ? Math.min(repair.strippedDepth ?? reach, reach) : 0;
+  // One pitch at the edge of the damage is lost when the thread is cleaned up (common practice, no source).
+  const goodStart = stripped ? Math.max(joint.chamfer, strippedDepth + (strippedDepth > 0 ? thread.pitch : 0)) : joint.chamfer;
+  return {
+    deps, joint, repair, base, thread,
+    plain: plainDesignation(thread),
+    required: repair.margin ?? joint.requiredMargin,
+    reach, goodStart, stripped,
+  };
+}
+
+/**
+ * Every repair option for the joint and the state of its hole, ranked by
+ * REPAIR_RANKING_RULE. Lengths mm, forces N, torque N·m. Each option's margins
+ * come from the mechanics core on a modified joint (see the option modules).
+ */
+export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: RepairInput): RepairPlan {
+  const ctx = planContext(deps, joint, repair);
+  const reuse = reuseOption(ctx);
+  const options = [
+    reuse,
+    longerEngagementOption(ctx, reuse),
+    ...helicalOptions(ctx),
+    ...solidOptions(ctx),
+    ...oversizeOptions(ctx),
+    throughBoltOption(ctx),
+  ];
+  const notes: string[] = [];
+  if (ctx.stripped) notes.push(`stripped from the surface to ${Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach)} mm; good thread assumed below ${ctx.goodStart.toFixed(1)} mm`);
+  if (repair.depthAvailable === undefined) notes.push(repair.through ? 'part thickness not given: depths are not checked' : 'depth available not given: hole depths are not checked');
+  if (repair.wall === undefined) notes.push('edge distance not given: options that remove material are not checked against the wall');
+  const base = ctx.base;
+  return {
+    thread: base.geometry.spec.designation,
+    requiredMargin: ctx.required,
+    hole: {
+      state: repair.holeState,
+      strippedDepth: ctx.stripped ? Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach) : null,
+      through: repair.through,
+      depthAvailable: repair.depthAvailable ?? null,
+      wall: repair.wall ?? null,
+    },
+    asIs: {margin: {stripping: base.margin.stripping, boltBreaksFirst: base.margin.boltBreaksFirst}, flags: base.flags},
+    options: rankOptions(options),
+    rankingRule: REPAIR_RANKING_RULE,
+    notes,
+    sources: [...Object.values(HELICAL_SOURCES), ...Object.values(HOLE_SOURCES), ...base.sources],
+    cautions: CAUTION_LINES,
+  };
+}
