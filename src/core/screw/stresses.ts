@@ -33,7 +33,7 @@ export function vonMises3D(s: StressTensor): number {
 
 /**
  * Principal stresses, largest first: roots of the characteristic cubic
- * sigma^3 - I1 sigma^2 + I2 sigma - I3 = 0 (Shigley 9th ed. Eq. 3-15), solved in the
+ * sigma^3 - I1 sigma^2 + I2 sigma - I3 = 0 (Shigley 9th ed. section 3-7; Eq. 3-15 from memory), solved in the
  * closed trigonometric form for a symmetric matrix.
  */
 export function principalStresses(s: StressTensor): [number, number, number] {
