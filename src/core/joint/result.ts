@@ -54,6 +54,11 @@ export interface CheckResult {
     /** Assembly von Mises stress in the threaded section at max preload, MPa. */
     assemblyVonMises: number;
     method: 'friction' | 'nut-factor';
+    /** Effective bearing diameter DKm used, mm, and where it came from. */
+    bearingDiameter: number;
+    bearingSource: 'input' | 'standard' | 'estimate';
+    /** Thread torque at the largest preload, N·m. */
+    threadTorque: number;
   };
   stress: {
     firstThread: StressSet;
@@ -61,6 +66,11 @@ export interface CheckResult {
   };
   /** Fraction of the load carried by each engaged thread, first (loaded face) first. */
   loadShare: number[];
+  /** Share used for the first-thread stresses (0.38 from 6 threads, else the spring-chain share) and the chain parameter. */
+  firstThreadShare: number;
+  loadShareBeta: number;
+  /** Largest axial load on the bolt used for the thread and shank stresses: max preload + service load, N. */
+  boltLoad: number;
   stripping: {
     external: StrippingSide;
     internal: StrippingSide;
@@ -75,6 +85,12 @@ export interface CheckResult {
     engagedThreads: number;
     /** Which limits of size the areas were computed at. */
     limitsUsed: 'worst-case' | 'basic';
+    /** The least-material limits the areas were computed at, mm. */
+    limits: {knMax: number; esMin: number; dsMin: number; enMax: number};
+    /** FED-STD-H28/2B Formula 1 length Le (equal strengths) and the strength ratio J. */
+    fedStd: {le: number; j: number};
+    /** Alexander (1977) / VDI 2230 Part 1 factors and stripping forces at the effective engagement (from memory). */
+    alexander: {rs: number; c1: number; c2: number; c3: number; externalForce: number; internalForce: number};
   };
   margin: {
     /** Weaker thread's stripping force / largest load it can see. */
@@ -86,6 +102,8 @@ export interface CheckResult {
     firstThreadYieldInternal: number;
   };
   flags: Flag[];
+  /** Plain-language notes on defaults and data used. */
+  notes: string[];
   /** Sources of every method used, for the report and the help screen. */
   sources: string[];
 }

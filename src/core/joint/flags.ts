@@ -1,0 +1,177 @@
+/**
+ * Flag rules for a checked joint. Each rule: a kebab-case code, a level
+ * (info | watch | fail) and a message in shop language carrying the number behind it.
+ * Thresholds are exported so the tests can check both sides of each.
+ */
+import type {Flag} from '../types.js';
+
+/** Threads from which the load is shared as in a long engagement (Shigley 9th ed. p. 419: the seventh thread carries nothing). */
+export const SHORT_ENGAGEMENT_THREADS = 6;
+/** Assembly utilisation above which the bolt yields while it is tightened (von Mises = Rp0.2). */
+export const YIELD_UTILISATION = 1;
+/** Incomplete threads at the bottom of a blind tapped hole: 4 pitches (plug-tap chamfer; the same 4P allowance appears in the ASME B18.29.2M minimum drill depth). */
+export const BLIND_HOLE_INCOMPLETE_PITCHES = 4;
+
+/** Everything the rules look at; forces N, lengths mm. */
+export interface FlagContext {
+  internalKind: 'tapped' | 'nut';
+  /** Largest preload in the range and the service load, N. */
+  maxPreload: number;
+  serviceLoad: number;
+  weaker: 'external' | 'internal';
+  weakerForce: number;
+  boltBreakForce: number;
+  requiredMargin: number;
+  engagedThreads: number;
+  firstShare: number;
+  effectiveEngagement: number;
+  requiredFedStd: number;
+  requiredAlexander: number;
+  utilisation: number;
+  utilisationLimit: number;
+  engagement: number;
+  pitch: number;
+  holeDepth?: number;
+  isStandardPitch: boolean;
+  designation: string;
+  modelRangeNotes: string[];
+  bearingEstimated: boolean;
+  bearingDiameter: number;
+}
+
+const kN = (n: number): string => `${(n / 1000).toFixed(n >= 100000 ? 0 : n >= 10000 ? 1 : 2)} kN`;
+const mm = (x: number): string => `${x.toFixed(x >= 100 ? 0 : 1)} mm`;
+const pct = (x: number): string => `${Math.round(x * 100)} %`;
+
+function side(c: FlagContext): string {
+  return c.weaker === 'external' ? 'the bolt thread' : c.internalKind === 'nut' ? 'the nut thread' : 'the tapped thread';
+}
+
+export function stripsAtPreload(c: FlagContext): Flag | undefined {
+  const load = c.maxPreload + c.serviceLoad;
+  const allowed = c.weakerForce / c.requiredMargin;
+  if (load < allowed) return undefined;
+  const service = c.serviceLoad > 0 ? ` plus ${kN(c.serviceLoad)} service load` : '';
+  const margin = c.requiredMargin !== 1 ? ` (${kN(allowed)} with the required margin ${c.requiredMargin})` : '';
+  return {
+    code: 'strips-at-preload',
+    level: 'fail',
+    message: `Strips while tightening: up to ${kN(c.maxPreload)} preload${service} against ${kN(c.weakerForce)} to strip ${side(c)}${margin}.`,
+  };
+}
+
+export function shortEngagement(c: FlagContext): Flag | undefined {
+  if (c.engagedThreads >= SHORT_ENGAGEMENT_THREADS) return undefined;
+  return {
+    code: 'short-engagement',
+    level: 'watch',
+    message: `Only ${c.engagedThreads.toFixed(1)} full threads engaged (fewer than ${SHORT_ENGAGEMENT_THREADS}): the first thread takes about ${pct(c.firstShare)} of the load; the 38 % figure for long engagements is not conservative here.`,
+  };
+}
+
+export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
+  const ratio = c.weakerForce / c.boltBreakForce;
+  if (ratio < c.requiredMargin) {
+    return {
+      code: 'strips-before-break',
+      level: 'fail',
+      message: `Thread strips before the bolt breaks: ${side(c)} strips at ${kN(c.weakerForce)}, the bolt breaks at ${kN(c.boltBreakForce)} (ratio ${ratio.toFixed(2)}, required ${c.requiredMargin}).`,
+    };
+  }
+  if (c.effectiveEngagement < c.requiredAlexander) {
+    return {
+      code: 'strips-before-break',
+      level: 'watch',
+      message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${mm(c.requiredAlexander)} of full thread; only ${mm(c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
+    };
+  }
+  return undefined;
+}
+
+export function preloadOverYield(c: FlagContext): Flag | undefined {
+  if (c.utilisation > YIELD_UTILISATION) {
+    return {
+      code: 'preload-over-yield',
+      level: 'fail',
+      message: `Bolt yields while tightening: assembly stress reaches ${pct(c.utilisation)} of its yield at the low end of the friction range.`,
+    };
+  }
+  if (c.utilisation > c.utilisationLimit + 1e-9) {
+    return {
+      code: 'preload-over-yield',
+      level: 'watch',
+      message: `Assembly stress reaches ${pct(c.utilisation)} of bolt yield, above the ${pct(c.utilisationLimit)} limit.`,
+    };
+  }
+  return undefined;
+}
+
+export function engagementBeyondUseful(c: FlagContext): Flag | undefined {
+  const needed = Math.max(c.requiredFedStd, c.requiredAlexander);
+  if (c.effectiveEngagement <= needed || c.engagedThreads <= SHORT_ENGAGEMENT_THREADS) return undefined;
+  return {
+    code: 'engagement-beyond-useful',
+    level: 'info',
+    message: `${mm(c.effectiveEngagement)} of full thread engaged; ${mm(needed)} is enough by both methods. The extra ${mm(c.effectiveEngagement - needed)} adds nothing at the first thread.`,
+  };
+}
+
+export function blindHoleTooShallow(c: FlagContext): Flag | undefined {
+  if (c.holeDepth === undefined || c.internalKind !== 'tapped') return undefined;
+  const full = c.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * c.pitch;
+  if (c.engagement > c.holeDepth) {
+    return {
+      code: 'blind-hole-too-shallow',
+      level: 'fail',
+      message: `Bolt bottoms out: ${mm(c.engagement)} of bolt goes into a ${mm(c.holeDepth)} deep tapped hole; the torque goes into the bottom, not into preload.`,
+    };
+  }
+  if (c.engagement > full) {
+    return {
+      code: 'blind-hole-too-shallow',
+      level: 'watch',
+      message: `Bolt end runs into the last ${BLIND_HOLE_INCOMPLETE_PITCHES} incomplete threads of the blind hole (full thread to ${mm(Math.max(full, 0))}); only full thread is counted.`,
+    };
+  }
+  return undefined;
+}
+
+export function nonstandardPitch(c: FlagContext): Flag | undefined {
+  if (c.isStandardPitch) return undefined;
+  return {
+    code: 'nonstandard-pitch',
+    level: 'watch',
+    message: `${c.designation} is a special pitch: check that taps, gauges and mating parts exist for it.`,
+  };
+}
+
+export function outsideModelRange(c: FlagContext): Flag[] {
+  return c.modelRangeNotes.map(n => ({code: 'outside-model-range', level: 'watch' as const, message: `Outside the published range: ${n}.`}));
+}
+
+export function bearingDiameterEstimated(c: FlagContext): Flag | undefined {
+  if (!c.bearingEstimated) return undefined;
+  return {
+    code: 'bearing-diameter-estimated',
+    level: 'info',
+    message: `Bearing diameter under the head estimated at ${mm(c.bearingDiameter)}; measure it and give it for a better torque.`,
+  };
+}
+
+/** Every rule, in display order. */
+export function jointFlags(c: FlagContext): Flag[] {
+  const out: Flag[] = [];
+  const push = (f: Flag | undefined): void => {
+    if (f) out.push(f);
+  };
+  push(stripsAtPreload(c));
+  push(stripsBeforeBreak(c));
+  push(preloadOverYield(c));
+  push(blindHoleTooShallow(c));
+  push(shortEngagement(c));
+  push(nonstandardPitch(c));
+  out.push(...outsideModelRange(c));
+  push(engagementBeyondUseful(c));
+  push(bearingDiameterEstimated(c));
+  return out;
+}

@@ -1,0 +1,183 @@
+/**
+ * checkJoint: the joint mechanics in one pure call. Tightening (VDI 2230 Part 1),
+ * first-thread and body stresses (Shigley 9th ed. section 8-2), per-thread load share
+ * (spring chain), stripping and required engagement (FED-STD-H28/2B; Alexander 1977 /
+ * VDI 2230), margins and flags. Working units: mm, N, N·m, MPa.
+ */
+import type {JointInput} from './input.js';
+import type {CheckResult} from './result.js';
+import {JointInputError} from './errors.js';
+import {resolveJoint, type ResolvedJoint} from './resolve.js';
+import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
+import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
+import {chainBeta, hexNutArea, tappedBodyArea, threadShares} from './load-share.js';
+import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
+import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags} from './flags.js';
+
+export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputDraft} from './input.js';
+export type {CheckResult} from './result.js';
+export {JointInputError} from './errors.js';
+export {resolveJoint} from './resolve.js';
+
+export const SOURCES: readonly string[] = [
+  'VDI 2230 Part 1: tightening torque, thread torque, permissible assembly preload (friction as defined in ISO 16047)',
+  'Shigley, Mechanical Engineering Design, 9th ed., section 8-2, Eqs. 8-7 to 8-12 and p. 419 (first thread 0.38 of the load); Eq. 5-14 (von Mises)',
+  'Spring-chain load share of the Sopwith (1948) / Yamamoto (1980) type, calibrated to the 0.38 first-thread share',
+  'FED-STD-H28/2B shear areas and Formula 1 with J (also Machinery\'s Handbook, "length of engagement"), least-material limits',
+  'Alexander (1977), as used in VDI 2230 Part 1: C1, C2, C3 factors (from memory)',
+];
+
+/** Full thread engaged, mm: the engaged length less the chamfer, cut to the nut height or the blind hole's full thread. */
+export function effectiveEngagement(input: JointInput, pitch: number, nutHeight: number | undefined): number {
+  let usable = input.engagement;
+  if (input.internal === 'nut' && nutHeight !== undefined) usable = Math.min(usable, nutHeight);
+  if (input.internal === 'tapped' && input.holeDepth !== undefined) {
+    usable = Math.min(usable, input.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * pitch);
+  }
+  return Math.max(0, usable - input.chamfer);
+}
+
+/** Check a joint. Throws JointInputError (with the field at fault) when it cannot be computed. */
+export function checkJoint(input: JointInput): CheckResult {
+  return checkResolved(input, resolveJoint(input));
+}
+
+/** Check a joint whose thread and materials are already resolved (for the repair planner and tests). */
+export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult {
+  const g = r.geometry;
+  const P = g.pitch;
+  if (input.chamfer >= input.engagement) {
+    throw new JointInputError('chamfer', `the chamfer (${input.chamfer} mm) must be shorter than the engaged length (${input.engagement} mm)`);
+  }
+  if (input.tightening === 'torque' && input.torque === undefined) throw new JointInputError('torque', 'tightening by torque needs the torque');
+  if (input.tightening === 'preload' && input.preload === undefined) throw new JointInputError('preload', 'tightening to a preload needs the preload');
+
+  const section: ThreadSection = {pitch: P, nominal: g.nominal, d2: g.pitchDiameter, d3: g.minorDiameterExternal, stressArea: g.stressArea};
+  const t = tighten({
+    section,
+    rp: r.bolt.rp,
+    mode: input.tightening,
+    ...(input.torque !== undefined ? {torqueNm: input.torque} : {}),
+    ...(input.preload !== undefined ? {preload: input.preload} : {}),
+    utilisation: input.utilisation,
+    muThread: input.muThread,
+    muHead: input.muHead,
+    ...(input.nutFactor !== undefined ? {nutFactor: input.nutFactor} : {}),
+    bearingDiameter: r.bearingDiameter,
+    scatter: input.scatter,
+  });
+
+  // Engagement and load share.
+  const le = effectiveEngagement(input, P, r.nut?.height);
+  const engagedThreads = le / P;
+  const beta = chainBeta({
+    nominal: g.nominal,
+    pitch: P,
+    boltArea: g.stressArea,
+    internalArea: r.nut ? hexNutArea(r.nut.flats, g.nominal) : tappedBodyArea(g.nominal),
+    boltModulus: r.bolt.elasticModulus,
+    internalModulus: r.internal.elasticModulus,
+  });
+  const loadShare = threadShares(engagedThreads, beta);
+  const firstShare = engagedThreads >= LONG_ENGAGEMENT_THREADS ? FIRST_THREAD_SHARE_LONG : (loadShare[0] ?? 1);
+
+  // Stresses at the largest bolt load: max preload plus the full service load (conservative).
+  const boltLoad = t.preload.max + input.serviceLoad;
+  const threadTorqueNmm = t.threadTorque * 1000;
+  const root = rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1});
+  const shank = shankStresses(boltLoad, threadTorqueNmm, g.stressArea, stressDiameter(section));
+  const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare);
+
+  // Stripping at the least-material limits.
+  const limits: StrippingLimits = {
+    knMax: g.limits.internal.minorMax,
+    esMin: g.limits.external.pitchMin,
+    dsMin: g.limits.external.majorMin,
+    enMax: g.limits.internal.pitchMax,
+    pitch: P,
+  };
+  const asS = externalShearAreaPerMm(limits) * le;
+  const asN = internalShearAreaPerMm(limits) * le;
+  const externalForce = r.bolt.shear * asS;
+  const internalForce = r.internal.shear * asN;
+  const boltBreakForce = g.stressArea * r.bolt.rm;
+  const weaker = externalForce <= internalForce ? 'external' : 'internal';
+  const weakerForce = Math.min(externalForce, internalForce);
+  const fed = fedStdEngagement(limits, g.stressArea, r.bolt.rm, r.internal.rm);
+  const alex = alexander(limits, r.bolt.shear, r.internal.shear, boltBreakForce, r.nut ? r.nut.flats / g.nominal : undefined);
+
+  const flags = jointFlags({
+    internalKind: input.internal,
+    maxPreload: t.preload.max,
+    serviceLoad: input.serviceLoad,
+    weaker,
+    weakerForce,
+    boltBreakForce,
+    requiredMargin: input.requiredMargin,
+    engagedThreads,
+    firstShare,
+    effectiveEngagement: le,
+    requiredFedStd: fed.required,
+    requiredAlexander: alex.required,
+    utilisation: t.utilisation,
+    utilisationLimit: input.utilisation,
+    engagement: input.engagement,
+    pitch: P,
+    ...(input.internal === 'tapped' && input.holeDepth !== undefined ? {holeDepth: input.holeDepth} : {}),
+    isStandardPitch: g.spec.isStandardPitch,
+    designation: g.spec.designation,
+    modelRangeNotes: alex.outOfRange,
+    bearingEstimated: r.bearingSource === 'estimate' && t.method === 'friction',
+    bearingDiameter: r.bearingDiameter,
+  });
+
+  return {
+    geometry: g,
+    materials: {
+      bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance},
+      internal: {id: r.internal.id, name: r.internal.name, rm: r.internal.rm, shear: r.internal.shear, provenance: r.internal.provenance},
+    },
+    tightening: {
+      preload: t.preload,
+      torque: t.torque,
+      utilisation: t.utilisation,
+      permissiblePreload: t.permissiblePreload,
+      permissibleTorque: t.permissibleTorque,
+      assemblyVonMises: t.assemblyVonMises,
+      method: t.method,
+      bearingDiameter: r.bearingDiameter,
+      bearingSource: r.bearingSource,
+      threadTorque: t.threadTorque,
+    },
+    stress: {
+      firstThread: {axial: root.axial, bending: root.bending, shear: root.shear, torsion: root.torsion, bearing: root.bearing, vonMises: root.vonMises},
+      shank,
+    },
+    loadShare,
+    firstThreadShare: firstShare,
+    loadShareBeta: beta,
+    boltLoad,
+    stripping: {
+      external: {force: externalForce, shearArea: asS, shearStrength: r.bolt.shear},
+      internal: {force: internalForce, shearArea: asN, shearStrength: r.internal.shear},
+      boltBreakForce,
+      weaker,
+      requiredEngagement: {fedStd: fed.required, alexander: alex.required},
+      effectiveEngagement: le,
+      engagedThreads,
+      limitsUsed: 'worst-case',
+      limits: {knMax: limits.knMax, esMin: limits.esMin, dsMin: limits.dsMin, enMax: limits.enMax},
+      fedStd: {le: fed.le, j: fed.j},
+      alexander: {rs: alex.rs, c1: alex.c1, c2: alex.c2, c3: alex.c3, externalForce: alex.externalPerMm * le, internalForce: alex.internalPerMm * le},
+    },
+    margin: {
+      stripping: weakerForce / boltLoad,
+      boltBreaksFirst: weakerForce / boltBreakForce,
+      firstThreadYieldBolt: root.vonMises / r.bolt.rp,
+      firstThreadYieldInternal: internalVm / r.internal.yield,
+    },
+    flags,
+    notes: [...r.notes, ...g.notes],
+    sources: [...SOURCES],
+  };
+}

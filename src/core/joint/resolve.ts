@@ -1,0 +1,177 @@
+/**
+ * Resolve a JointInput into numbers: thread geometry, the bolt and internal-thread
+ * materials, the nut, and the bearing diameter, each with where it came from.
+ * Throws JointInputError naming the input field for anything that cannot be resolved.
+ */
+import type {Provenance, ThreadGeometry} from '../types.js';
+import {parseThread, threadGeometry} from '../threads/index.js';
+import {boltGrade, boltGradeProblem, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, parentMaterial, listParentMaterials} from '../materials/index.js';
+import type {JointInput} from './input.js';
+import {JointInputError} from './errors.js';
+
+export interface ResolvedBolt {
+  id: string;
+  name: string;
+  rm: number;
+  rp: number;
+  shear: number;
+  shearRatio: number;
+  elasticModulus: number;
+  provenance: Provenance;
+}
+
+export interface ResolvedInternal {
+  id: string;
+  name: string;
+  rm: number;
+  shear: number;
+  /** Yield used for the first-thread check, MPa (Rm when no yield is known). */
+  yield: number;
+  elasticModulus: number;
+  provenance: Provenance;
+}
+
+export interface ResolvedJoint {
+  geometry: ThreadGeometry;
+  bolt: ResolvedBolt;
+  internal: ResolvedInternal;
+  /** Nut height and flats, mm (nut only). */
+  nut?: {height: number; flats: number};
+  /** Effective bearing diameter DKm, mm, and how it was found. */
+  bearingDiameter: number;
+  bearingSource: 'input' | 'standard' | 'estimate';
+  notes: string[];
+}
+
+/** Shear strength / Rm when a custom parent gives no shear strength: 0.6 (textbook assumption for steels, from memory). */
+export const DEFAULT_SHEAR_RATIO = 0.6;
+/** DKm / d for sizes without ISO 4014/ISO 273 data: about 1.27, the ratio of the tabulated defaults at M8 to M24 (approximation, common practice, no source). */
+export const BEARING_RATIO_ESTIMATE = 1.27;
+
+const USER: Provenance = {source: 'value given by the user', kind: 'user'};
+
+export function resolveGeometry(thread: string): ThreadGeometry {
+  const p = parseThread(thread);
+  if (!p.ok) {
+    const hint = p.suggestions && p.suggestions.length ? `; did you mean ${p.suggestions.slice(0, 4).join(', ')}?` : '';
+    throw new JointInputError('thread', `${p.error}${hint}`);
+  }
+  if (p.value.family !== 'metric' && p.value.family !== 'unified') {
+    throw new JointInputError('thread', `${p.value.designation} is a power-screw thread; check covers ISO metric and unified fastener threads (use tapwright screw)`);
+  }
+  try {
+    return threadGeometry(p.value);
+  } catch (e) {
+    throw new JointInputError('thread', e instanceof Error ? e.message : String(e));
+  }
+}
+
+function resolveBolt(input: JointInput, d: number): ResolvedBolt {
+  const g = boltGrade(input.boltGrade, d);
+  if (!g) throw new JointInputError('boltGrade', boltGradeProblem(input.boltGrade, d) ?? `unknown bolt grade "${input.boltGrade}"`);
+  let rm = g.rmMin;
+  let rp = g.rpMin;
+  let provenance: Provenance = g.provenance;
+  if (input.boltRm !== undefined && input.boltRp !== undefined) {
+    rm = input.boltRm;
+    rp = input.boltRp;
+    provenance = USER;
+  } else if (input.boltRm !== undefined) {
+    rm = input.boltRm;
+    rp = (g.rpMin / g.rmMin) * rm;
+    provenance = {source: `Rm given by the user; Rp0.2 scaled with the yield ratio of grade ${g.id}`, kind: 'user'};
+  } else if (input.boltRp !== undefined) {
+    rp = input.boltRp;
+    provenance = {source: `Rp0.2 given by the user; Rm of grade ${g.id}`, kind: 'user'};
+  }
+  if (rp >= rm) {
+    throw new JointInputError('boltRp', `bolt yield Rp0.2 ${rp} MPa must be below the tensile strength Rm ${rm} MPa; give both --bolt-rm and --bolt-rp, or a grade`);
+  }
+  return {id: g.id, name: g.name, rm, rp, shear: g.shearRatio * rm, shearRatio: g.shearRatio, elasticModulus: g.elasticModulus, provenance};
+}
+
+function resolveParent(input: JointInput, bolt: ResolvedBolt): ResolvedInternal {
+  const m = input.parent !== undefined ? parentMaterial(input.parent) : undefined;
+  if (input.parent !== undefined && !m) {
+    throw new JointInputError('parent', `unknown parent material "${input.parent}"; accepted: ${listParentMaterials().map(p => p.id).join(', ')}`);
+  }
+  if (!m && input.parentRm === undefined && input.parentShear === undefined) {
+    throw new JointInputError('parent', 'a tapped hole needs its material: give a parent material id, or its tensile strength Rm (and shear strength)');
+  }
+  if (!m) {
+    const rm = input.parentRm ?? (input.parentShear as number) / DEFAULT_SHEAR_RATIO;
+    const shear = input.parentShear ?? DEFAULT_SHEAR_RATIO * rm;
+    return {
+      id: 'custom',
+      name: 'custom parent material',
+      rm,
+      shear,
+      yield: rm,
+      elasticModulus: bolt.elasticModulus,
+      provenance: {
+        source: `strengths given by the user${input.parentShear === undefined ? '; shear = 0.6 Rm, textbook assumption, from memory' : ''}${input.parentRm === undefined ? '; Rm = shear / 0.6, from memory' : ''}; no yield given, compared against Rm; elastic modulus taken as the bolt's`,
+        kind: 'user',
+      },
+    };
+  }
+  const rm = input.parentRm ?? m.rm;
+  const shear = input.parentShear ?? m.shearRatio * rm;
+  const custom = input.parentRm !== undefined || input.parentShear !== undefined;
+  return {
+    id: m.id,
+    name: m.name,
+    rm,
+    shear,
+    yield: Math.min(rm, m.yield * (rm / m.rm)),
+    elasticModulus: m.elasticModulus,
+    provenance: custom ? {source: `${m.name} with strengths given by the user`, kind: 'user'} : m.provenance,
+  };
+}
+
+/** Resolve everything the mechanics need; throws JointInputError naming the field at fault. */
+export function resolveJoint(input: JointInput): ResolvedJoint {
+  const geometry = resolveGeometry(input.thread);
+  const d = geometry.nominal;
+  const notes: string[] = [];
+  const bolt = resolveBolt(input, d);
+  let internal: ResolvedInternal;
+  let nut: ResolvedJoint['nut'];
+  if (input.internal === 'nut') {
+    if (input.nutClass === undefined) throw new JointInputError('nutClass', 'a nut needs its property class (ISO 898-2 "8", "10", ... or SAE J995 "SAE-5", "SAE-8")');
+    const n = nutClass(input.nutClass, d);
+    if (!n) throw new JointInputError('nutClass', nutClassProblem(input.nutClass, d) ?? `unknown nut class "${input.nutClass}"`);
+    const dims = nutDimensions(d);
+    const height = input.nutHeight ?? dims?.heightMin;
+    const flats = input.nutFlats ?? dims?.flats;
+    if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${geometry.spec.sizeLabel}; give the nut height`);
+    if (flats === undefined) throw new JointInputError('nutFlats', `no tabulated width across flats for ${geometry.spec.sizeLabel}; give the nut's width across flats`);
+    if (flats <= d) throw new JointInputError('nutFlats', `width across flats ${flats} mm must exceed the thread diameter ${round(d)} mm`);
+    if (input.nutHeight === undefined && dims) notes.push(`Nut height ${dims.heightMin} mm (m min, ${dims.provenance.source}).`);
+    nut = {height, flats};
+    internal = {id: n.id, name: n.name, rm: n.rm, shear: n.shearRatio * n.rm, yield: n.rm, elasticModulus: bolt.elasticModulus, provenance: n.provenance};
+  } else {
+    internal = resolveParent(input, bolt);
+  }
+  let bearingDiameter: number;
+  let bearingSource: ResolvedJoint['bearingSource'];
+  if (input.bearingDiameter !== undefined) {
+    bearingDiameter = input.bearingDiameter;
+    bearingSource = 'input';
+  } else {
+    const h = geometry.spec.family === 'metric' ? hexHeadBearing(d) : undefined;
+    if (h) {
+      bearingDiameter = (h.dwMin + h.clearanceHole) / 2;
+      bearingSource = 'standard';
+      notes.push(`Bearing diameter ${round(bearingDiameter)} mm = (dw,min ${h.dwMin} + hole ${h.clearanceHole})/2 (${h.provenance.source}).`);
+    } else {
+      bearingDiameter = BEARING_RATIO_ESTIMATE * d;
+      bearingSource = 'estimate';
+      notes.push(`Bearing diameter estimated as ${BEARING_RATIO_ESTIMATE} d = ${round(bearingDiameter)} mm (no hexagon-head table for this size).`);
+    }
+  }
+  return {geometry, bolt, internal, ...(nut ? {nut} : {}), bearingDiameter, bearingSource, notes};
+}
+
+function round(x: number): string {
+  return String(Math.round(x * 100) / 100);
+}

@@ -1,0 +1,75 @@
+import {describe, expect, it} from 'vitest';
+import fc from 'fast-check';
+import {checkJoint, JointInputError, JointInputSchema, type JointInputDraft} from '../../../src/core/joint/index.js';
+
+const run = (d: JointInputDraft) => checkJoint(JointInputSchema.parse(d));
+const M10_NUT: JointInputDraft = {thread: 'M10x1.5-6H/6g', boltGrade: '8.8', internal: 'nut', nutClass: '8', engagement: 20, muThread: {min: 0.12, max: 0.12}, muHead: {min: 0.12, max: 0.12}};
+
+describe('checkJoint', () => {
+  it('M10 8.8 at 90 % with mu 0.12: 29.6 kN and 48.5 N·m (VDI 2230 Part 1 Table A1: 29.6 kN / 48 N·m, from memory)', () => {
+    const r = run(M10_NUT);
+    expect(r.tightening.preload.max / 1000).toBeCloseTo(29.6, 1);
+    expect(Math.abs(r.tightening.torque - 48)).toBeLessThanOrEqual(1); // from memory: 48 N·m
+    expect(r.tightening.utilisation).toBeCloseTo(0.9, 6);
+    expect(r.tightening.bearingSource).toBe('standard');
+    // Bolt break force As Rm = 58.0 x 800 = 46 400 N (ISO 898-1 minimum ultimate tensile load, M10 8.8).
+    expect(Math.abs(r.stripping.boltBreakForce - 46400)).toBeLessThan(50);
+  });
+
+  it('uses the least-material limits of the classes and says so (FED-STD-H28/2B)', () => {
+    const r = run(M10_NUT);
+    expect(r.stripping.limitsUsed).toBe('worst-case');
+    expect(r.stripping.limits.knMax).toBe(r.geometry.limits.internal.minorMax);
+    expect(r.stripping.limits.dsMin).toBe(r.geometry.limits.external.majorMin);
+  });
+
+  it('nut: the engagement is cut to the nut height (ISO 4032 m min by default)', () => {
+    const r = run(M10_NUT);
+    expect(r.stripping.effectiveEngagement).toBeLessThanOrEqual(8.4);
+    expect(r.stripping.engagedThreads).toBeCloseTo(r.stripping.effectiveEngagement / 1.5, 12);
+  });
+
+  it('first-thread share: 0.38 from 6 engaged threads (Shigley 9th ed. p. 419), else the chain share', () => {
+    const long = run({thread: 'M10', parent: 'S355', engagement: 15});
+    expect(long.firstThreadShare).toBe(0.38);
+    const short = run({thread: 'M10', parent: 'S355', engagement: 6});
+    expect(short.firstThreadShare).toBe(short.loadShare[0]);
+    expect(short.flags.map(f => f.code)).toContain('short-engagement');
+    const sum = long.loadShare.reduce((a, b) => a + b, 0);
+    expect(sum).toBeCloseTo(1, 12);
+  });
+
+  it('property: stripping forces grow with engagement (FED-STD-H28/2B areas are proportional to Le)', () => {
+    fc.assert(
+      fc.property(fc.double({min: 2, max: 60, noNaN: true}), fc.double({min: 0.1, max: 20, noNaN: true}), (le, extra) => {
+        const a = run({thread: 'M12', parent: 'S355', engagement: le});
+        const b = run({thread: 'M12', parent: 'S355', engagement: le + extra});
+        return b.stripping.external.force > a.stripping.external.force && b.stripping.internal.force > a.stripping.internal.force;
+      }),
+      {numRuns: 100},
+    );
+  });
+
+  it('unknown thread, grade, parent or nut class: JointInputError naming the field', () => {
+    const field = (d: JointInputDraft): string => {
+      try {
+        run(d);
+      } catch (e) {
+        if (e instanceof JointInputError) return e.field;
+        throw e;
+      }
+      return 'none';
+    };
+    expect(field({thread: 'M10x7', parent: 'S355', engagement: 10})).toBe('thread');
+    expect(field({thread: 'Tr20x4', parent: 'S355', engagement: 10})).toBe('thread');
+    expect(field({thread: 'M10', boltGrade: '99.9', parent: 'S355', engagement: 10})).toBe('boltGrade');
+    expect(field({thread: 'M10', parent: 'unobtainium', engagement: 10})).toBe('parent');
+    expect(field({thread: 'M10', engagement: 10})).toBe('parent');
+    expect(field({thread: 'M10', internal: 'nut', engagement: 10})).toBe('nutClass');
+    expect(field({thread: 'M10', internal: 'nut', nutClass: 'zz', engagement: 10})).toBe('nutClass');
+    expect(field({thread: 'M10', parent: 'S355', engagement: 10, chamfer: 10})).toBe('chamfer');
+    expect(field({thread: 'M10', parent: 'S355', engagement: 10, tightening: 'torque'})).toBe('torque');
+    expect(field({thread: 'M10', parent: 'S355', engagement: 10, tightening: 'preload'})).toBe('preload');
+    expect(field({thread: 'M10', parent: 'S355', engagement: 10, boltRp: 900})).toBe('boltRp');
+  });
+});
