@@ -1,13 +1,190 @@
-// Placeholder until the owning work lands; replaced by the real command.
+/**
+ * `tapwright threads <designation>`: basic geometry and limits of size of a
+ * thread designation. Text fits 80 columns with a unit on every number;
+ * JSON is always SI (mm, mm²).
+ */
 import type {Command} from '../command.js';
-import {EXIT} from '../io.js';
+import {EXIT, UsageError, type CliIo} from '../io.js';
+import {parseOptions, str} from '../args.js';
+import {parseThread, threadGeometry, ACCEPTED_FORMS} from '../../core/threads/index.js';
+import {CAUTION_SHORT} from '../../core/cautions.js';
+import type {ThreadGeometry, ThreadSpec} from '../../core/types.js';
+import type {UnitSystem} from '../../core/units.js';
+
+const WIDTH = 80;
+const IN = 25.4;
+
+const HELP = `tapwright threads - geometry and limits of size of a thread
+
+Usage:
+  tapwright threads <designation> [--units si|us] [--json]
+
+Designations (case and spaces do not matter; "x" or "×"):
+  ISO metric   M10  M10x1.25  M10x1.5-6g  M10x1.5-6H  M10x1.5-6H/6g  M8-5g6g
+               (no pitch: coarse pitch of ISO 261; no class: 6H/6g)
+  Unified      1/4-20 UNC-2A  #10-32 UNF-3B  1/2-13 UNC-2A/2B  5/16-24 UNF
+               0.250-28 UNF   (series UNC, UNF, UNEF or UN; no class: 2A/2B)
+  Power screw  Tr24x5  Tr40x14(P7)  1-5 ACME-2G  square 32x4
+               (basic data only here; see tapwright screw)
+A pitch outside the standard series is accepted as a special thread and
+marked so; its limits come from the tolerance formulas, labelled as such.
+
+Options:
+  --units U    si (mm) or us (inches); default si
+  --json       geometry and limits as JSON, always SI (mm, mm²)
+  --help       this text
+
+Shows the basic profile (d, P, H, d2, d3, D1), the tensile stress area and
+the minor-diameter area, and the limits of size of the external and internal
+thread for the tolerance classes, with the source of the limits.
+`;
+
+function wrap(text: string, first: string, indent: string): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let fresh = true;
+  for (const word of text.split(/\s+/).filter(Boolean)) {
+    const sep = fresh ? '' : ' ';
+    if (!fresh && (line + sep + word).length > WIDTH) {
+      lines.push(line);
+      line = indent + word;
+    } else {
+      line += sep + word;
+    }
+    fresh = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
+function len(mm: number | undefined, units: UnitSystem): string {
+  if (mm === undefined) return '-';
+  return units === 'us' ? `${(mm / IN).toFixed(4)} in` : `${mm.toFixed(3)} mm`;
+}
+
+function area(mm2: number, units: UnitSystem): string {
+  return units === 'us' ? `${(mm2 / (IN * IN)).toFixed(4)} in²` : `${mm2.toFixed(2)} mm²`;
+}
+
+function familyText(spec: ThreadSpec): string {
+  switch (spec.family) {
+    case 'metric':
+      return spec.isStandardPitch
+        ? `ISO metric, ${spec.series} pitch (ISO 261)`
+        : 'ISO metric, special pitch (not in ISO 261)';
+    case 'unified':
+      return spec.isStandardPitch ? `unified inch, ${spec.series} series (ASME B1.1)` : 'unified inch, UN special (ASME B1.1)';
+    case 'trapezoidal':
+      return 'ISO metric trapezoidal (ISO 2904)';
+    case 'acme':
+      return 'Acme, general purpose or centralizing (ASME B1.5)';
+    case 'square':
+      return 'square thread (no current standard series)';
+  }
+}
+
+function line(label: string, value: string, note = ''): string {
+  return `  ${label.padEnd(28)}${value.padStart(14)}${note ? `  ${note}` : ''}`;
+}
+
+function geometryText(g: ThreadGeometry, units: UnitSystem): string[] {
+  const s = g.spec;
+  const out: string[] = [];
+  out.push(`${s.designation}  ${familyText(s)}`);
+  out.push('');
+  out.push(line('nominal diameter d = D', len(g.nominal, units)));
+  const tpi = s.tpi !== undefined ? `${+s.tpi.toFixed(3)} threads per inch` : '';
+  out.push(line('pitch P', len(g.pitch, units), tpi));
+  out.push(line('fundamental triangle H', len(g.fundamentalHeight, units)));
+  out.push(line('pitch diameter d2 = D2', len(g.pitchDiameter, units), 'basic'));
+  out.push(line('minor diameter d3', len(g.minorDiameterExternal, units), 'external, basic'));
+  out.push(line('minor diameter D1', len(g.minorDiameterInternal, units), 'internal, basic'));
+  out.push(line('tensile stress area', area(g.stressArea, units), s.family === 'metric' ? 'As, ISO 898-1' : 'At, ASME B1.1'));
+  out.push(line('minor-diameter area', area(g.minorArea, units), 'at d3'));
+  out.push('');
+  const e = g.limits.external;
+  const i = g.limits.internal;
+  const row = (a: string, b: string, max: string, min: string) =>
+    `  ${a.padEnd(14)}${b.padEnd(14)}${max.padStart(14)}${min.padStart(14)}`;
+  out.push(row('Limits of size', '', 'max', 'min'));
+  out.push(row(`external ${s.toleranceExternal}`, 'major d', len(e.majorMax, units), len(e.majorMin, units)));
+  out.push(row('', 'pitch d2', len(e.pitchMax, units), len(e.pitchMin, units)));
+  if (e.minorMin !== undefined || e.minorMax !== undefined) {
+    out.push(row('', 'minor d3', len(e.minorMax, units), len(e.minorMin, units)));
+  }
+  out.push(row(`internal ${s.toleranceInternal}`, 'minor D1', len(i.minorMax, units), len(i.minorMin, units)));
+  out.push(row('', 'pitch D2', len(i.pitchMax, units), len(i.pitchMin, units)));
+  out.push(row('', 'major D', '-', len(i.majorMin, units)));
+  if (s.toleranceDefaulted) out.push('  (class not fully given: default applied)');
+  out.push('');
+  out.push(...wrap(`${g.limitsProvenance.source} [${g.limitsProvenance.method}]`, 'Source: ', '        '));
+  for (const n of g.notes) out.push(...wrap(n, '  - ', '    '));
+  return out;
+}
+
+function powerText(s: ThreadSpec, units: UnitSystem): string[] {
+  const out: string[] = [];
+  out.push(`${s.designation}  ${familyText(s)}`);
+  out.push('');
+  out.push(line('nominal diameter d', len(s.nominal, units)));
+  out.push(line('pitch P', len(s.pitch, units), s.tpi !== undefined ? `${+s.tpi.toFixed(3)} threads per inch` : ''));
+  out.push(line('lead', len(s.lead, units), `${s.starts} start${s.starts > 1 ? 's' : ''}`));
+  if (s.toleranceExternal || s.toleranceInternal) {
+    const cls = s.toleranceExternal === s.toleranceInternal ? s.toleranceExternal : `${s.toleranceInternal}/${s.toleranceExternal}`;
+    out.push(line('class', cls, s.toleranceDefaulted ? 'default' : ''));
+  }
+  if (!s.isStandardPitch) out.push('  - pitch not in the shipped standard series for this size');
+  out.push('');
+  out.push(...wrap('Power-screw geometry, torque, efficiency and stresses: see tapwright screw --help.', '', ''));
+  return out;
+}
+
+function jsonOf(spec: ThreadSpec, g: ThreadGeometry | undefined): unknown {
+  if (!g) {
+    return {
+      designation: spec.designation,
+      spec,
+      geometry: null,
+      note: 'power-screw thread: geometry and mechanics come from tapwright screw',
+      units: {length: 'mm'},
+    };
+  }
+  const {spec: _s, ...geometry} = g;
+  return {designation: spec.designation, spec, geometry, units: {length: 'mm', area: 'mm²'}};
+}
 
 export const command: Command = {
   name: 'threads',
-  summary: '',
-  help: 'tapwright threads: not available in this build yet.',
-  async run(_args, io) {
-    io.err('tapwright: threads is not available in this build yet\n');
-    return EXIT.usage;
+  summary: 'geometry and limits of size of a thread designation',
+  help: HELP,
+  async run(args: string[], io: CliIo): Promise<number> {
+    const {values, positionals} = parseOptions(args, {
+      json: {type: 'boolean'},
+      units: {type: 'string'},
+    });
+    const unitsText = str(values, 'units') ?? 'si';
+    if (unitsText !== 'si' && unitsText !== 'us') {
+      throw new UsageError(`--units is "${unitsText}"; accepted: si or us`, '--units');
+    }
+    const units: UnitSystem = unitsText;
+    const text = positionals.join(' ').trim();
+    if (text === '') {
+      throw new UsageError(`threads needs a designation, e.g. tapwright threads M10x1.5-6H/6g (accepted forms: ${ACCEPTED_FORMS})`);
+    }
+    const parsed = parseThread(text);
+    if (!parsed.ok) {
+      const near = parsed.suggestions?.length ? `\n  nearest valid designations: ${parsed.suggestions.join(', ')}` : '';
+      throw new UsageError(`threads: ${parsed.error}${near}`, 'designation');
+    }
+    const spec = parsed.value;
+    const g = spec.family === 'metric' || spec.family === 'unified' ? threadGeometry(spec) : undefined;
+    if (values.json === true) {
+      io.out(`${JSON.stringify(jsonOf(spec, g), null, 2)}\n`);
+      return EXIT.ok;
+    }
+    const lines = g ? geometryText(g, units) : powerText(spec, units);
+    lines.push('', ...wrap(CAUTION_SHORT, '', ''));
+    io.out(`${lines.join('\n')}\n`);
+    return EXIT.ok;
   },
 };

@@ -5,7 +5,8 @@
  * formulas (labelled fallback) otherwise.
  *
  *   external: d max = d + es, d min = d max - Td, d2 max = d2 + es, d2 min = d2 max - Td2,
- *             d3 min = d2 min - 2(H/2 - 0.125P)  (minimum root radius 0.125P)
+ *             d3 min = d2 min - 2(H/2 - 0.125P), d2 min unrounded (minimum root
+ *             radius 0.125P; this reproduces the ISO 965-2 6g d3 min values M3 to M12)
  *   internal: D1 min = D1 + EI, D1 max = D1 min + TD1, D2 min = D2 + EI,
  *             D2 max = D2 min + TD2, D min = D + EI
  * All in mm; deviations and tolerances in µm.
@@ -62,6 +63,11 @@ export function metricTolerances(
   };
 }
 
+function summarise(missing: string[]): string {
+  if (missing.length === 0) return 'entry';
+  return missing.length <= 2 ? missing.join(' or ') : `${missing.slice(0, 2).join(', ')} and ${missing.length - 2} more`;
+}
+
 /** Limits of size, mm, for the metric thread d x P with the given classes. */
 export function metricLimits(d: number, P: number, ext: MetricClass, int: MetricClass): MetricLimitsResult {
   const H = 0.8660254037844386 * P;
@@ -71,14 +77,15 @@ export function metricLimits(d: number, P: number, ext: MetricClass, int: Metric
   const es = tol.es / 1000;
   const EI = tol.EI / 1000;
   const pitchMax = r3(d2 + es);
-  const pitchMin = r3(pitchMax - tol.Td2 / 1000);
+  const pitchMinExact = d2 + es - tol.Td2 / 1000;
+  const pitchMin = r3(pitchMinExact);
   const majorMax = r3(d + es);
   const external: ExternalLimits = {
     majorMax,
     majorMin: r3(majorMax - tol.Td / 1000),
     pitchMax,
     pitchMin,
-    minorMin: r3(pitchMin - 2 * (H / 2 - 0.125 * P)),
+    minorMin: r3(pitchMinExact - 2 * (H / 2 - 0.125 * P)),
   };
   const minorMin = r3(D1 + EI);
   const pitchMinI = r3(d2 + EI);
@@ -92,7 +99,7 @@ export function metricLimits(d: number, P: number, ext: MetricClass, int: Metric
   const notes: string[] = [];
   if (method === 'formula') {
     notes.push(
-      `Limits of size computed from the ISO 965-1 generating formulas (${missing.join(', ') || 'not tabulated'}): ` +
+      `Limits of size computed from the ISO 965-1 generating formulas (the shipped ISO 965-1 tables have no ${summarise(missing)}): ` +
         'the published tables round differently, so these may differ from ISO 965-2/-3 by a few µm. Check against the standard before gauging.',
     );
   }
