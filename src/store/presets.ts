@@ -98,6 +98,7 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
   const lock = `${file}.lock`;
   const now = opts.now ?? (() => new Date());
   const notes: string[] = [];
+  let backedUp = false;
   const warn = (m: string) => {
     if (!notes.includes(m)) notes.push(m);
   };
@@ -149,7 +150,9 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
           if (s.status === 'newer') throw new StoreError(`${file}: ${s.reason}; not changing it. Use that newer tapwright, or move the file away.`);
           const found = {...s, entries: [...s.entries]};
           fn(s);
-          const aside = writeState(file, s, now());
+          // presets.json.bak: the store as this process (CLI run or workbench session) first found it.
+          const aside = writeState(file, s, now(), !backedUp);
+          backedUp = true;
           report(found, aside);
           return s;
         },

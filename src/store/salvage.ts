@@ -19,60 +19,71 @@ interface Found {
   what: 'preset' | 'quarantine' | 'v1';
 }
 
-/** Scan text for balanced {...} spans, skipping strings; returns candidates with the key before them. */
+/**
+ * Every `{` that opens an object with keys is tried as a start, each with a
+ * fresh scan to its matching `}`: a stray quote or byte spoils at most the
+ * object it sits in, not everything after it.
+ */
 export function salvage(text: string): Salvaged {
   const v1 = !text.includes('"schemaVersion"') && /"version"\s*:\s*1\b/.test(text);
-  const stack: Array<{start: number; key: string | undefined}> = [];
   const found: Found[] = [];
-  let inString = false;
-  let strStart = -1;
-  let lastString: string | undefined;
-  let lastStringEnd = -1;
-  for (let i = 0; i < text.length; i++) {
-    const c = text[i];
-    if (inString) {
-      if (c === '\\') i++;
-      else if (c === '"') {
-        inString = false;
-        try {
-          lastString = JSON.parse(text.slice(strStart, i + 1)) as string;
-        } catch {
-          lastString = undefined;
-        }
-        lastStringEnd = i;
-      }
+  const opener = /\{\s*"/g;
+  for (let m = opener.exec(text); m; m = opener.exec(text)) {
+    const start = m.index;
+    opener.lastIndex = start + 1;
+    const end = matchingBrace(text, start);
+    if (end < 0) continue;
+    let value: unknown;
+    try {
+      value = JSON.parse(text.slice(start, end + 1));
+    } catch {
       continue;
     }
-    if (c === '"') {
-      inString = true;
-      strStart = i;
-    } else if (c === '{') {
-      // The key of this object when the text before it is `"key" :`.
-      const between = lastStringEnd >= 0 ? text.slice(lastStringEnd + 1, i) : '';
-      stack.push({start: i, key: /^\s*:\s*$/.test(between) ? lastString : undefined});
-    } else if (c === '}') {
-      const open = stack.pop();
-      if (!open) continue;
-      let value: unknown;
-      try {
-        value = JSON.parse(text.slice(open.start, i + 1));
-      } catch {
-        continue;
-      }
-      if (!isPlainObject(value)) continue;
-      const what = classify(value, open.key, v1);
-      if (what) found.push({start: open.start, end: i, key: open.key, value, what});
-    }
+    if (!isPlainObject(value)) continue;
+    const key = keyBefore(text, start);
+    const what = classify(value, key, v1);
+    if (what) found.push({start, end, key, value, what});
   }
   // Keep the outermost finds only (a quarantine entry may hold a preset-like raw value).
-  const outer = found.filter(f => !found.some(g => g !== f && g.start < f.start && g.end > f.end));
+  const outer = found.filter(f => !found.some(g => g !== f && g.start <= f.start && g.end >= f.end));
   const out: Salvaged = {presets: [], quarantine: []};
-  for (const f of outer.sort((a, b) => a.start - b.start)) {
+  for (const f of outer) {
     if (f.what === 'quarantine') out.quarantine.push(f.value);
     else if (f.what === 'v1') out.presets.push(presetFromV1(f.key ?? 'recovered', f.value));
     else out.presets.push(f.value);
   }
   return out;
+}
+
+/** Index of the `}` closing the object opened at `start`, skipping strings; -1 if none. */
+function matchingBrace(text: string, start: number): number {
+  let depth = 0;
+  let inString = false;
+  for (let i = start; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 92) i++;
+      else if (c === 34) inString = false;
+      else if (c === 10) return -1; // a raw newline cannot be inside a JSON string: this start is spoiled
+    } else if (c === 34) inString = true;
+    else if (c === 123 || c === 91) depth++;
+    else if (c === 125 || c === 93) {
+      depth--;
+      if (depth === 0) return c === 125 ? i : -1;
+    }
+  }
+  return -1;
+}
+
+/** The property name just before `start` ("key": {...}), if any. */
+function keyBefore(text: string, start: number): string | undefined {
+  const m = /"((?:[^"\\\n]|\\.)*)"\s*:\s*$/.exec(text.slice(Math.max(0, start - 300), start));
+  if (!m) return undefined;
+  try {
+    return JSON.parse(`"${m[1]}"`) as string;
+  } catch {
+    return undefined;
+  }
 }
 
 function classify(v: Record<string, unknown>, key: string | undefined, v1: boolean): Found['what'] | undefined {
