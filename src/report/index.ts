@@ -1,0 +1,7 @@
+/**
+ * Reports built from core results: the terminal text report and the Markdown
+ * work-order report of a joint check.
+ */
+export {formatCheckText, toAscii, wrapText, TEXT_WIDTH} from './text.js';
+export {formatCheckMarkdown, isoDate, type MarkdownMeta, type WorkOrderNotes} from './markdown.js';
+export {verdict, levelWord} from './sections.js';

@@ -1,0 +1,139 @@
+/**
+ * The work-order report in Markdown: header facts, work-order fields, the
+ * outcome, inputs, results, flags, the limits and models used, sources,
+ * cautions and a sign-off block. Same content as the text report (both come
+ * from sections.ts); this one is meant to be printed or attached to a work order.
+ */
+import type {CheckResult} from '../core/joint/result.js';
+import type {JointInput} from '../core/joint/input.js';
+import type {UnitSystem} from '../core/units.js';
+import {CAUTION_LINES} from '../core/cautions.js';
+import {VERSION} from '../version.js';
+import {inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
+
+export interface WorkOrderNotes {
+  asset?: string;
+  location?: string;
+  workOrder?: string;
+  text?: string;
+}
+
+export interface MarkdownMeta {
+  presetName?: string;
+  date: Date;
+  notes?: WorkOrderNotes;
+  units: UnitSystem;
+}
+
+/** Make text safe inside a Markdown table cell. */
+export function cell(text: string): string {
+  return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\r?\n/g, ' ').trim();
+}
+
+/** Make free text safe as a Markdown paragraph: no headings, lists or HTML taken from user input. */
+function paragraph(text: string): string {
+  return text
+    .split(/\r?\n/)
+    .map(l => l.replace(/</g, '&lt;').replace(/^(\s*)([#>*+-]|\d+\.)(\s)/, '$1\\$2$3'))
+    .join('  \n');
+}
+
+function table(head: string[], rows: string[][]): string[] {
+  return [`| ${head.map(cell).join(' | ')} |`, `|${head.map(() => '---').join('|')}|`, ...rows.map(r => `| ${r.map(cell).join(' | ')} |`)];
+}
+
+/** ISO date (UTC) of a Date, e.g. 2026-01-01. */
+export function isoDate(d: Date): string {
+  return Number.isNaN(d.getTime()) ? 'date not recorded' : d.toISOString().slice(0, 10);
+}
+
+const UNIT_WORDS: Record<UnitSystem, string> = {
+  si: 'SI: mm, kN, N·m, MPa',
+  us: 'US customary: in, lbf, ft·lbf, ksi',
+};
+
+/**
+ * The Markdown work-order report of a checked joint. Input and result values are in
+ * working units (mm, N, N·m, MPa); the report shows them in `meta.units`.
+ */
+export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta: MarkdownMeta): string {
+  const f: Fmt = {units: meta.units, ascii: false};
+  const v = verdict(result.flags);
+  const notes = meta.notes ?? {};
+  const out: string[] = [];
+
+  out.push(`# Threaded joint check: ${cell(result.geometry.spec.designation)}`, '');
+  out.push(`Bolt ${cell(result.materials.bolt.id)} in a ${cell(internalWords(result, input))}.`, '');
+  out.push(
+    ...table(
+      ['Report', ''],
+      [
+        ['Date', isoDate(meta.date)],
+        ['Preset', meta.presetName ?? '(none: entered by hand)'],
+        ['Units', UNIT_WORDS[meta.units]],
+        ['Computed by', `tapwright ${VERSION}`],
+      ],
+    ),
+    '',
+  );
+
+  out.push('## Work order', '');
+  out.push(
+    ...table(
+      ['Field', 'Entry'],
+      [
+        ['Asset', notes.asset ?? ''],
+        ['Location', notes.location ?? ''],
+        ['Work order', notes.workOrder ?? ''],
+      ],
+    ),
+    '',
+  );
+  if (notes.text && notes.text.trim() !== '') out.push(paragraph(notes.text.trim()), '');
+
+  out.push('## Outcome', '');
+  out.push(`**${v.word}**: ${v.text}.`, '');
+  const fails = result.flags.filter(x => x.level === 'fail');
+  for (const x of fails) out.push(`- **FAIL** ${cell(x.message)}`);
+  if (fails.length) out.push('');
+
+  out.push('## Inputs', '');
+  out.push(...table(['Input', 'Value', 'Source or remark'], inputRows(result, input, f).map(r => [r.label, r.value, r.note ?? ''])), '');
+
+  out.push('## Results', '');
+  for (const g of resultGroups(result, input, f)) {
+    out.push(`### ${g.title}`, '');
+    out.push(...table(['Quantity', 'Value', 'Remark'], g.rows.map(r => [r.label, r.value, r.note ?? ''])), '');
+  }
+
+  out.push('## Flags', '');
+  if (result.flags.length === 0) out.push('No flags were raised.', '');
+  else out.push(...table(['Level', 'Check', 'What it means'], result.flags.map(x => [levelWord(x.level), x.code, x.message])), '');
+
+  out.push('## Limits and models used', '');
+  for (const l of limitsLines(result, f)) out.push(`- ${l}`);
+  for (const n of result.notes) out.push(`- ${n}`);
+  out.push('');
+
+  out.push('## Sources', '');
+  for (const s of sourceLines(result)) out.push(`- ${s}`);
+  out.push('');
+
+  out.push('## Cautions', '');
+  for (const c of CAUTION_LINES) out.push(`> ${c}`);
+  out.push('');
+
+  out.push('## Sign-off', '');
+  out.push('A qualified person signs here before the joint returns to service where the cautions above apply.', '');
+  out.push(
+    ...table(
+      ['Role', 'Name', 'Signature', 'Date'],
+      [
+        ['Checked by', '', '', ''],
+        ['Approved by (qualified person)', '', '', ''],
+      ],
+    ),
+    '',
+  );
+  return `${out.join('\n')}\n`;
+}

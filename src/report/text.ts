@@ -1,0 +1,123 @@
+/**
+ * Plain-text check report for the terminal: every result with its unit, the
+ * flags with their level word (never colour alone), the limits and sources,
+ * and the cautions. Every line fits 80 columns. `ascii` keeps to 7-bit ASCII.
+ */
+import type {CheckResult} from '../core/joint/result.js';
+import type {JointInput} from '../core/joint/input.js';
+import type {UnitSystem} from '../core/units.js';
+import {CAUTION_LINES} from '../core/cautions.js';
+import {inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
+
+export const TEXT_WIDTH = 80;
+const LABEL = 36;
+
+/** Wrap words to `width`; the first line starts with `first`, the others with `rest`. Long words are split. */
+export function wrapText(text: string, first: string, rest: string, width = TEXT_WIDTH): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let fresh = true;
+  const words = text.split(/\s+/).filter(Boolean);
+  for (let word of words) {
+    while (word.length > width - rest.length) {
+      if (!fresh) {
+        lines.push(line);
+        line = rest;
+      }
+      const room = width - line.length;
+      lines.push(line + word.slice(0, room));
+      word = word.slice(room);
+      line = rest;
+      fresh = true;
+    }
+    if (word === '') continue;
+    if (!fresh && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = rest;
+      fresh = true;
+    }
+    line += (fresh ? '' : ' ') + word;
+    fresh = false;
+  }
+  if (!fresh || lines.length === 0) lines.push(line);
+  return lines.map(l => l.trimEnd());
+}
+
+function rowLines(r: Row): string[] {
+  const label = `  ${r.label}`;
+  const first = label.length + 2 > LABEL ? `${label}  ` : label.padEnd(LABEL);
+  const out = wrapText(r.value, first, ' '.repeat(LABEL));
+  if (r.note) out.push(...wrapText(`(${r.note})`, ' '.repeat(LABEL + 2), ' '.repeat(LABEL + 3)));
+  return out;
+}
+
+const ASCII_MAP: [RegExp, string][] = [
+  [/·/g, '*'],
+  [/×/g, 'x'],
+  [/²/g, '^2'],
+  [/³/g, '^3'],
+  [/≥/g, '>='],
+  [/≤/g, '<='],
+  [/[–—]/g, '-'],
+  [/[µμ]/g, 'u'],
+  [/°/g, ' deg'],
+  [/[‘’]/g, "'"],
+  [/[“”]/g, '"'],
+  [/…/g, '...'],
+];
+
+/** Replace the few non-ASCII symbols a report uses, and anything else left, with ASCII. */
+export function toAscii(text: string): string {
+  let t = text;
+  for (const [re, to] of ASCII_MAP) t = t.replace(re, to);
+  // Anything else non-ASCII (a name in a source, say): drop accents, else '?'.
+  return t.normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^\x09\x0a\x0d\x20-\x7e]/g, '?');
+}
+
+/**
+ * The text report of a checked joint, in the display units of `opts.units`.
+ * Input and result values are in working units (mm, N, N·m, MPa).
+ */
+export function formatCheckText(result: CheckResult, input: JointInput, opts: {units: UnitSystem; ascii?: boolean}): string {
+  const f: Fmt = {units: opts.units, ascii: opts.ascii ?? false};
+  const heavy = (f.ascii ? '=' : '═').repeat(TEXT_WIDTH);
+  const light = (f.ascii ? '-' : '─').repeat(TEXT_WIDTH);
+  const v = verdict(result.flags);
+  const out: string[] = [];
+  out.push(...wrapText(`Joint check: ${result.geometry.spec.designation}, bolt ${result.materials.bolt.id}, ${internalWords(result, input)}`, '', '  '));
+  out.push(...wrapText(`${v.word}: ${v.text}`, 'RESULT ', '       '));
+  out.push(heavy);
+
+  out.push('', 'INPUTS');
+  for (const r of inputRows(result, input, f)) out.push(...rowLines(r));
+
+  for (const g of resultGroups(result, input, f)) {
+    out.push('', ...wrapText(g.title.toUpperCase(), '', ''));
+    for (const r of g.rows) out.push(...rowLines(r));
+  }
+
+  out.push('', 'FLAGS');
+  if (result.flags.length === 0) out.push('  none');
+  for (const flag of result.flags) {
+    const word = levelWord(flag.level).padEnd(6);
+    out.push(`  ${word} ${flag.code}`);
+    out.push(...wrapText(flag.message, '         ', '         '));
+  }
+
+  if (result.notes.length > 0) {
+    out.push('', 'NOTES');
+    for (const n of result.notes) out.push(...wrapText(n, '  - ', '    '));
+  }
+
+  out.push('', 'LIMITS USED');
+  for (const l of limitsLines(result, f)) out.push(...wrapText(l, '  - ', '    '));
+
+  out.push('', 'SOURCES');
+  for (const s of sourceLines(result)) out.push(...wrapText(s, '  - ', '    '));
+
+  out.push('', light);
+  for (const c of CAUTION_LINES) out.push(...wrapText(c, '', '  '));
+
+  const text = `${out.join('\n')}\n`;
+  return f.ascii ? toAscii(text) : text;
+}
