@@ -39,12 +39,12 @@ export function screwFlags(c: FlagContext): Flag[] {
     if (r.torque.lower <= 0) {
       out.push({
         code: 'back-drives', level: 'fail',
-        message: `the load runs the screw down by itself: lowering torque ${f2(r.torque.lower)} N·m with collar; f sec a ${f3(fsec)} < tan(lead angle) ${f3(tanL)}. Needs a brake or a self-locking thread`,
+        message: `the load runs the screw down by itself: lowering torque ${f2(r.torque.lower)} N·m with collar; f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}. Needs a brake or a self-locking thread`,
       });
     } else {
       out.push({
         code: 'back-drives', level: 'watch',
-        message: `thread alone back-drives (f sec a ${f3(fsec)} < tan(lead angle) ${f3(tanL)}); only collar friction holds the load (lowering torque ${f2(r.torque.lower)} N·m). Vibration or grease can let it run down`,
+        message: `thread alone back-drives (f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}); only collar friction holds the load (lowering torque ${f2(r.torque.lower)} N·m). Vibration or grease can let it run down`,
       });
     }
   }

@@ -94,7 +94,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
       firstThread: {bearing: root.bearing, bending: root.bending, shear: root.shear, vonMises: root.vonMises, maxShear: root.maxShear, principal: root.principal, share},
     },
     nut: {
-      material: nut.id, materialSource: nut.source, engagedThreads: engaged,
+      material: nut.id, materialName: nut.name, materialSource: nut.source, engagedThreads: engaged,
       bearingPressure: bearingPressure(F, g.meanDiameter, input.nutLength),
       allowablePressure: input.allowablePressure !== undefined
         ? {min: input.allowablePressure, max: input.allowablePressure, condition: 'given', source: 'user'}
@@ -113,6 +113,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
       margin: column && F > 0 ? column.margin : null,
       source: END_CONDITION_SOURCE,
     },
+    input: {loadDirection: input.loadDirection, load: F, nutLength: input.nutLength},
     sources: [
       g.source,
       "Shigley's Mechanical Engineering Design, 9th ed.: Eqs. 8-1 to 8-6 (torque, efficiency, self-locking), Eqs. 8-7 to 8-12 and p. 419 (stresses, 0.38 first-thread share), Eq. 5-14 (von Mises), Eqs. 4-42/4-43 and 8-9 with Table 4-2 (columns)",

@@ -54,6 +54,7 @@ export interface ScrewResult {
   };
   nut: {
     material: string;
+    materialName: string;
     materialSource: string;
     engagedThreads: number;
     bearingPressure: number;
@@ -73,6 +74,8 @@ export interface ScrewResult {
     margin: number | null;
     source: string;
   };
+  /** Load direction as computed. */
+  input: {loadDirection: 'compression' | 'tension'; load: number; nutLength: number};
   flags: Flag[];
   sources: string[];
   notes: string[];

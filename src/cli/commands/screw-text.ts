@@ -1,0 +1,75 @@
+/**
+ * Text output of `tapwright screw`: 80 columns, a unit on every number, flags with
+ * their level word, the sources and the cautions.
+ */
+import type {ScrewResult} from '../../core/screw/index.js';
+import {formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../../core/units.js';
+import {CAUTION_LINES} from '../../core/cautions.js';
+
+const WIDTH = 80;
+const LABEL = 14;
+
+function wrap(text: string, first: string, indent: string): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let empty = true;
+  for (const word of text.split(/\s+/).filter(Boolean)) {
+    if (!empty && (line + ' ' + word).length > WIDTH) {
+      lines.push(line);
+      line = indent + word;
+    } else {
+      line += (empty ? '' : ' ') + word;
+    }
+    empty = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
+function field(label: string, text: string): string[] {
+  return wrap(text, label.padEnd(LABEL), ' '.repeat(LABEL));
+}
+
+export function screwText(r: ScrewResult, units: UnitSystem): string {
+  const q = (v: number, d: Dimension) => formatQuantity(v, d, units);
+  const deg = (v: number) => `${formatNumber(v, 3)} deg`;
+  const g = r.geometry;
+  const out: string[] = ['tapwright screw - power screw check', ''];
+  out.push(...field('Thread', `${r.thread.designation} (${r.thread.family}, ${r.geometry.starts} start${g.starts > 1 ? 's' : ''}); ${g.source}`));
+  out.push(...field('Geometry', `d ${q(g.major, 'length')}, P ${q(g.pitch, 'length')}, dm ${q(g.meanDiameter, 'length')}, root ${q(g.rootDiameter, 'length')}, nut minor ${q(g.nutMinorDiameter, 'length')}, flank half-angle ${deg(g.flankAngle)}`));
+  out.push(...field('Lead', `${q(r.lead, 'length')}, lead angle ${deg(r.leadAngle)}`));
+  const mu = r.friction.thread;
+  const muText = mu.min === mu.max ? formatNumber(mu.min, 3) : `${formatNumber(mu.min, 3)} to ${formatNumber(mu.max, 3)}`;
+  const collar = r.friction.collar > 0 ? `collar ${formatNumber(r.friction.collar, 3)} on ${q(r.friction.collarDiameter, 'length')}` : 'no collar friction';
+  out.push(...field('Friction', `thread ${muText}, ${collar}`));
+  out.push(...field('Torque', `raise ${q(r.torque.raise, 'torque')} (thread ${q(r.torque.raiseThread, 'torque')} + collar ${q(r.torque.collar, 'torque')})`));
+  out.push(...field('', `lower ${q(r.torque.lower, 'torque')} (thread ${q(r.torque.lowerThread, 'torque')} + collar ${q(r.torque.collar, 'torque')})`));
+  out.push(...field('Efficiency', `${formatNumber(r.efficiency * 100, 3)} % raising with collar; thread alone ${formatNumber(r.threadEfficiency * 100, 3)} %`));
+  out.push(...field('Self-locking', r.selfLocking
+    ? `yes: the thread alone holds the load (it would back-drive below f = ${formatNumber(r.selfLockingFriction, 3)})`
+    : `NO: the thread alone back-drives (needs f above ${formatNumber(r.selfLockingFriction, 3)})`));
+  const b = r.stress.body;
+  out.push(...field('Body', `axial ${q(b.axial, 'stress')}, torsion ${q(b.torsion, 'stress')}, von Mises ${q(b.vonMises, 'stress')}`));
+  const t = r.stress.firstThread;
+  out.push(...field('First thread', `share ${formatNumber(t.share, 2)} of the load on 1 thread: bearing ${q(t.bearing, 'stress')}, bending ${q(t.bending, 'stress')}, shear ${q(t.shear, 'stress')}, von Mises ${q(t.vonMises, 'stress')} (screw yield ${q(r.screw.yield, 'stress')}), max shear ${q(t.maxShear, 'stress')}`));
+  const n = r.nut;
+  out.push(...field('Nut', `${n.materialName} (${n.material}), ${formatNumber(n.engagedThreads, 3)} threads engaged`));
+  const allow = n.allowablePressure;
+  out.push(...field('', `flank pressure ${q(n.bearingPressure, 'stress')}; ${allow ? `safe ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')} (${allow.condition})` : 'no tabulated safe pressure'}`));
+  const s = n.stripping;
+  out.push(...field('', `strips at: nut threads ${q(s.nutForce, 'force')}, screw threads ${q(s.screwForce, 'force')}; ${s.weaker} weaker, ${formatNumber(s.margin, 3)} x load`));
+  const c = r.buckling;
+  out.push(...field('Column', c.checked && c.criticalLoad !== null
+    ? `critical load ${q(c.criticalLoad, 'force')} (${c.method === 'euler' ? 'Euler' : 'J. B. Johnson'}, ${c.ends}, C = ${c.endConstant}, l/k ${formatNumber(c.slenderness ?? 0, 3)}), ${formatNumber(c.margin ?? 0, 3)} x load`
+    : r.input.loadDirection === 'tension' ? 'not checked: the screw is in tension' : 'not checked: give --length for the unsupported length'));
+  out.push('', 'Flags');
+  if (r.flags.length === 0) out.push('  none');
+  for (const f of r.flags) out.push(...wrap(`${f.code}: ${f.message}`, `  ${f.level.toUpperCase().padEnd(6)}`, '        '));
+  out.push('', 'Sources');
+  for (const src of [...r.sources, `nut: ${n.materialSource}`, `screw: ${r.screw.materialSource}`]) out.push(...wrap(src, '  - ', '    '));
+  out.push('', 'Notes');
+  for (const note of r.notes) out.push(...wrap(note, '  - ', '    '));
+  out.push('');
+  for (const line of CAUTION_LINES) out.push(...wrap(line, '', ''));
+  return `${out.join('\n')}\n`;
+}

@@ -1,0 +1,133 @@
+import {describe, expect, it} from 'vitest';
+import {runCli} from '../../src/cli/main.js';
+import {memoryIo} from '../../src/cli/io.js';
+
+async function run(args: string[]) {
+  const io = memoryIo();
+  const code = await runCli(['screw', ...args], io);
+  return {code, out: io.stdout(), err: io.stderr()};
+}
+
+// Shigley's Mechanical Engineering Design, 9th ed., Example 8-1 inputs (p. 419); the expected
+// values are computed from the book's equations in test/core/screw/example-8-1.test.ts
+// (book answers not confirmed here).
+const EX81 = ['--thread', 'square 32x4', '--starts', '2', '--load', '6.4kN', '--mu-thread', '0.08', '--mu-collar', '0.08', '--collar-diameter', '40mm', '--nut-length', '48mm'];
+
+describe('tapwright screw --json (contract keys, SI)', () => {
+  it('has every contract key with the Example 8-1 values (Shigley 9th ed. Eqs. 8-1 to 8-12)', async () => {
+    const {code, out} = await run([...EX81, '--json']);
+    expect(code).toBe(0);
+    const j = JSON.parse(out);
+    expect(j.lead).toBeCloseTo(8, 9);
+    expect(j.leadAngle).toBeCloseTo(4.8518, 3); // atan(8 / (pi 30)) in degrees
+    expect(j.torque.raise).toBeCloseTo(26.17695, 4); // N·m
+    expect(j.torque.lower).toBeCloseTo(9.77443, 4);
+    expect(j.torque.collar).toBeCloseTo(10.24, 9);
+    expect(j.efficiency).toBeCloseTo(0.311294, 5);
+    expect(j.selfLocking).toBe(false);
+    expect(j.stress.body.axial).toBeCloseTo(-10.39379, 4);
+    expect(j.stress.body.torsion).toBeCloseTo(6.07317, 4);
+    expect(j.stress.firstThread.bearing).toBeCloseTo(-12.90216, 4);
+    expect(j.stress.firstThread.bending).toBeCloseTo(41.47123, 4);
+    expect(typeof j.stress.firstThread.shear).toBe('number');
+    expect(j.stress.firstThread.vonMises).toBeCloseTo(48.6784, 3);
+    // p = 2F / (pi dm Le) = 12 800 / (pi 30 x 48) = 2.8294 MPa (Shigley 9th ed. Eq. 8-10, all turns)
+    expect(j.nut.bearingPressure).toBeCloseTo(2.82942, 4);
+    expect(j.buckling).toHaveProperty('criticalLoad');
+    expect(Array.isArray(j.flags)).toBe(true);
+    expect(j.flags.map((f: {code: string}) => f.code)).toContain('back-drives');
+  });
+  it('JSON stays SI with --units us; --format json equals --json', async () => {
+    const a = JSON.parse((await run([...EX81, '--json', '--units', 'us'])).out);
+    const b = JSON.parse((await run([...EX81, '--format', 'json'])).out);
+    expect(a.torque.raise).toBeCloseTo(26.17695, 4);
+    expect(b.torque.raise).toBe(a.torque.raise);
+  });
+  it('units on input: 1.5in length and lbf load are converted (NIST SP 811: 1 lbf = 4.448222 N)', async () => {
+    const j = JSON.parse((await run(['--thread', 'Tr24x5', '--load', '1000lbf', '--nut-length', '1.5in', '--json'])).out);
+    expect(j.input.load).toBeCloseTo(4448.222, 2);
+    expect(j.input.nutLength).toBeCloseTo(38.1, 9);
+  });
+  it('buckling critical load is a number for a long screw in compression', async () => {
+    const j = JSON.parse((await run(['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--length', '2000mm', '--ends', 'fixed-free', '--json'])).out);
+    expect(j.buckling.criticalLoad).toBeGreaterThan(0);
+    expect(j.buckling.method).toBe('euler');
+  });
+});
+
+describe('tapwright screw text output', () => {
+  it('fits 80 columns, has units, the flags with level words and the cautions', async () => {
+    const {code, out} = await run(EX81);
+    expect(code).toBe(0);
+    for (const line of out.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+    expect(out).toMatch(/raise 26\.2 N·m/);
+    expect(out).toMatch(/WATCH\s+back-drives/);
+    expect(out).toMatch(/qualified person/);
+    expect(out).toMatch(/Shigley/);
+  });
+  it('us units show lbf, in, ft·lbf and ksi', async () => {
+    const {out} = await run([...EX81, '--units', 'us']);
+    expect(out).toMatch(/ft·lbf/);
+    expect(out).toMatch(/ksi/);
+    expect(out).toMatch(/ in\b/);
+  });
+  it('--picks lists the friction tables with their source', async () => {
+    const {code, out} = await run(['--picks']);
+    expect(code).toBe(0);
+    expect(out).toMatch(/steel-oil\/bronze\s+0\.10\.\.0\.16/); // Shigley 9th ed. Table 8-5
+    expect(out).toMatch(/hard-steel\/bronze\s+running 0\.06, starting 0\.08/); // Table 8-6
+    expect(out).toMatch(/Table 8-5/);
+  });
+  it('friction picks set the values (Shigley 9th ed. Tables 8-5, 8-6)', async () => {
+    const j = JSON.parse((await run(['--thread', 'Tr24x5', '--load', '10kN', '--nut-length', '40', '--mu-thread', 'steel-oil/bronze', '--mu-collar', 'soft-steel/bronze', '--collar-diameter', '40', '--json'])).out);
+    expect(j.friction.thread).toEqual({min: 0.1, max: 0.16});
+    expect(j.friction.collar).toBe(0.08);
+  });
+});
+
+describe('tapwright screw exit codes and bad input', () => {
+  it('exit 3 with a fail flag (the load runs down by itself)', async () => {
+    const {code, out} = await run(['--thread', 'Tr24x10(P5)', '--load', '10kN', '--nut-length', '40', '--mu-thread', '0.05']);
+    expect(code).toBe(3);
+    expect(out).toMatch(/FAIL\s+back-drives/);
+  });
+  const bad: [string[], RegExp][] = [
+    [['--load', '1kN', '--nut-length', '40'], /--thread is required/],
+    [['--thread', 'M10', '--load', '1kN', '--nut-length', '40'], /--thread.*fastener thread/],
+    [['--thread', 'Tr24x5', '--nut-length', '40'], /--load is required/],
+    [['--thread', 'Tr24x5', '--load=-5kN', '--nut-length', '40'], /--load.*0 to 100 MN/],
+    [['--thread', 'Tr24x5', '--load', '-5kN', '--nut-length', '40'], /--load/],
+    [['--thread', 'Tr24x5', '--load', '5 kPa', '--nut-length', '40'], /--load.*not a force unit/],
+    [['--thread', 'Tr24x5', '--load', '5kN'], /--nut-length is required/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '0.1'], /--nut-length.*0\.5 to 2000 mm/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--starts', '9'], /--starts.*1 to 8/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--starts', '1.5'], /--starts.*whole number/],
+    [['--thread', 'Tr40x14(P7)', '--load', '5kN', '--nut-length', '40', '--starts', '3'], /--thread.*2 starts/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--mu-thread', '0.9'], /--mu-thread.*0\.01 to 0\.6/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--mu-thread', 'wet'], /--mu-thread.*steel-oil\/bronze/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--mu-thread', '0.2..0.1'], /--mu-thread.*min must not exceed max/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--mu-collar', '0.7'], /--mu-collar.*0 to 0\.6/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--collar-diameter', '3m'], /--collar-diameter.*0 to 2000 mm/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--nut-material', 'cheese'], /--nut-material.*bronze/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--screw-material', 'EN-GJL-250'], /--screw-material.*steel/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--ends', 'glued'], /--ends.*pinned-pinned/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--direction', 'up'], /--direction.*compression, tension/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--length', '30m'], /--length.*0 to 20 000 mm/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--speed', '20m/s'], /--speed.*0 to 10 m\/s/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--nut-wear', '60'], /--nut-wear.*0 to 50 mm/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--screw-yield', '10'], /--screw-yield.*50 to 2500 MPa/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--allowable-pressure', '0'], /--allowable-pressure.*0\.1 to 500 MPa/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--units', 'imperial'], /--units.*si, us/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--format', 'xml'], /--format.*text, json/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--bogus'], /unknown option --bogus/],
+  ];
+  for (const [args, msg] of bad) {
+    it(`exit 2: ${args.join(' ')}`, async () => {
+      const {code, err, out} = await run(args);
+      expect(code).toBe(2);
+      expect(err).toMatch(msg);
+      expect(err).not.toMatch(/at .*\.ts:\d+/); // no stack trace
+      expect(out).toBe('');
+    });
+  }
+});
