@@ -52,10 +52,10 @@ const TAU_A2: Provenance = {
 const E_STEEL: Provenance = {source: 'E = 205 GPa for steel bolts, typical value, from memory', kind: 'memory'};
 const E_AUST: Provenance = {source: 'E = 193 GPa for austenitic stainless steel, typical value, from memory', kind: 'memory'};
 
-/** Smallest and largest sizes the ISO 898-1 rows are offered for (M1.6 to M39 scope of ISO 898-1; from memory). */
+/** Smallest and largest sizes the ISO 898-1 rows are offered for: coarse thread M1.6 to M39 (ISO 898-1:2013 clause 1, scope, read in a stored secondary copy). */
 const ISO_MIN = 1.5;
 const ISO_MAX = 39;
-const ISO_SCOPE_NOTE = 'size range M1.6 to M39 per the scope of ISO 898-1, from memory';
+const ISO_SCOPE_NOTE = 'size range M1.6 to M39 (scope of ISO 898-1:2013)';
 
 function iso(
   cls: string,

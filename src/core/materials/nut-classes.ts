@@ -7,7 +7,11 @@
  * stresses of ISO 898-2 were not read, so the strength used for stripping is
  * taken as N x 100 MPa, the nominal tensile strength of the matching bolt
  * class; ISO 898-2 proof stresses for the regular nuts are at or above this
- * (from memory). Thin nuts 04 and 05 take 400 and 500 MPa likewise.
+ * (from memory). Thin nuts take their proof stresses, 380 MPa (class 04) and
+ * 500 MPa (class 05), from memory, consistent with a stored secondary page.
+ * Not for nuts tapped oversize to go with hot-dip galvanized bolts: ISO 10684
+ * gives them lower proof stresses (M10 class 8: 728 MPa, read in a stored
+ * secondary page).
  * SAE J995 grade 5 and 8 nuts take the matching SAE J429 bolt's tensile
  * strength (120 ksi up to 1 in, 105 ksi above; 150 ksi), from memory.
  */
@@ -19,6 +23,10 @@ const IN = CONVERSION.IN_MM;
 
 const ISO_NUT: Provenance = {
   source: 'ISO 898-2 class N: strength taken as N x 100 MPa (the matching bolt class Rm,nom); typical value, from memory: verify against the material certificate',
+  kind: 'memory',
+};
+const ISO_THIN: Provenance = {
+  source: 'ISO 898-2 thin nut: strength taken as its proof stress; typical value, from memory: verify against the material certificate',
   kind: 'memory',
 };
 const J995: Provenance = {
@@ -34,7 +42,9 @@ const TAU_NUT: Provenance = {
 const ISO_MIN = 4.99;
 const ISO_MAX = 39;
 
-function iso(id: string, rm: number, style: string): Record<string, unknown> {
+const OVERSIZE_NOTE = 'not for nuts tapped oversize for hot-dip galvanized bolts (ISO 10684 gives lower proof stresses)';
+
+function iso(id: string, rm: number, style: string, provenance: Provenance = ISO_NUT): Record<string, unknown> {
   return {
     id,
     name: `nut property class ${id} (${style})`,
@@ -43,9 +53,9 @@ function iso(id: string, rm: number, style: string): Record<string, unknown> {
     shearRatio: 0.6,
     sizeMinMm: ISO_MIN,
     sizeMaxMm: ISO_MAX,
-    provenance: ISO_NUT,
+    provenance,
     shearRatioProvenance: TAU_NUT,
-    note: 'size range M5 to M39 per the scope of ISO 898-2, from memory',
+    note: `size range M5 to M39 per the scope of ISO 898-2, from memory; ${OVERSIZE_NOTE}`,
   };
 }
 
@@ -66,8 +76,8 @@ function sae(grade: 5 | 8, fromIn: number, toIn: number, ksi: number, first: boo
 
 /** Raw rows; validated by the schema in index.ts. */
 export const NUT_CLASS_ROWS: unknown[] = [
-  iso('04', 400, 'thin nut, style 0'),
-  iso('05', 500, 'thin nut, style 0'),
+  iso('04', 380, 'thin nut, style 0', ISO_THIN),
+  iso('05', 500, 'thin nut, style 0', ISO_THIN),
   iso('5', 500, 'regular or high nut'),
   iso('6', 600, 'regular or high nut'),
   iso('8', 800, 'regular or high nut'),

@@ -89,7 +89,11 @@ describe('nut classes', () => {
   it('takes class N as N x 100 MPa, the matching bolt class nominal Rm (ISO 898-2 matching rule, from memory)', () => {
     expect(nutClass('8', 10)?.rm).toBe(800);
     expect(nutClass('10', 12)?.rm).toBe(1000);
-    expect(nutClass('04', 12)?.rm).toBe(400);
+  });
+
+  it('takes the thin nuts at their proof stress: 04 380 MPa, 05 500 MPa (ISO 898-2 thin nuts, from memory)', () => {
+    expect(nutClass('04', 12)?.rm).toBe(380);
+    expect(nutClass('05', 12)?.rm).toBe(500);
   });
 
   it('limits ISO nuts to M5..M39 and says so (ISO 898-2:2012 scope, from memory)', () => {
