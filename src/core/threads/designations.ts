@@ -102,6 +102,20 @@ function levenshtein(a: string, b: string): number {
   return prev[b.length] ?? 0;
 }
 
+/** The type-ahead list plus the coarse metric sizes with the pitch written out ("M10x1.5"). */
+function nearestPool(family: ThreadFamily | undefined): readonly string[] {
+  const key = `near:${family ?? 'all'}`;
+  const hit = CACHE.get(key);
+  if (hit) return hit;
+  const base = family ? listDesignations(family) : listDesignations();
+  const explicit = family === undefined || family === 'metric'
+    ? METRIC_SERIES.filter(r => r.coarse !== undefined).map(r => `M${trimNumber(r.d)}x${trimNumber(r.coarse ?? 0)}`)
+    : [];
+  const pool = [...base, ...explicit];
+  CACHE.set(key, pool);
+  return pool;
+}
+
 function guessFamily(s: string): ThreadFamily | undefined {
   if (/^tr/.test(s)) return 'trapezoidal';
   if (s.includes('acme')) return 'acme';
@@ -118,7 +132,7 @@ export function nearestDesignations(text: string, n = 5): string[] {
   const t = core(normalize(text));
   if (t === '' || n <= 0) return [];
   const fam = guessFamily(t);
-  const pool = fam ? listDesignations(fam) : listDesignations();
+  const pool = fam ? nearestPool(fam) : nearestPool(undefined);
   return pool
     .map((d, i) => ({d, i, score: levenshtein(t, normalize(d))}))
     .sort((a, b) => a.score - b.score || a.i - b.i)

@@ -101,12 +101,21 @@ function parseMetric(raw: string): Parsed<ThreadSpec> {
       return fail(`metric designation "${raw}": tolerance class missing or malformed after "-"; accepted: grade 4 to 8 and position e, f, g, h or G, H, e.g. 6g, 6H, 6H/6g`, raw, classSuggestions);
     }
     if (parts.length === 2) {
-      const a = parseMetricClass(parts[0] ?? '', 'internal');
-      if (!a.ok) return fail(`internal class: ${a.error}`, raw, classSuggestions);
-      const b = parseMetricClass(parts[1] ?? '', 'external');
-      if (!b.ok) return fail(`external class: ${b.error}`, raw, classSuggestions);
-      int = a.value;
-      ext = b.value;
+      // Letter case says which is which ("6g/6H" is the same pair as "6H/6g"); when the
+      // case does not tell (both upper or both lower case), the ISO order internal/external does.
+      const a0 = parseMetricClass(parts[0] ?? '');
+      const b0 = parseMetricClass(parts[1] ?? '');
+      if (a0.ok && b0.ok && a0.value.side !== b0.value.side) {
+        int = a0.value.side === 'internal' ? a0.value : b0.value;
+        ext = a0.value.side === 'external' ? a0.value : b0.value;
+      } else {
+        const a = parseMetricClass(parts[0] ?? '', 'internal');
+        if (!a.ok) return fail(`internal class (first of the pair): ${a.error}`, raw, classSuggestions);
+        const b = parseMetricClass(parts[1] ?? '', 'external');
+        if (!b.ok) return fail(`external class (second of the pair): ${b.error}`, raw, classSuggestions);
+        int = a.value;
+        ext = b.value;
+      }
     } else {
       const a = parseMetricClass(parts[0] ?? '');
       if (!a.ok) return fail(a.error, raw, classSuggestions);
