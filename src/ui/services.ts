@@ -6,6 +6,7 @@
 import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {RepairInput} from '../core/repair/input.js';
+import type {RepairPlan} from '../core/repair/types.js';
 import type {Provenance} from '../core/types.js';
 import type {FormValues, PickSource} from './state/fields.js';
 
@@ -23,7 +24,11 @@ export interface PresetEntry {
   /** Shipped demo presets are read-only: "save as" copies them. */
   readOnly: boolean;
   savedAt?: string;
+  /** Thread designation of the joint, for the list. */
+  thread?: string;
+  /** Asset, location and work order, for search. */
   notes?: string;
+  kind?: 'joint' | 'screw';
 }
 
 export interface LoadedPreset {
@@ -37,29 +42,6 @@ export interface Draft {
   savedAt: string;
   presetName: string;
   values: FormValues;
-}
-
-/** One ranked repair, already computed by the repair planner (working units). */
-export interface RepairRow {
-  rank: number;
-  kind: string;
-  title: string;
-  feasible: boolean;
-  meetsMargin: boolean;
-  reason?: string;
-  marginStripping?: number;
-  marginBoltBreaksFirst?: number;
-  drill?: number;
-  tapThread?: string;
-  holeDepth?: number;
-  torque?: number;
-  work?: string;
-  steps?: string[];
-}
-
-export interface RepairPlan {
-  rows: RepairRow[];
-  rankingRule: string;
 }
 
 export interface ReportMeta {
@@ -106,3 +88,5 @@ export interface WorkbenchServices {
   defaultPreset: string;
   now(): Date;
 }
+
+export type {RepairPlan};

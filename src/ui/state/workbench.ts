@@ -9,7 +9,10 @@ import type {KeyEvent} from '../keys.js';
 import {lookup, type Context} from '../keymap.js';
 import {STEPS, fieldById, getValue, setValue, visibleFields, type FieldDef, type FormValues} from './fields.js';
 import {editText, parseField} from './field-text.js';
-import {evaluate} from './evaluate.js';
+import {evaluate, evaluateRepairs} from './evaluate.js';
+import {bodyHeight} from '../layout.js';
+import {wrapLines} from '../screens/scroll-view.js';
+import {helpLines} from '../screens/help-screen.js';
 
 export type Screen = 'joint' | 'repairs' | 'presets' | 'report' | 'help';
 
@@ -436,7 +439,10 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'list.up':
     case 'list.down': {
       const d = command === 'list.up' ? -1 : 1;
-      if (s.screen === 'repairs') return {...s, repairIndex: Math.max(0, s.repairIndex + d)};
+      if (s.screen === 'repairs') {
+        const n = evaluateRepairs(shownValues(s), svc, evaluate(shownValues(s), svc, s.units, s.ascii)).plan?.options.length ?? 0;
+        return {...s, repairIndex: Math.max(0, Math.min(n - 1, s.repairIndex + d))};
+      }
       const n = filteredPresets(s, svc).length;
       return {...s, presetList: {...s.presetList, index: Math.max(0, Math.min(n - 1, s.presetList.index + d))}};
     }
@@ -468,8 +474,15 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'scroll.pageDown': {
       const page = Math.max(1, s.size.rows - 6);
       const d = {'scroll.up': -1, 'scroll.down': 1, 'scroll.pageUp': -page, 'scroll.pageDown': page}[command];
-      if (s.screen === 'help') return {...s, helpScroll: Math.max(0, s.helpScroll + d)};
-      return {...s, report: {...s.report, scroll: Math.max(0, s.report.scroll + d)}};
+      const rows = bodyHeight(s.size) - 1;
+      const clamp = (x: number, lines: string[]) => Math.max(0, Math.min(x, wrapLines(lines, s.size.columns).length - rows));
+      if (s.screen === 'help') {
+        const ev = evaluate(shownValues(s), svc, s.units, s.ascii);
+        const rule = evaluateRepairs(shownValues(s), svc, ev).plan?.rankingRule;
+        return {...s, helpScroll: clamp(s.helpScroll + d, helpLines({ascii: s.ascii, sources: ev.result?.sources ?? [], rankingRule: rule}))};
+      }
+      const text = reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii)).text ?? '';
+      return {...s, report: {...s.report, scroll: clamp(s.report.scroll + d, text.split('\n'))}};
     }
     case 'report.format':
       return {...s, report: {format: s.report.format === 'markdown' ? 'text' : 'markdown', scroll: 0}};

@@ -1,0 +1,221 @@
+/**
+ * The workbench root: the size gate, the frame (header, preset line, screen,
+ * message, caution, key hints) and the one input handler that turns keys into
+ * commands. It renders state and dispatches input; the core computes.
+ */
+import React, {useEffect, useMemo, useRef, useState} from 'react';
+import {Box, Text, useApp, useInput, useStdout} from 'ink';
+import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
+import {normaliseKey} from './keys.js';
+import {hintText} from './keymap.js';
+import {contextsOf, handleKeys, isDirty, shownValues, type Screen, type WorkbenchState} from './state/workbench.js';
+import {evaluate, evaluateRepairs} from './state/evaluate.js';
+import {formatField} from './state/field-text.js';
+import {fieldById} from './state/fields.js';
+import type {WorkbenchServices} from './services.js';
+import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
+import {JointScreen} from './screens/joint-screen.js';
+import {PresetsScreen} from './screens/presets-screen.js';
+import {ReportScreen} from './screens/report-screen.js';
+import {RepairsScreen} from './screens/repairs-screen.js';
+import {HelpScreen} from './screens/help-screen.js';
+
+
+/** Terminal size that follows resizes; 0 or missing sizes fall back to 80x24. */
+export function useTerminalSize(): {columns: number; rows: number} {
+  const {stdout} = useStdout();
+  const read = () => ({columns: stdout.columns || MIN_COLUMNS, rows: stdout.rows || MIN_ROWS});
+  const [size, setSize] = useState(read);
+  useEffect(() => {
+    const onResize = () => setSize(read());
+    stdout.on('resize', onResize);
+    return () => {
+      stdout.off('resize', onResize);
+    };
+  }, [stdout]);
+  return size;
+}
+
+const TABS: readonly {screen: Screen; key: string; title: string}[] = [
+  {screen: 'joint', key: 'j', title: 'Joint'},
+  {screen: 'repairs', key: 'r', title: 'Repairs'},
+  {screen: 'presets', key: 'p', title: 'Presets'},
+  {screen: 'report', key: 'w', title: 'Report'},
+  {screen: 'help', key: '?', title: 'Help'},
+];
+
+function Header({state, width}: {state: WorkbenchState; width: number}) {
+  const t = useTheme();
+  const units = state.units === 'si' ? 'Units SI' : 'Units US';
+  return (
+    <Box width={width}>
+      <Text bold color={t.tone('accent')}>tapwright </Text>
+      {TABS.map(tab => (
+        <Text key={tab.screen} inverse={state.screen === tab.screen} bold={state.screen === tab.screen}>
+          {` ${tab.key} ${tab.title} `}
+        </Text>
+      ))}
+      <Text>{pad('', Math.max(0, width - 10 - 53 - units.length))}</Text>
+      <Text>{`  ${units}`}</Text>
+    </Box>
+  );
+}
+
+function PresetLine({state, width}: {state: WorkbenchState; width: number}) {
+  const t = useTheme();
+  const dirty = isDirty(state);
+  const tag = state.preset.readOnly ? ' (shipped demo, read-only)' : '';
+  const mark = dirty ? '  * unsaved changes' : '  saved';
+  const name = fit(state.preset.name, Math.max(8, width - 9 - tag.length - mark.length), t.sym.ellipsis);
+  return (
+    <Box width={width}>
+      <Text>Preset: </Text>
+      <Text bold>{name}</Text>
+      <Text color={t.tone('dim')}>{tag}</Text>
+      <Text color={dirty ? t.tone('watch') : t.tone('dim')} bold={dirty}>
+        {mark}
+      </Text>
+    </Box>
+  );
+}
+
+function MessageLine({state, ev, width}: {state: WorkbenchState; ev: ReturnType<typeof evaluate>; width: number}) {
+  const t = useTheme();
+  let text = '';
+  let isError = false;
+  if (state.prompt) {
+    text = `${state.prompt.title}: ${state.prompt.buffer}${t.sym.cursor}`;
+  } else if (state.confirm) {
+    text = `${state.confirm.question} (y/n)`;
+  } else if (state.draftOffer) {
+    text = `Unsaved edits of ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')} (preset ${state.draftOffer.presetName}) found. Restore them? y/n`;
+  } else if (state.edit?.error) {
+    text = state.edit.error;
+    isError = true;
+  } else if (state.message) {
+    text = state.message.text;
+    isError = state.message.level === 'error';
+  } else if (state.screen === 'joint') {
+    const errors = Object.entries(ev.errors);
+    if (errors.length > 0) {
+      text = errors[0]![1];
+      isError = true;
+    } else if (ev.error) {
+      text = ev.error;
+      isError = true;
+    }
+  }
+  return (
+    <Text color={isError ? t.tone('fail') : state.prompt || state.confirm || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.draftOffer)}>
+      {fit(`${isError ? '! ' : ''}${text}`, width, t.sym.ellipsis) || ' '}
+    </Text>
+  );
+}
+
+function holeSummary(state: WorkbenchState, t: Theme): string {
+  const v = shownValues(state);
+  const parts = ['hole.holeState', 'hole.strippedDepth', 'hole.through', 'hole.depthAvailable', 'hole.wall'].map(id => {
+    const f = fieldById(id);
+    return `${f.label.toLowerCase()} ${formatField(f, id === 'hole.holeState' ? (v.hole.holeState ?? 'intact') : (v.hole as Record<string, unknown>)[id.slice(5)], state.units, t.ascii)}`;
+  });
+  return `${v.joint.thread ?? '?'}; ${parts.join(', ')}`;
+}
+
+export {MIN_COLUMNS, MIN_ROWS};
+
+export interface AppProps {
+  initial: WorkbenchState;
+  svc: WorkbenchServices;
+  theme: Theme;
+  /** Called with every new state (the launcher keeps it for the draft on a signal). */
+  onState?: (s: WorkbenchState) => void;
+  /** Called once when the user quits; the app then exits. */
+  onQuit?: (s: WorkbenchState) => void;
+}
+
+function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: WorkbenchServices; columns: number; rows: number}) {
+  const t = useTheme();
+  const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
+  const caution = cautionLines(columns);
+  const height = rows - 1;
+  const bodyH = bodyHeight({columns, rows});
+  const hints = hintText(contextsOf(state), t.ascii, columns);
+  let body: React.ReactNode;
+  switch (state.screen) {
+    case 'joint':
+      body = <JointScreen state={state} ev={ev} svc={svc} width={columns} height={bodyH} />;
+      break;
+    case 'presets':
+      body = <PresetsScreen state={state} svc={svc} width={columns} height={bodyH} />;
+      break;
+    case 'report':
+      body = <ReportScreen state={state} ev={ev} svc={svc} width={columns} height={bodyH} />;
+      break;
+    case 'repairs':
+      body = <RepairsScreen rep={evaluateRepairs(shownValues(state), svc, ev)} index={state.repairIndex} units={state.units} holeSummary={holeSummary(state, t)} width={columns} height={bodyH} />;
+      break;
+    case 'help': {
+      const plan = evaluateRepairs(shownValues(state), svc, ev).plan;
+      body = <HelpScreen ascii={t.ascii} sources={ev.result?.sources ?? []} rankingRule={plan?.rankingRule} scroll={state.helpScroll} width={columns} height={bodyH} />;
+      break;
+    }
+  }
+  return (
+    <Box flexDirection="column" width={columns} height={height}>
+      <Header state={state} width={columns} />
+      <PresetLine state={state} width={columns} />
+      <Box height={bodyH} width={columns}>
+        {body}
+      </Box>
+      <MessageLine state={state} ev={ev} width={columns} />
+      {caution.map((l, i) => (
+        <Text key={`c${i}`} color={t.tone('watch')}>
+          {l}
+        </Text>
+      ))}
+      <Text color={t.tone('dim')}>{hints}</Text>
+    </Box>
+  );
+}
+
+export function App({initial, svc, theme, onState, onQuit}: AppProps) {
+  const [state, setState] = useState(initial);
+  const stateRef = useRef(state);
+  const {exit} = useApp();
+  const {columns, rows} = useTerminalSize();
+  const sized = useMemo(() => ({columns, rows}), [columns, rows]);
+
+  useEffect(() => {
+    stateRef.current = {...stateRef.current, size: sized};
+    setState(s => ({...s, size: sized}));
+  }, [sized]);
+
+  useInput((input, key) => {
+    const before = stateRef.current;
+    const next = handleKeys(before, normaliseKey(input, key), svc);
+    if (next === before) return;
+    stateRef.current = next;
+    if (next.quit) {
+      onQuit?.(next);
+      exit();
+      return;
+    }
+    setState(next);
+    onState?.(next);
+  });
+
+  const small = columns < MIN_COLUMNS || rows < MIN_ROWS;
+  return (
+    <ThemeProvider theme={theme}>
+      {small ? (
+        <Box flexDirection="column">
+          {wrap(`Terminal is ${columns}x${rows}; tapwright needs at least ${MIN_COLUMNS}x${MIN_ROWS}. Enlarge it, or press q to quit.`, Math.max(10, columns - 1), Math.max(1, rows - 1), '').map((l, i) => (
+            <Text key={i}>{l}</Text>
+          ))}
+        </Box>
+      ) : (
+        <Frame state={state} svc={svc} columns={columns} rows={rows} />
+      )}
+    </ThemeProvider>
+  );
+}

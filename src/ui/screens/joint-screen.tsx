@@ -1,0 +1,251 @@
+/**
+ * The joint screen: the steps of inputs on the left, the live results (or the
+ * full flags) on the right, the most important flags underneath.
+ */
+import React from 'react';
+import {Box, Text} from 'ink';
+import type {Flag} from '../../core/types.js';
+import {formatQuantity} from '../../core/units.js';
+import {STEPS, getValue, type FieldDef} from '../state/fields.js';
+import {fieldUnit, formatField} from '../state/field-text.js';
+import {currentField, currentFields, pickerItems, shownValues, type WorkbenchState} from '../state/workbench.js';
+import type {Evaluation} from '../state/evaluate.js';
+import type {WorkbenchServices} from '../services.js';
+import {useTheme, fit, pad, wrap, type Theme} from '../theme.js';
+import {loadShareLines} from '../components/pictures.js';
+import {Readout} from './readout.js';
+
+interface Props {
+  state: WorkbenchState;
+  ev: Evaluation;
+  svc: WorkbenchServices;
+  width: number;
+  height: number;
+}
+
+const LEVEL_WORD: Record<Flag['level'], string> = {fail: 'FAIL', watch: 'WATCH', info: 'NOTE'};
+const LEVEL_ORDER: Record<Flag['level'], number> = {fail: 0, watch: 1, info: 2};
+
+export function sortedFlags(flags: readonly Flag[]): Flag[] {
+  return [...flags].sort((a, b) => LEVEL_ORDER[a.level] - LEVEL_ORDER[b.level]);
+}
+
+function StepTabs({state, width}: {state: WorkbenchState; width: number}) {
+  const t = useTheme();
+  return (
+    <Box width={width}>
+      {STEPS.map((s, i) => (
+        <Text key={s.id} inverse={i === state.step} bold={i === state.step}>
+          {` ${i + 1} ${s.title} `}
+        </Text>
+      ))}
+      <Text color={t.tone('dim')}>{fit(`  ${t.ascii ? '<- ->' : '← →'} steps`, Math.max(0, width - 62), '')}</Text>
+    </Box>
+  );
+}
+
+function fieldValueText(state: WorkbenchState, f: FieldDef, t: Theme): string {
+  if (state.edit?.fieldId === f.id) return `${state.edit.buffer}${t.sym.cursor}`;
+  if (state.picker?.fieldId === f.id && f.kind === 'thread') return `${state.picker.filter}${t.sym.cursor}`;
+  const v = getValue(shownValues(state), f.id);
+  return formatField(f, v, state.units, t.ascii);
+}
+
+function FieldRows({state, ev, width}: {state: WorkbenchState; ev: Evaluation; width: number}) {
+  const t = useTheme();
+  const fields = currentFields(state);
+  const sel = currentField(state);
+  const labelW = 20;
+  return (
+    <>
+      {fields.map(f => {
+        const isSel = f === sel;
+        const err = ev.errors[f.id] ?? (state.edit?.fieldId === f.id ? state.edit.error : undefined);
+        const unit = f.kind === 'quantity' && state.edit?.fieldId === f.id ? ` ${fieldUnit(f, state.units, t.ascii)}` : '';
+        const mark = err ? '!' : isSel ? t.sym.select : ' ';
+        const value = fit(fieldValueText(state, f, t) + unit, width - labelW - 2, t.sym.ellipsis);
+        return (
+          <Box key={f.id} width={width}>
+            <Text color={err ? t.tone('fail') : undefined} bold={isSel}>{`${mark} `}</Text>
+            <Text bold={isSel}>{pad(f.label, labelW - 1)} </Text>
+            <Text inverse={isSel && !state.edit && !state.picker} color={err ? t.tone('fail') : undefined}>
+              {value}
+            </Text>
+          </Box>
+        );
+      })}
+    </>
+  );
+}
+
+function PickerList({state, svc, width, height}: {state: WorkbenchState; svc: WorkbenchServices; width: number; height: number}) {
+  const t = useTheme();
+  const p = state.picker!;
+  const items = pickerItems(state, svc);
+  const isThread = p.fieldId === 'thread';
+  const marked = p.index >= 0 ? items[p.index] : undefined;
+  const sourceLines = marked?.item ? wrap(`${marked.item.detail}. Source: ${marked.item.provenance.source}`, width, 3, t.sym.ellipsis) : [];
+  const listRows = Math.max(1, height - 1 - sourceLines.length);
+  const start = Math.max(0, Math.min(p.index - Math.floor(listRows / 2), items.length - listRows));
+  const header = isThread
+    ? p.filter === ''
+      ? 'Type a designation; matches show here'
+      : items.length === 0
+        ? `No match for "${p.filter}": Enter takes it as typed`
+        : `Matches (${t.ascii ? 'Up/Down' : '↑↓'} mark, Enter takes)`
+    : `Filter: ${p.filter || '(type to narrow)'}  ${items.length} found`;
+  return (
+    <Box flexDirection="column" width={width} height={height}>
+      <Text color={t.tone('dim')}>{fit(header, width, t.sym.ellipsis)}</Text>
+      {items.slice(start, start + listRows).map((it, i) => {
+        const isMarked = start + i === p.index;
+        return (
+          <Text key={it.value} inverse={isMarked}>
+            {pad(`${isMarked ? t.sym.select : ' '} ${it.label}`, width)}
+          </Text>
+        );
+      })}
+      {sourceLines.map((l, i) => (
+        <Text key={`s${i}`} color={t.tone('info')}>
+          {l}
+        </Text>
+      ))}
+    </Box>
+  );
+}
+
+function ThreadInfo({ev, state, width, height}: {ev: Evaluation; state: WorkbenchState; width: number; height: number}) {
+  const t = useTheme();
+  const g = ev.result?.geometry;
+  if (!g || height <= 0) return null;
+  const L = (v: number) => formatQuantity(v, 'length', state.units, {ascii: t.ascii, significant: 4});
+  const a = (v: number) => (state.units === 'si' ? `${v.toFixed(1)} mm²` : `${(v / 645.16).toFixed(4)} in²`).replace('²', t.ascii ? '^2' : '²');
+  const lines = [
+    `${g.spec.designation} (${g.spec.family}${g.spec.series ? ` ${g.spec.series}` : ''})`,
+    `pitch ${L(g.pitch)}${g.spec.tpi ? ` (${g.spec.tpi} tpi)` : ''}${g.spec.isStandardPitch ? '' : ' special pitch'}`,
+    `d2 ${L(g.pitchDiameter)}  d3 ${L(g.minorDiameterExternal)}`,
+    `stress area As ${a(g.stressArea)}`,
+    `classes ${g.spec.toleranceInternal}/${g.spec.toleranceExternal}${g.spec.toleranceDefaulted ? ' (default)' : ''}`,
+    `limits: ${g.limitsProvenance.method === 'table' ? 'table' : 'formulas'}, ${g.limitsProvenance.source}`,
+    ...g.notes,
+  ];
+  return (
+    <Box flexDirection="column" width={width}>
+      {lines.slice(0, height).map((l, i) => (
+        <Text key={i} color={i === 0 ? undefined : t.tone('dim')}>
+          {fit(l, width, t.sym.ellipsis)}
+        </Text>
+      ))}
+    </Box>
+  );
+}
+
+function LeftColumn({state, ev, svc, width, height}: Props) {
+  const t = useTheme();
+  const fields = currentFields(state);
+  const sel = currentField(state);
+  const rest = height - fields.length;
+  if (state.picker) {
+    return (
+      <Box flexDirection="column" width={width} height={height}>
+        <FieldRows state={state} ev={ev} width={width} />
+        <PickerList state={state} svc={svc} width={width} height={rest} />
+      </Box>
+    );
+  }
+  const helpLines = sel ? wrap(sel.help, width, 2, t.sym.ellipsis) : [];
+  const below = rest - helpLines.length - 1;
+  const shares = ev.result?.loadShare ?? [];
+  const isThreadStep = STEPS[state.step]?.id === 'thread';
+  return (
+    <Box flexDirection="column" width={width} height={height}>
+      <FieldRows state={state} ev={ev} width={width} />
+      {helpLines.map((l, i) => (
+        <Text key={`h${i}`} color={t.tone('dim')}>
+          {l}
+        </Text>
+      ))}
+      {isThreadStep ? (
+        <ThreadInfo ev={ev} state={state} width={width} height={below + 1} />
+      ) : below >= 2 && shares.length > 0 ? (
+        <Box flexDirection="column" marginTop={1}>
+          <Text bold>{fit('Load share per thread, 1 = loaded face', width, t.sym.ellipsis)}</Text>
+          {loadShareLines(shares, width, below - 1, t).map((l, i) => (
+            <Text key={`l${i}`}>{l}</Text>
+          ))}
+        </Box>
+      ) : null}
+    </Box>
+  );
+}
+
+function FlagsPanel({flags, width, height}: {flags: Flag[]; width: number; height: number}) {
+  const t = useTheme();
+  const lines: {text: string; tone?: Flag['level']}[] = [];
+  for (const f of sortedFlags(flags)) {
+    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width, 4, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, tone: f.level}));
+  }
+  return (
+    <Box flexDirection="column" width={width} height={height}>
+      <Text bold>{`All flags (${flags.length}); f back to results`}</Text>
+      {flags.length === 0 ? <Text>No flags: nothing to watch in this joint.</Text> : null}
+      {lines.slice(0, height - 1).map((l, i) => (
+        <Text key={i} color={l.tone === 'fail' ? t.tone('fail') : l.tone === 'watch' ? t.tone('watch') : undefined}>
+          {l.text}
+        </Text>
+      ))}
+    </Box>
+  );
+}
+
+function FlagSummary({ev, width, lines}: {ev: Evaluation; width: number; lines: number}) {
+  const t = useTheme();
+  const flags = sortedFlags(ev.result?.flags ?? []);
+  if (!ev.result) return <Box height={lines} />;
+  if (flags.length === 0) {
+    return (
+      <Box height={lines} flexDirection="column">
+        <Text color={t.tone('ok')}>{fit('OK  no flags raised for this joint', width, t.sym.ellipsis)}</Text>
+      </Box>
+    );
+  }
+  const shown = flags.slice(0, lines);
+  const more = flags.length - shown.length;
+  return (
+    <Box height={lines} flexDirection="column">
+      {shown.map((f, i) => {
+        const suffix = i === shown.length - 1 && more > 0 ? `  (+${more} more: f)` : '';
+        const text = fit(`${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`, width - suffix.length, t.sym.ellipsis) + suffix;
+        return (
+          <Text key={f.code + i} color={f.level === 'fail' ? t.tone('fail') : f.level === 'watch' ? t.tone('watch') : undefined} bold={f.level === 'fail'}>
+            {text}
+          </Text>
+        );
+      })}
+    </Box>
+  );
+}
+
+export function JointScreen(props: Props) {
+  const {state, ev, width, height} = props;
+  const flagLines = height >= 20 ? 4 : 2;
+  const bodyH = height - 1 - flagLines;
+  const leftW = Math.max(33, Math.floor(width * 0.42));
+  const rightW = width - leftW - 1;
+  const problem = ev.error ?? Object.values(ev.errors)[0];
+  return (
+    <Box flexDirection="column" width={width} height={height}>
+      <StepTabs state={state} width={width} />
+      <Box height={bodyH}>
+        <LeftColumn {...props} width={leftW} height={bodyH} />
+        <Box width={1} />
+        {state.showFlags ? (
+          <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
+        ) : (
+          <Readout result={ev.result} input={ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
+        )}
+      </Box>
+      <FlagSummary ev={ev} width={width} lines={flagLines} />
+    </Box>
+  );
+}

@@ -1,0 +1,217 @@
+/**
+ * A stdout for Ink that repaints only the cells that changed.
+ *
+ * Ink 6.8 redraws the whole frame on every update (about 1.7 KB at 80x24), and
+ * its incremental mode leaves ghost lines (fixed only in Ink 7, which needs
+ * Node 22). This writer sits between Ink and the terminal: it recognises Ink's
+ * frame writes (erase the old lines, then the new text ending in a newline),
+ * compares the new frame with the one on screen cell by cell, and writes only
+ * the changed runs at absolute positions. The frame is anchored at the top of
+ * the alternate screen (the launcher homes the cursor first), so a position is
+ * never relative to where the cursor happens to be. Anything else Ink writes
+ * (cursor show/hide, a clear on resize or exit) passes through unchanged, and
+ * the next frame is then painted in full.
+ */
+import {EventEmitter} from 'node:events';
+
+const SYNC_BEGIN = '\u001B[?2026h';
+const SYNC_END = '\u001B[?2026l';
+/** Ink's eraseLines(n): n-1 times "erase line, up one", then "erase line, column 1". */
+const ERASE_PREFIX = /^(?:\u001B\[2K\u001B\[1A)*\u001B\[2K\u001B\[G/;
+/** Text made only of characters and colour/style sequences. */
+const PLAIN_OR_SGR = /^(?:[^\u001B]|\u001B\[[0-9;]*m)*$/;
+
+interface Cell {
+  ch: string;
+  style: string;
+}
+
+interface Attrs {
+  flags: Set<string>;
+  fg: string;
+  bg: string;
+}
+
+function applySgr(a: Attrs, params: string): void {
+  const p = params === '' ? [0] : params.split(';').map(Number);
+  for (let i = 0; i < p.length; i++) {
+    const n = p[i]!;
+    if (n === 0) {
+      a.flags.clear();
+      a.fg = '';
+      a.bg = '';
+    } else if (n === 22) {
+      a.flags.delete('1');
+      a.flags.delete('2');
+    } else if (n >= 23 && n <= 29) a.flags.delete(String(n - 20));
+    else if (n >= 1 && n <= 9) a.flags.add(String(n));
+    else if ((n >= 30 && n <= 37) || (n >= 90 && n <= 97)) a.fg = String(n);
+    else if (n === 39) a.fg = '';
+    else if ((n >= 40 && n <= 47) || (n >= 100 && n <= 107)) a.bg = String(n);
+    else if (n === 49) a.bg = '';
+    else if (n === 38 || n === 48) {
+      const len = p[i + 1] === 5 ? 3 : p[i + 1] === 2 ? 5 : 1;
+      const v = p.slice(i, i + len).join(';');
+      if (n === 38) a.fg = v;
+      else a.bg = v;
+      i += len - 1;
+    }
+  }
+}
+
+function styleOf(a: Attrs): string {
+  return [...[...a.flags].sort(), a.fg, a.bg].filter(Boolean).join(';');
+}
+
+/** True for characters every terminal draws one cell wide (no wide, combining or zero-width ones). */
+function isNarrow(ch: string): boolean {
+  const c = ch.codePointAt(0) ?? 0;
+  if (c < 0x300) return c >= 0x20;
+  if (c >= 0x370 && c < 0x590) return !(c >= 0x483 && c <= 0x489);
+  if (c >= 0x2010 && c <= 0x2027) return true;
+  if (c >= 0x2030 && c <= 0x205e) return true;
+  return c >= 0x2070 && c <= 0x2bff;
+}
+
+/** Split one frame line into cells; undefined when it holds a character of uncertain width. */
+export function toCells(line: string): Cell[] | undefined {
+  const attrs: Attrs = {flags: new Set(), fg: '', bg: ''};
+  const cells: Cell[] = [];
+  const re = /\u001B\[([0-9;]*)m|([\s\S])/gu;
+  let style = '';
+  for (const m of line.matchAll(re)) {
+    if (m[1] !== undefined) {
+      applySgr(attrs, m[1]);
+      style = styleOf(attrs);
+      continue;
+    }
+    const ch = m[2]!;
+    if (!isNarrow(ch)) return undefined;
+    cells.push({ch, style});
+  }
+  return cells;
+}
+
+const at = (row: number, col: number) => `\u001B[${row};${col}H`;
+const sgr = (style: string) => (style === '' ? '\u001B[0m' : `\u001B[0;${style}m`);
+
+/** The bytes that turn `prev` (on screen) into `next`, both lists of frame lines. */
+export function diffFrames(prev: readonly string[], next: readonly string[]): string {
+  let out = '';
+  let pen = '';
+  const setPen = (style: string) => {
+    if (style !== pen) {
+      out += sgr(style);
+      pen = style;
+    }
+  };
+  for (let r = 0; r < next.length; r++) {
+    const a = prev[r] ?? '';
+    const b = next[r]!;
+    if (a === b) continue;
+    const ca = toCells(a);
+    const cb = toCells(b);
+    if (!ca || !cb) {
+      setPen('');
+      out += `${at(r + 1, 1)}${b}\u001B[0m\u001B[K`;
+      continue;
+    }
+    const blank: Cell = {ch: ' ', style: ''};
+    const same = (i: number) => {
+      const x = ca[i] ?? blank;
+      const y = cb[i] ?? blank;
+      return x.ch === y.ch && x.style === y.style;
+    };
+    const width = Math.max(ca.length, cb.length);
+    let i = 0;
+    while (i < cb.length) {
+      if (same(i)) {
+        i++;
+        continue;
+      }
+      // A run of changes; short stretches of equal cells inside it are rewritten
+      // rather than jumped over (a jump costs about as much as six cells).
+      let end = i + 1;
+      for (let j = end; j < cb.length; j++) {
+        if (!same(j)) end = j + 1;
+        else if (j - end >= 6) break;
+      }
+      out += at(r + 1, i + 1);
+      for (let k = i; k < end; k++) {
+        setPen(cb[k]!.style);
+        out += cb[k]!.ch;
+      }
+      i = end;
+    }
+    if (ca.length > cb.length) {
+      let tailDiffers = false;
+      for (let k = cb.length; k < width; k++) if (!same(k)) tailDiffers = true;
+      if (tailDiffers) {
+        setPen('');
+        out += `${at(r + 1, cb.length + 1)}\u001B[K`;
+      }
+    }
+  }
+  if (prev.length > next.length) {
+    setPen('');
+    out += `${at(next.length + 1, 1)}\u001B[J`;
+  }
+  setPen('');
+  return out;
+}
+
+/** Paint a whole frame from the top-left corner. */
+export function paintFrame(next: readonly string[]): string {
+  return `\u001B[H${next.map(l => `${l}\u001B[0m\u001B[K`).join('\r\n')}\r\n\u001B[J`;
+}
+
+export interface FrameWriter extends EventEmitter {
+  readonly isTTY: true;
+  readonly columns: number;
+  readonly rows: number;
+  write(chunk: string): boolean;
+  /** Bytes passed to the terminal so far (for the bench). */
+  bytesWritten: number;
+  /** Forget what is on screen: the next frame is painted in full. */
+  invalidate(): void;
+}
+
+/** Wrap a terminal stream; Ink writes to the wrapper. */
+export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
+  let screen: string[] | undefined;
+  const emitter = new EventEmitter() as FrameWriter;
+  const send = (s: string) => {
+    if (s === '') return true;
+    emitter.bytesWritten += Buffer.byteLength(s);
+    return out.write(s);
+  };
+  Object.defineProperties(emitter, {
+    isTTY: {value: true},
+    columns: {get: () => out.columns},
+    rows: {get: () => out.rows},
+  });
+  emitter.bytesWritten = 0;
+  emitter.invalidate = () => {
+    screen = undefined;
+  };
+  emitter.write = (chunk: string) => {
+    const data = String(chunk);
+    if (data === SYNC_BEGIN || data === SYNC_END) return send(data);
+    const body = data.replace(ERASE_PREFIX, '');
+    if (!body.endsWith('\n') || !PLAIN_OR_SGR.test(body)) {
+      screen = undefined;
+      return send(data);
+    }
+    const lines = body.slice(0, -1).split('\n');
+    const bytes = screen ? diffFrames(screen, lines) : paintFrame(lines);
+    screen = lines;
+    // Leave the cursor where Ink believes it is: at the start of the line below the frame.
+    return send(bytes === '' ? '' : `${bytes}${at(lines.length + 1, 1)}`);
+  };
+  out.on('resize', () => {
+    // A resize may reflow or clear what is on screen: paint the next frame in full.
+    screen = undefined;
+    emitter.emit('resize');
+  });
+  return emitter;
+}

@@ -1,0 +1,75 @@
+import {EventEmitter} from 'node:events';
+import {describe, expect, it} from 'vitest';
+import {createFrameWriter, diffFrames, toCells} from '../../src/ui/terminal/frame-writer.js';
+import {VirtualTerminal} from '../support/virtual-terminal.js';
+
+function fakeOut(term: VirtualTerminal) {
+  const out = new EventEmitter() as EventEmitter & {columns: number; rows: number; isTTY: boolean; write: (s: string) => boolean; bytes: number};
+  out.columns = 80;
+  out.rows = 24;
+  out.isTTY = true;
+  out.bytes = 0;
+  out.write = (s: string) => {
+    out.bytes += Buffer.byteLength(s);
+    term.write(s);
+    return true;
+  };
+  return out;
+}
+
+/** What Ink 6.8's standard renderer writes for a frame after one of `prevLines` lines. */
+const inkWrite = (frame: string, prevLines: number) =>
+  (prevLines > 0 ? `${'\u001B[2K\u001B[1A'.repeat(prevLines - 1)}\u001B[2K\u001B[G` : '') + `${frame}\n`;
+
+describe('frame writer', () => {
+  it('leaves exactly the latest frame on screen when frames change content and height', () => {
+    const term = new VirtualTerminal();
+    const w = createFrameWriter(fakeOut(term) as unknown as NodeJS.WriteStream);
+    const frames = [
+      ['title', 'value 0', 'line c', 'line d'],
+      ['title', 'value 1', 'line c'],
+      ['title', 'value 22 longer', 'line c', 'line d', 'line e'],
+      ['\u001B[1mtitle\u001B[22m', 'value 3', ''],
+    ];
+    let prev = 0;
+    for (const f of frames) {
+      w.write(inkWrite(f.join('\n'), prev));
+      prev = f.length + 1;
+      expect(term.text()).toBe(f.map(l => l.replace(/\u001B\[[0-9;]*m/g, '')).join('\n').replace(/\n+$/, ''));
+    }
+    // Ink's own clear (on exit) still lands on the right lines.
+    w.write('\u001B[2K\u001B[1A'.repeat(prev - 1) + '\u001B[2K\u001B[G');
+    expect(term.text()).toBe('');
+  });
+
+  it('writes a few bytes for a one-digit change', () => {
+    const a = ['Engaged length      12.0 mm', 'Stripping  48.0 kN'];
+    const b = ['Engaged length      12.5 mm', 'Stripping  50.0 kN'];
+    const bytes = diffFrames(a, b);
+    expect(bytes.length).toBeLessThan(40);
+    const term = new VirtualTerminal();
+    term.write(`\u001B[H${a.join('\r\n')}`);
+    term.write(bytes);
+    expect(term.text()).toBe(b.join('\n'));
+  });
+
+  it('rewrites a whole line when it holds a character of uncertain width', () => {
+    expect(toCells('abc')).toHaveLength(3);
+    expect(toCells('a\u4e2d')).toBeUndefined();
+    const term = new VirtualTerminal();
+    term.write('\u001B[Hname: x');
+    term.write(diffFrames(['name: x'], ['name: \u4e2d']));
+    expect(term.text()).toBe('name: \u4e2d');
+  });
+
+  it('passes other writes through and paints the next frame in full', () => {
+    const term = new VirtualTerminal();
+    const out = fakeOut(term);
+    const w = createFrameWriter(out as unknown as NodeJS.WriteStream);
+    w.write(inkWrite('one\ntwo', 0));
+    w.write('\u001B[?25h');
+    out.emit('resize');
+    w.write(inkWrite('one\nthree', 3));
+    expect(term.text()).toBe('one\nthree');
+  });
+});
