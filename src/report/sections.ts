@@ -188,7 +188,7 @@ export function verdict(flags: Flag[]): {word: string; text: string} {
   const counts = `${n('fail')} fail, ${n('watch')} watch, ${n('info')} info`;
   if (n('fail') > 0) return {word: 'FAIL', text: `at least one check failed (${counts})`};
   if (n('watch') > 0) return {word: 'WATCH', text: `no check failed; look at the watch flags (${counts})`};
-  return {word: 'NO FLAGS RAISED', text: `no check at fail or watch level (${counts}); the cautions still apply`};
+  return {word: 'NO FLAGS', text: `no check at fail or watch level (${counts}); the cautions still apply`};
 }
 
 /** Which limits of size and which data the numbers rest on. */

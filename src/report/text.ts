@@ -43,11 +43,13 @@ export function wrapText(text: string, first: string, rest: string, width = TEXT
   return lines.map(l => l.trimEnd());
 }
 
-function rowLines(r: Row): string[] {
+type Wrap = (text: string, first: string, rest: string) => string[];
+
+function rowLines(r: Row, wrap: Wrap): string[] {
   const label = `  ${r.label}`;
   const first = label.length + 2 > LABEL ? `${label}  ` : label.padEnd(LABEL);
-  const out = wrapText(r.value, first, ' '.repeat(LABEL));
-  if (r.note) out.push(...wrapText(`(${r.note})`, ' '.repeat(LABEL + 2), ' '.repeat(LABEL + 3)));
+  const out = wrap(r.value, first, ' '.repeat(LABEL));
+  if (r.note) out.push(...wrap(`(${r.note})`, ' '.repeat(LABEL + 2), ' '.repeat(LABEL + 3)));
   return out;
 }
 
@@ -80,20 +82,22 @@ export function toAscii(text: string): string {
  */
 export function formatCheckText(result: CheckResult, input: JointInput, opts: {units: UnitSystem; ascii?: boolean}): string {
   const f: Fmt = {units: opts.units, ascii: opts.ascii ?? false};
+  // Convert to ASCII before wrapping, so a symbol that grows ("²" -> "^2") cannot push a line past 80.
+  const wrap: Wrap = (text, first, rest) => wrapText(f.ascii ? toAscii(text) : text, first, rest);
   const heavy = (f.ascii ? '=' : '═').repeat(TEXT_WIDTH);
   const light = (f.ascii ? '-' : '─').repeat(TEXT_WIDTH);
   const v = verdict(result.flags);
   const out: string[] = [];
-  out.push(...wrapText(`Joint check: ${result.geometry.spec.designation}, bolt ${result.materials.bolt.id}, ${internalWords(result, input)}`, '', '  '));
-  out.push(...wrapText(`${v.word}: ${v.text}`, 'RESULT ', '       '));
+  out.push(...wrap(`Joint check: ${result.geometry.spec.designation}, bolt ${result.materials.bolt.id}, ${internalWords(result, input)}`, '', '  '));
+  out.push(...wrap(`${v.word}: ${v.text}`, 'RESULT ', '       '));
   out.push(heavy);
 
   out.push('', 'INPUTS');
-  for (const r of inputRows(result, input, f)) out.push(...rowLines(r));
+  for (const r of inputRows(result, input, f)) out.push(...rowLines(r, wrap));
 
   for (const g of resultGroups(result, input, f)) {
-    out.push('', ...wrapText(g.title.toUpperCase(), '', ''));
-    for (const r of g.rows) out.push(...rowLines(r));
+    out.push('', ...wrap(g.title.toUpperCase(), '', ''));
+    for (const r of g.rows) out.push(...rowLines(r, wrap));
   }
 
   out.push('', 'FLAGS');
@@ -101,23 +105,23 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
   for (const flag of result.flags) {
     const word = levelWord(flag.level).padEnd(6);
     out.push(`  ${word} ${flag.code}`);
-    out.push(...wrapText(flag.message, '         ', '         '));
+    out.push(...wrap(flag.message, '         ', '         '));
   }
 
   if (result.notes.length > 0) {
     out.push('', 'NOTES');
-    for (const n of result.notes) out.push(...wrapText(n, '  - ', '    '));
+    for (const n of result.notes) out.push(...wrap(n, '  - ', '    '));
   }
 
   out.push('', 'LIMITS USED');
-  for (const l of limitsLines(result, f)) out.push(...wrapText(l, '  - ', '    '));
+  for (const l of limitsLines(result, f)) out.push(...wrap(l, '  - ', '    '));
 
   out.push('', 'SOURCES');
-  for (const s of sourceLines(result)) out.push(...wrapText(s, '  - ', '    '));
+  for (const s of sourceLines(result)) out.push(...wrap(s, '  - ', '    '));
 
   out.push('', light);
-  for (const c of CAUTION_LINES) out.push(...wrapText(c, '', '  '));
+  for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
 
   const text = `${out.join('\n')}\n`;
-  return f.ascii ? toAscii(text) : text;
+  return f.ascii ? toAscii(text) : text; // labels and rules are ASCII already; this is a safety net
 }

@@ -75,7 +75,7 @@ describe('formatCheckMarkdown', () => {
     expect(plain).toContain('| Preset | (none: entered by hand) |');
     expect(plain).toContain('| Asset |  |');
     expect(plain).toContain('No flags were raised.');
-    expect(plain).toContain('**NO FLAGS RAISED**');
+    expect(plain).toContain('**NO FLAGS**');
     expect(plain).toMatch(/\| Tightening torque \| 29\.5 ft·lbf \|/);
   });
 

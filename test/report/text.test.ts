@@ -21,7 +21,7 @@ describe('formatCheckText', () => {
   it('states the verdict with a level word', () => {
     expect(si).toMatch(/^RESULT FAIL: at least one check failed \(1 fail, 1 watch, 1 info\)/m);
     const clean = formatCheckText(demoResult({flags: []}), DEMO_INPUT, {units: 'si'});
-    expect(clean).toMatch(/RESULT NO FLAGS RAISED/);
+    expect(clean).toMatch(/RESULT NO FLAGS/);
     expect(clean).toMatch(/FLAGS\n {2}none/);
   });
 

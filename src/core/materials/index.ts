@@ -74,6 +74,7 @@ export function parentMaterial(id: string): ParentMaterial | undefined {
   return DATA.parentMaterials.find(m => norm(m.id) === key);
 }
 
+/** Every parent (tapped-hole) material, in display order; strengths and moduli in MPa. */
 export function listParentMaterials(): ParentMaterial[] {
   return [...DATA.parentMaterials];
 }
@@ -93,6 +94,7 @@ export function nutClassRows(id: string): NutClass[] {
   return DATA.nutClasses.filter(n => norm(n.id) === key);
 }
 
+/** Every nut class row (one per size range), in display order; strengths in MPa. */
 export function listNutClasses(): NutClass[] {
   return [...DATA.nutClasses];
 }
