@@ -30,7 +30,7 @@ export interface BucklingResult {
   slenderness: number;
   transitionSlenderness: number;
   endConstant: number;
-  /** Critical load / applied load. */
+  /** Critical load / applied load, capped at 1e6. */
   margin: number;
 }
 
@@ -50,5 +50,5 @@ export function buckling(load: number, rootDiameter: number, length: number, end
     method = 'johnson';
     criticalLoad = A * (yieldStrength - ((yieldStrength * length) / (2 * Math.PI * k)) ** 2 / (C * elasticModulus));
   }
-  return {criticalLoad, method, slenderness, transitionSlenderness: transition, endConstant: C, margin: load > 0 ? criticalLoad / load : Infinity};
+  return {criticalLoad, method, slenderness, transitionSlenderness: transition, endConstant: C, margin: load > 0 ? Math.min(1e6, criticalLoad / load) : Infinity};
 }

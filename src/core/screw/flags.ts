@@ -22,6 +22,7 @@ export interface FlagContext {
   flankAngle: number;
   allowableOverride?: number;
   collarIncomplete: boolean;
+  /** False when the size/pitch pair is not in the listed series (square threads have none). */
   pitchListed: boolean;
 }
 

@@ -99,7 +99,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
       allowablePressure: input.allowablePressure !== undefined
         ? {min: input.allowablePressure, max: input.allowablePressure, condition: 'given', source: 'user'}
         : allow ?? null,
-      stripping: {nutForce: strip.nutForce, screwForce: strip.screwForce, nutArea: strip.nutArea, screwArea: strip.screwArea, weaker: strip.weaker, margin: F > 0 ? strip.margin : 0},
+      stripping: {nutForce: strip.nutForce, screwForce: strip.screwForce, nutArea: strip.nutArea, screwArea: strip.screwArea, weaker: strip.weaker, margin: strip.margin},
     },
     screw: {material: scr.id, materialSource: input.screwYield !== undefined ? `yield given: ${screwYield} MPa; ${scr.source}` : scr.source, yield: screwYield, rm: scr.rm, elasticModulus: scr.elasticModulus},
     buckling: {
@@ -130,7 +130,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     r: partial, load: F, muMin: mu.min, flankAngle: g.flankAngle,
     allowableOverride: input.allowablePressure,
     collarIncomplete: (input.muCollar > 0) !== (input.collarDiameter > 0),
-    pitchListed: g.spec.isStandardPitch,
+    pitchListed: g.spec.isStandardPitch || g.spec.family === 'square',
   });
   return {...partial, flags};
 }

@@ -16,6 +16,9 @@
  *   (loss of nut-thread thickness, mm, e.g. measured as extra axial backlash) lowers it.
  */
 
+/** Margins are capped here: beyond a million times the load the number means nothing. */
+export const MARGIN_CAP = 1e6;
+
 export interface StrippingResult {
   /** Shear area of the nut threads, mm². */
   nutArea: number;
@@ -52,7 +55,7 @@ export function stripping(i: StrippingInput): StrippingResult {
   const screwForce = screwArea * i.screwShear;
   const weaker = nutForce <= screwForce ? 'nut' : 'screw';
   const weakest = Math.min(nutForce, screwForce);
-  return {nutArea, screwArea, nutForce, screwForce, weaker, margin: i.load > 0 ? weakest / i.load : Infinity};
+  return {nutArea, screwArea, nutForce, screwForce, weaker, margin: i.load > 0 ? Math.min(MARGIN_CAP, weakest / i.load) : Infinity};
 }
 
 /** Mean flank pressure of the nut, MPa: 2F / (pi dm Le) (Shigley 9th ed. Eq. 8-10, all turns). */

@@ -3,18 +3,14 @@
  *
  * ISO 2904 metric trapezoidal threads (basic dimensions; ISO 2901 profile, 30 deg):
  *   crest clearance ac by pitch: 0.15 mm (P 1.5), 0.25 mm (P 2 to 5), 0.5 mm (P 6 to 12),
- *   1 mm (P 14 to 44). The pitch list per ISO 2902/2904 is given below; which pitch is the
- *   "preferred" one for each diameter (ISO 2904 / DIN 103 first choice) is from memory.
+ *   1 mm (P 14 to 44). Which pitch is the "preferred" one for each diameter (ISO 2904 /
+ *   DIN 103 first choice) is from memory. Whether a pitch is listed at all is the shared
+ *   thread tables' answer (src/core/threads).
  *
  * ASME B1.5 general-purpose Acme (29 deg): basic rows from Machinery's Handbook, 27th ed.,
  *   Table 3 "General Purpose Acme Single-Start Screw Thread Data" (ASME/ANSI B1.5-1988).
  *   Preferred pitches: Shigley's Mechanical Engineering Design, 9th ed., Table 8-3.
  */
-
-/** Pitches of the ISO 2902 trapezoidal pitch list, mm. */
-export const TRAPEZOIDAL_PITCHES: readonly number[] = [
-  1.5, 2, 3, 4, 5, 6, 7, 8, 9, 10, 12, 14, 16, 18, 20, 22, 24, 28, 32, 36, 40, 44,
-];
 
 /**
  * Crest clearance ac of ISO 2904 for a pitch, mm; undefined outside 1.5..44 mm.

@@ -105,12 +105,28 @@ describe('designations', () => {
     const m = parsePowerThread('M10x1.5');
     expect(!m.ok && m.error).toMatch(/fastener thread.*Tr24x5/);
     const x = parsePowerThread('banana');
-    expect(!x.ok && x.error).toMatch(/not a power-thread designation/);
+    expect(!x.ok && x.error).toMatch(/not recognised.*Tr24x5.*square 32x4/);
     const lead = parsePowerThread('Tr40x15(P7)');
     expect(!lead.ok && lead.error).toMatch(/whole multiple/);
   });
   it('marks a pitch outside the ISO 2902 pitch list (ISO 2904) as not standard', () => {
     const p = parsePowerThread('Tr24x4.5');
     expect(p.ok && p.value.isStandardPitch).toBe(false);
+  });
+});
+
+describe('preferred sizes are labelled', () => {
+  it('Tr24x5 is the ISO 2904 / DIN 103 preferred pitch (from memory); Tr24x8 is listed but not preferred', () => {
+    const a = parsePowerThread('Tr24x5');
+    expect(a.ok && a.value.series).toBe('preferred');
+    const b = parsePowerThread('Tr24x8');
+    expect(b.ok && b.value.series).toBeUndefined();
+  });
+  it('1-5 ACME is a preferred Acme pitch (Shigley 9th ed. Table 8-3); multi-start Acme gets the P/L form of ASME B1.5', () => {
+    const a = parsePowerThread('1-5 ACME-2G');
+    expect(a.ok && a.value.series).toBe('preferred');
+    const m = parsePowerThread('1-5 ACME-2G', 2);
+    expect(m.ok && m.value.designation).toBe('1-0.2P-0.4L-ACME-2G');
+    expect(m.ok && m.value.lead).toBeCloseTo(10.16, 9);
   });
 });
