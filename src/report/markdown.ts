@@ -120,7 +120,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   out.push('');
 
   out.push('## Cautions', '');
-  for (const c of CAUTION_LINES) out.push(`> ${c}`);
+  // Two trailing spaces: a hard line break, so each caution keeps its own line when rendered.
+  for (const c of CAUTION_LINES) out.push(`> ${c}  `);
   out.push('');
 
   out.push('## Sign-off', '');
