@@ -107,6 +107,11 @@ export function judge(ctx: PlanContext, o: RepairOption): RepairOption {
   return o;
 }
 
+/** A length for a message, mm: at most 2 decimals, no trailing zeros. */
+export function mm(x: number): string {
+  return Number(x.toFixed(2)).toString();
+}
+
 /** Round a length up to the next 0.5 mm (a length a technician can set). */
 export function roundUpHalf(x: number): number {
   return Math.ceil(x * 2 - 1e-6) / 2;

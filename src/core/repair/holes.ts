@@ -97,5 +97,5 @@ export function wallProblem(wall: number | undefined, newMajor: number, what: st
   const ligament = wall - newMajor / 2;
   const needed = minimumLigament(newMajor);
   if (ligament + 1e-9 >= needed) return null;
-  return `${what} (${newMajor.toFixed(2)} mm) leaves ${Math.max(0, ligament).toFixed(2)} mm of wall to the edge; needs ${needed.toFixed(2)} mm (edge distance ${wall} mm)`;
+  return `${what} (${newMajor.toFixed(2)} mm) leaves ${Math.max(0, ligament).toFixed(2)} mm of wall to the edge; needs ${needed.toFixed(2)} mm (edge distance ${Number(wall.toFixed(2))} mm)`;
 }

@@ -10,7 +10,7 @@
  * stripping forces themselves are the core's).
  */
 import type {CheckResult} from '../joint/result.js';
-import {applyResult, infeasible, judge, newBoltVariant, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
+import {applyResult, infeasible, mm, judge, newBoltVariant, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {HELICAL_LENGTH_FACTORS, INSERT_WIRE, insertDepths, receivingThread, type ThreadBasics} from './helical.js';
 import {blindHoleDepths, tapDrill, wallProblem} from './holes.js';
 import {DEMO_TABLE_WARNING, type SolidInsertEntry} from './solid-table.js';
@@ -64,13 +64,13 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     if (repair.through) {
       o.tappedDepth = depths.tappedDepth;
       if (repair.depthAvailable !== undefined && depths.tappedDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `the part is ${repair.depthAvailable} mm thick; a ${k}D insert needs ${depths.tappedDepth.toFixed(1)} mm`);
+        return infeasible(o, `the part is ${mm(repair.depthAvailable)} mm thick; a ${k}D insert needs ${depths.tappedDepth.toFixed(1)} mm`);
       }
     } else {
       if (repair.depthAvailable !== undefined && depths.holeDepth > repair.depthAvailable + 1e-9) {
         const bottoming = insertDepths(t, k, rt.drill, 'bottoming');
         if (bottoming.holeDepth > repair.depthAvailable + 1e-9) {
-          return infeasible(o, `needs a hole ${depths.holeDepth.toFixed(1)} mm deep (${bottoming.holeDepth.toFixed(1)} mm with a bottoming tap); ${repair.depthAvailable} mm available`);
+          return infeasible(o, `needs a hole ${depths.holeDepth.toFixed(1)} mm deep (${bottoming.holeDepth.toFixed(1)} mm with a bottoming tap); ${mm(repair.depthAvailable)} mm available`);
         }
         depths = bottoming;
         o.notes.push('finish with a bottoming tap to fit the depth available');
@@ -84,7 +84,7 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     let engagement = depths.assembled.min;
     if (fullReach > ctx.reach + 1e-9 && !repair.boltLengthMayChange) {
       engagement = Math.min(engagement, ctx.reach - depths.setDown.max);
-      if (engagement < t.pitch) return infeasible(o, `the screw reaches ${ctx.reach} mm, too short to engage the insert set ${depths.setDown.max.toFixed(1)} mm down`);
+      if (engagement < t.pitch) return infeasible(o, `the screw reaches ${mm(ctx.reach)} mm, too short to engage the insert set ${depths.setDown.max.toFixed(1)} mm down`);
       o.notes.push(`the screw engages only ${engagement.toFixed(1)} mm of the insert (screw length fixed)`);
     } else {
       o.screwLengthChange = Math.max(0, fullReach - ctx.reach);
@@ -137,7 +137,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     const engagement = repair.boltLengthMayChange ? e.length : Math.min(e.length, ctx.reach - e.setDown);
     const fullReach = roundUpHalf(e.setDown + e.length);
     o.screwLengthChange = repair.boltLengthMayChange ? Math.max(0, fullReach - ctx.reach) : 0;
-    if (engagement < ctx.thread.pitch) return infeasible(o, `the screw reaches ${ctx.reach} mm, too short for the insert`);
+    if (engagement < ctx.thread.pitch) return infeasible(o, `the screw reaches ${mm(ctx.reach)} mm, too short for the insert`);
     const outer = safeCheck(ctx, newBoltVariant(ctx, {
       thread: e.external, boltRm: e.bodyRm, boltRp: 0.8 * e.bodyRm, engagement: e.length, chamfer: 0, serviceLoad: 0, internal: 'tapped',
     }));
@@ -152,13 +152,13 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     if (repair.through) {
       o.tappedDepth = e.setDown + e.length;
       if (repair.depthAvailable !== undefined && o.tappedDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `the part is ${repair.depthAvailable} mm thick; the insert needs ${o.tappedDepth.toFixed(1)} mm`);
+        return infeasible(o, `the part is ${mm(repair.depthAvailable)} mm thick; the insert needs ${o.tappedDepth.toFixed(1)} mm`);
       }
     } else {
       const d = blindHoleDepths(e.setDown + e.length, g.pitch, o.drill);
       Object.assign(o, {tappedDepth: d.tappedDepth, drilledDepth: d.drilledDepth, holeDepth: d.holeDepth});
       if (repair.depthAvailable !== undefined && d.holeDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${repair.depthAvailable} mm available`);
+        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
       }
     }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0}));

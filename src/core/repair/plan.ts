@@ -4,13 +4,14 @@
  */
 import type {JointInput} from '../joint/input.js';
 import {CAUTION_LINES} from '../cautions.js';
-import type {PlanContext} from './common.js';
+import {mm, type PlanContext} from './common.js';
 import type {RepairDeps} from './context.js';
 import {plainDesignation, HELICAL_SOURCES, type ThreadBasics} from './helical.js';
 import {HOLE_SOURCES} from './holes.js';
 import {helicalOptions, solidOptions} from './inserts.js';
 import type {RepairInput} from './input.js';
 import {rankOptions, REPAIR_RANKING_RULE} from './rank.js';
+import {DEMO_TABLE_WARNING} from './solid-table.js';
 import {oversizeOptions, throughBoltOption} from './resize.js';
 import {longerEngagementOption, reuseOption} from './same-thread.js';
 import type {RepairPlan} from './types.js';
@@ -50,8 +51,9 @@ export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: Rep
     throughBoltOption(ctx),
   ];
   const notes: string[] = [];
-  if (ctx.stripped) notes.push(`stripped from the surface to ${Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach)} mm; good thread assumed below ${ctx.goodStart.toFixed(1)} mm`);
+  if (ctx.stripped) notes.push(`stripped from the surface to ${mm(Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach))} mm; good thread assumed below ${ctx.goodStart.toFixed(1)} mm`);
   if (repair.depthAvailable === undefined) notes.push(repair.through ? 'part thickness not given: depths are not checked' : 'depth available not given: hole depths are not checked');
+  if (deps.solidTable.provenance.kind === 'demo') notes.push(`solid insert sizes: ${DEMO_TABLE_WARNING}`);
   if (repair.wall === undefined) notes.push('edge distance not given: options that remove material are not checked against the wall');
   const base = ctx.base;
   return {

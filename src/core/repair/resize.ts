@@ -3,7 +3,7 @@
  * ISO 261/262 or unified series, same or finer pitch) and a through-bolt with a
  * nut. Margins from the mechanics core (checkJoint).
  */
-import {applyResult, infeasible, judge, newBoltVariant, safeCheck, skeleton, type PlanContext} from './common.js';
+import {applyResult, infeasible, mm, judge, newBoltVariant, safeCheck, skeleton, type PlanContext} from './common.js';
 import type {SeriesThread} from './context.js';
 import {blindHoleDepths, clearanceHole, tapDrill, wallProblem} from './holes.js';
 import type {ThreadBasics} from './helical.js';
@@ -56,7 +56,7 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
       const d = blindHoleDepths(ctx.reach, c.pitch, o.drill);
       Object.assign(o, {tappedDepth: d.tappedDepth, drilledDepth: d.drilledDepth, holeDepth: d.holeDepth});
       if (repair.depthAvailable !== undefined && d.holeDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${repair.depthAvailable} mm available`);
+        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
       }
     }
     return judge(ctx, o);
@@ -100,6 +100,6 @@ export function throughBoltOption(ctx: PlanContext): RepairOption {
     o.screwLengthChange = null;
     o.notes.push('part thickness not given: the bolt must pass through it and the nut with 2 pitches showing');
   }
-  o.notes.push(`nut class ${nutClass}, height ${m} mm, ${s} mm across flats; needs access to the far side, washer under the nut`);
+  o.notes.push(`nut class ${nutClass}, height ${mm(m)} mm, ${mm(s)} mm across flats; needs access to the far side, washer under the nut`);
   return judge(ctx, o);
 }

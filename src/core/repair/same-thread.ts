@@ -3,7 +3,7 @@
  * deepen the hole for a longer engagement. Every margin comes from the
  * mechanics core (checkJoint) on a modified joint.
  */
-import {applyResult, infeasible, judge, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
+import {applyResult, infeasible, mm, judge, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {blindHoleDepths, tapDrill} from './holes.js';
 import type {RepairOption} from './types.js';
 
@@ -28,7 +28,7 @@ export function reuseOption(ctx: PlanContext): RepairOption {
   o.notes.push(`chase the thread with a ${ctx.plain} tap, blow out the chips, check the screw runs in by hand`);
   const goodLength = ctx.reach - ctx.goodStart;
   if (ctx.stripped && goodLength < ctx.thread.pitch) {
-    return infeasible(o, `no good thread left: stripped to ${ctx.repair.strippedDepth ?? ctx.reach} mm of the ${ctx.reach} mm the screw reaches`);
+    return infeasible(o, `no good thread left: stripped to ${mm(ctx.repair.strippedDepth ?? ctx.reach)} mm of the ${mm(ctx.reach)} mm the screw reaches`);
   }
   const c = ctx.stripped ? checkAtReach(ctx, ctx.reach, true) : {ok: true as const, result: ctx.base};
   if (!c.ok) return infeasible(o, `not computed: ${c.error}`);
@@ -89,7 +89,7 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
   }
   if (repair.through) {
     if (repair.depthAvailable !== undefined && newReach > repair.depthAvailable + 1e-9) {
-      return infeasible(o, `needs ${newReach.toFixed(1)} mm of thread; the part is ${repair.depthAvailable} mm thick`);
+      return infeasible(o, `needs ${newReach.toFixed(1)} mm of thread; the part is ${mm(repair.depthAvailable)} mm thick`);
     }
     o.tappedDepth = newReach;
   } else {
@@ -104,7 +104,7 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
         o.holeDepth = bottoming;
         o.notes.push('finish with a bottoming tap (2P chamfer) to fit the depth available');
       } else {
-        return infeasible(o, `needs a hole ${depth.holeDepth.toFixed(1)} mm deep; ${repair.depthAvailable} mm available`);
+        return infeasible(o, `needs a hole ${depth.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
       }
     }
     if (repair.depthAvailable === undefined) o.notes.push(`depth available not given: check the part allows a ${depth.holeDepth.toFixed(1)} mm hole`);

@@ -1,0 +1,130 @@
+/**
+ * Text output of `tapwright repair`: the ranked table (80 columns), the reasons
+ * and notes, the ranking rule and the cautions.
+ */
+import type {RepairOption, RepairPlan} from '../../core/repair/index.js';
+import {EFFORT_SCALE_TEXT} from '../../core/repair/index.js';
+import {CAUTION_LINES} from '../../core/cautions.js';
+import {displayUnit, toDisplay, type UnitSystem} from '../../core/units.js';
+
+export const WIDTH = 80;
+
+/** Word-wrap `text` to WIDTH, the first line starting with `first`, the rest with `indent`. */
+export function wrap(text: string, first: string, indent: string): string[] {
+  const lines: string[] = [];
+  let line = first;
+  let fresh = true;
+  for (const word of text.split(/\s+/).filter(Boolean)) {
+    if (!fresh && (line + ' ' + word).length > WIDTH) {
+      lines.push(line);
+      line = indent + word;
+    } else {
+      line += (fresh ? '' : ' ') + word;
+    }
+    fresh = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
+function fit(text: string, width: number): string {
+  return text.length <= width ? text.padEnd(width) : `${text.slice(0, width - 1)}~`;
+}
+
+function right(text: string, width: number): string {
+  return text.length <= width ? text.padStart(width) : text.slice(0, width);
+}
+
+function ratio(x: number | null): string {
+  return x === null || !Number.isFinite(x) ? '-' : x >= 100 ? '>99' : x.toFixed(2);
+}
+
+function length(mm: number | null, units: UnitSystem): string {
+  if (mm === null || !Number.isFinite(mm)) return '-';
+  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(3) : mm.toFixed(mm >= 100 ? 0 : 1);
+}
+
+function torque(nm: number | null, units: UnitSystem): string {
+  if (nm === null || !Number.isFinite(nm)) return '-';
+  const v = toDisplay(nm, 'torque', units);
+  return v >= 1000 ? v.toFixed(0) : v.toFixed(1);
+}
+
+function drill(mm: number | null, units: UnitSystem): string {
+  if (mm === null) return '-';
+  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(4) : Number(mm.toFixed(2)).toString();
+}
+
+function status(o: RepairOption): string {
+  return !o.feasible ? 'no' : o.meetsMargin ? 'yes' : 'short';
+}
+
+/** Columns: rank 2, option 23, ok 5, strip 5, break 5, drill 6, tap 15, depth 5, torque 6 (79 wide with spaces). */
+function row(cells: string[]): string {
+  const [rank = '', option = '', ok = '', strip = '', brk = '', dr = '', tap = '', depth = '', tq = ''] = cells;
+  return [right(rank, 2), fit(option, 23), fit(ok, 5), right(strip, 5), right(brk, 5), right(dr, 6), fit(tap, 15), right(depth, 5), right(tq, 6)].join(' ').trimEnd();
+}
+
+function detail(o: RepairOption, units: UnitSystem): string {
+  const L = displayUnit('length', units, true);
+  const parts: string[] = [];
+  if (o.reason) parts.push(o.reason + '.');
+  if (o.strength) parts.push(`Governs: ${o.strength.governs}.`);
+  if (o.insert) {
+    const sd = o.insert.setDown;
+    const set = Math.abs(sd.max - sd.min) < 1e-9 ? length(sd.min, units) : `${length(sd.min, units)}..${length(sd.max, units)}`;
+    parts.push(`Insert ${length(o.insert.nominalLength, units)} ${L} long, set ${set} ${L} below the surface.`);
+  }
+  if (o.boltThread !== undefined && o.kind === 'oversize') parts.push(`Screw ${o.boltThread}.`);
+  if (o.screwLengthChange !== null && o.screwLengthChange > 1e-9) parts.push(`Screw ${length(o.screwLengthChange, units)} ${L} longer.`);
+  if (o.tappedDepth !== null && o.drilledDepth !== null) parts.push(`Tap ${length(o.tappedDepth, units)}, drill ${length(o.drilledDepth, units)} ${L} full diameter.`);
+  if (o.feasible) for (const n of o.notes) parts.push(`${n[0]?.toUpperCase() ?? ''}${n.slice(1)}.`);
+  return parts.join(' ');
+}
+
+/** A length with its unit, for headings. */
+export function lengthText(mm: number, units: UnitSystem): string {
+  return `${length(mm, units)} ${displayUnit('length', units, true)}`;
+}
+
+/** The whole text report. */
+export function planText(plan: RepairPlan, units: UnitSystem, heading: string): string {
+  const L = displayUnit('length', units, true);
+  const T = displayUnit('torque', units, true);
+  const out: string[] = [];
+  out.push(...wrap(heading, '', '  '));
+  const h = plan.hole;
+  const hole = [
+    h.state === 'stripped' ? `stripped to ${length(h.strippedDepth, units)} ${L}` : 'intact',
+    h.through ? 'through' : 'blind',
+    h.depthAvailable !== null ? `${h.through ? 'thickness' : 'depth available'} ${length(h.depthAvailable, units)} ${L}` : null,
+    h.wall !== null ? `edge distance ${length(h.wall, units)} ${L}` : null,
+  ].filter(Boolean);
+  out.push(...wrap(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin}.`, '', '  '));
+  if (plan.asIs) out.push(`As is: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`);
+  out.push('');
+  out.push(row(['#', 'option (effort)', 'ok', 'strip', 'break', `drill`, 'tap', 'depth', 'torque']));
+  out.push(row(['', '', '', 'margn', 'first', L, '', L, T]));
+  for (const o of plan.options) {
+    out.push(row([String(o.rank), `E${o.effort.grade} ${o.label}`, status(o), ratio(o.margin.stripping), ratio(o.margin.boltBreaksFirst), drill(o.drill, units), o.tapThread ?? '-', length(o.holeDepth, units), torque(o.torque, units)]));
+  }
+  out.push('');
+  out.push('ok: yes = meets the margin, short = can be done but falls short, no = cannot.');
+  out.push(`depth: blind-hole depth with the drill point; torque: to use afterwards.`);
+  out.push('');
+  for (const o of plan.options) {
+    const text = detail(o, units);
+    if (text) out.push(...wrap(text, `${right(String(o.rank), 2)} ${o.label}: `, '     '));
+  }
+  if (plan.notes.length) {
+    out.push('');
+    for (const n of plan.notes) out.push(...wrap(`${n}.`, 'Note: ', '      '));
+  }
+  out.push('');
+  out.push(...wrap(plan.rankingRule, 'Ranking: ', '  '));
+  out.push('Effort grades:');
+  for (const line of EFFORT_SCALE_TEXT.split('\n')) out.push(...wrap(line, '  ', '     '));
+  out.push('');
+  for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
+  return out.join('\n') + '\n';
+}
