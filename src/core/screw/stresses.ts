@@ -36,7 +36,15 @@ export function vonMises3D(s: StressTensor): number {
  * sigma^3 - I1 sigma^2 + I2 sigma - I3 = 0 (Shigley 9th ed. section 3-7; Eq. 3-15 from memory), solved in the
  * closed trigonometric form for a symmetric matrix.
  */
-export function principalStresses(s: StressTensor): [number, number, number] {
+export function principalStresses(t: StressTensor): [number, number, number] {
+  // Scale by the largest component so tiny or huge stresses neither underflow nor overflow.
+  const m = Math.max(Math.abs(t.sx), Math.abs(t.sy), Math.abs(t.sz), Math.abs(t.txy), Math.abs(t.tyz), Math.abs(t.tzx));
+  if (m === 0 || !Number.isFinite(m)) return [t.sx, t.sy, t.sz].sort((a, b) => b - a) as [number, number, number];
+  const [a, b, c] = principalScaled({sx: t.sx / m, sy: t.sy / m, sz: t.sz / m, txy: t.txy / m, tyz: t.tyz / m, tzx: t.tzx / m});
+  return [a * m, b * m, c * m];
+}
+
+function principalScaled(s: StressTensor): [number, number, number] {
   const p1 = s.txy ** 2 + s.tyz ** 2 + s.tzx ** 2;
   if (p1 === 0) {
     const v = [s.sx, s.sy, s.sz].sort((a, b) => b - a);
