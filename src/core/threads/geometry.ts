@@ -75,6 +75,11 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
   const int = must(parseUnifiedClass(spec.toleranceInternal));
   const tpi = spec.tpi ?? IN / P;
   const lim = unifiedLimits(d / IN, tpi, ext, int);
+  if (ext.grade !== 2 || int.grade !== 2) {
+    notes.push(
+      'Class 1A/3A/1B/3B tolerance factors (1.5, 0.75, 1.95, 0.975 x the 2A pitch-diameter tolerance) and the 3B minor-diameter rule are from memory of ASME B1.1: verify against the standard.',
+    );
+  }
   notes.push(
     'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by 0.0001 in.',
   );

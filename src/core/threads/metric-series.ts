@@ -3,9 +3,12 @@
  *
  * Source: ISO 261:1998 Table 1 (general plan) and ISO 262:1998 Table 1
  * (selected sizes). The M3 to M36 coarse pitches and the ISO 262 fine pitches
- * of that range were read in a reproduction of ISO 262; the other rows
- * (below M3, above M36, and the further ISO 261 fine pitches) are from
- * memory of ISO 261 Table 1 and are marked `memory: true`.
+ * of that range were read in a reproduction of ISO 262. The coarse pitches of
+ * the other rows (M1 to M2.5, M3.5, M4.5, M7, M39 to M64) agree with the
+ * coarse-pitch rows of the ISO 965-2 / DIN 13-20 limit table; their fine
+ * pitches, and the ISO 261 fine pitches beyond ISO 262 (e.g. M10x0.75,
+ * M12x1, M16x1), are from memory of ISO 261 Table 1. Rows with fine pitches
+ * from memory are marked `memory: true`.
  */
 
 export interface MetricSeriesRow {
@@ -17,7 +20,7 @@ export interface MetricSeriesRow {
   fine: number[];
   /** Choice of diameter in ISO 261 (1 preferred, 2 second, 3 third). */
   choice: 1 | 2 | 3;
-  /** True when the row was not read in a copy of the standard (from memory). */
+  /** True when (some of) the row's fine pitches are from memory of ISO 261, not read. */
   memory?: boolean;
 }
 
