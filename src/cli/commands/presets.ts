@@ -120,7 +120,7 @@ function notesFrom(values: ParsedOptions['values'], base: Preset['notes'] = {}):
 
 async function save(args: string[], io: CliIo): Promise<number> {
   const p = parseOptions(args, {...COMMON, ...JOINT_OPTIONS, ...NOTES, from: {type: 'string'}, overwrite: {type: 'boolean'}});
-  const [name] = positionals(p, 1, 'save NAME [--from PRESET] [joint options]');
+  const name = positionals(p, 1, 'save NAME [--from PRESET] [joint options]')[0]!;
   const store = open(io);
   const fromName = str(p.values, 'from');
   const base = fromName !== undefined ? store.get(fromName) : undefined;
