@@ -23,7 +23,7 @@ const METRIC_P = {min: 0.2, max: 8};
 type Fail = {ok: false; error: string; suggestions?: string[]};
 
 function fail(error: string, text: string, suggestions?: string[]): Fail {
-  const s = suggestions ?? nearestDesignations(text, 5);
+  const s = [...new Set(suggestions ?? nearestDesignations(text, 5))];
   return s.length ? {ok: false, error, suggestions: s} : {ok: false, error};
 }
 
@@ -46,8 +46,14 @@ export function parseThread(text: string): Parsed<ThreadSpec> {
 // ---------------------------------------------------------------- metric
 
 function parseMetric(raw: string): Parsed<ThreadSpec> {
-  const c = raw.replace(/\s+/g, '');
+  // "M10x1.5 6g": a class after a space reads as if written with "-".
+  const c = raw.replace(/(\d)\s+(?=\d[a-h](?:\d[a-h])?\s*(?:\/|$))/i, '$1-').replace(/\s+/g, '');
   const m = /^m(\d+(?:[.,]\d+)?)(?:x(\d*(?:[.,]\d+)?))?(?:-(.*))?$/i.exec(c);
+  const withLength = /^m(\d+(?:[.,]\d+)?)x(\d+(?:[.,]\d+)?)x\d+(?:[.,]\d+)?$/i.exec(c);
+  if (withLength) {
+    const base = `M${withLength[1]}x${withLength[2]}`;
+    return fail(`"${raw}" looks like a screw size with its length; the thread designation is ${base} (the length is not part of it)`, raw, [base]);
+  }
   if (!m) {
     return fail(`metric designation "${raw}" is not understood; write M<diameter>[x<pitch>][-<class>], e.g. M10, M10x1.25, M10x1.5-6H/6g`, raw);
   }

@@ -53,6 +53,7 @@ describe('ISO metric designations', () => {
     expect(ok('M10x1.5-6g/6H')).toMatchObject({toleranceExternal: '6g', toleranceInternal: '6H'});
     expect(ok('M10x1.5-6e/6G')).toMatchObject({toleranceExternal: '6e', toleranceInternal: '6G'});
     expect(ok('M10x1,5').pitch).toBe(1.5);
+    expect(ok('M10 x 1.5 6H / 6g').designation).toBe('M10x1.5-6H/6g');
   });
 
   it('a pitch outside the series is a special thread', () => {
@@ -71,6 +72,9 @@ describe('ISO metric designations', () => {
     expect(err('M7.5').error).toMatch(/no coarse pitch.*give the pitch/);
     expect(err('M0.5').error).toMatch(/diameter 0.5 mm is out of range; accepted: 1 to 355 mm/);
     expect(err('M10x9').error).toMatch(/pitch 9 mm is out of range/);
+    const len = err('M10x1.5x30');
+    expect(len.error).toMatch(/length is not part of it/);
+    expect(len.suggestions).toEqual(['M10x1.5']);
     expect(err('M10x1.5-6H/6g/6e').error).toMatch(/tolerance class missing or malformed/);
     expect(err('M10x1.5-6H/6q').error).toMatch(/external class \(second of the pair\)/);
     expect(err('M10x1.5-6e/6g').error).toMatch(/internal class \(first of the pair\).*accepted: G, H/);
@@ -118,6 +122,8 @@ describe('unified designations', () => {
     const e = err('1/4-28 UNC');
     expect(e.error).toMatch(/1\/4 UNC has 20 threads per inch, not 28 \(1\/4-28 is UNF\)/);
     expect(e.suggestions?.[0]).toBe('1/4-20 UNC');
+    expect(new Set(e.suggestions).size).toBe(e.suggestions?.length);
+    expect(ok('no. 10-32unf-2b').designation).toBe('#10-32 UNF-2A/2B');
     expect(err('1/4-20 UNC-4A').error).toMatch(/accepted: 1A, 2A, 3A .*1B, 2B, 3B/);
     expect(err('1/4-20 UNC-2A/3A').error).toMatch(/two external classes/);
     expect(err('9/32-32 UNC').error).toMatch(/not a UNC size/);
