@@ -53,11 +53,11 @@ export function screwText(r: ScrewResult, units: UnitSystem): string {
   const t = r.stress.firstThread;
   out.push(...field('First thread', `share ${formatNumber(t.share, 2)} of the load on 1 thread: bearing ${q(t.bearing, 'stress')}, bending ${q(t.bending, 'stress')}, shear ${q(t.shear, 'stress')}, von Mises ${q(t.vonMises, 'stress')} (screw yield ${q(r.screw.yield, 'stress')}), max shear ${q(t.maxShear, 'stress')}`));
   const n = r.nut;
-  out.push(...field('Nut', `${n.materialName} (${n.material}), ${formatNumber(n.engagedThreads, 3)} threads engaged`));
+  out.push(...field('Nut', `${n.materialName}, ${formatNumber(n.engagedThreads, 3)} threads engaged`));
   const allow = n.allowablePressure;
   out.push(...field('', `flank pressure ${q(n.bearingPressure, 'stress')}; ${allow ? `safe ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')} (${allow.condition})` : 'no tabulated safe pressure'}`));
   const s = n.stripping;
-  out.push(...field('', `strips at: nut threads ${q(s.nutForce, 'force')}, screw threads ${q(s.screwForce, 'force')}; ${s.weaker} weaker, ${formatNumber(s.margin, 3)} x load`));
+  out.push(...field('', `strips at: nut threads ${q(s.nutForce, 'force')}, screw threads ${q(s.screwForce, 'force')}; ${s.weaker} weaker, ${formatNumber(s.margin, 3)} x load; nut threads strip at this load after ${q(s.wearToStrip, 'length')} more wear`));
   const c = r.buckling;
   out.push(...field('Column', c.checked && c.criticalLoad !== null
     ? `critical load ${q(c.criticalLoad, 'force')} (${c.method === 'euler' ? 'Euler' : 'J. B. Johnson'}, ${c.ends}, C = ${c.endConstant}, l/k ${formatNumber(c.slenderness ?? 0, 3)}), ${formatNumber(c.margin ?? 0, 3)} x load`

@@ -60,11 +60,13 @@ export const COLLAR_FRICTION: readonly CollarFrictionPick[] = [
   {id: 'hard-steel/bronze', combination: 'hard steel on bronze', running: 0.06, starting: 0.08},
 ];
 
+/** The Table 8-5 pick with this id ("steel-oil/bronze"), or undefined. Dimensionless. */
 export function threadFrictionPick(id: string): ThreadFrictionPick | undefined {
   const key = id.trim().toLowerCase().replace(/\s+/g, '-');
   return THREAD_FRICTION.find(p => p.id === key);
 }
 
+/** The Table 8-6 pick with this id ("hard-steel/bronze"), or undefined. Dimensionless. */
 export function collarFrictionPick(id: string): CollarFrictionPick | undefined {
   const key = id.trim().toLowerCase().replace(/\s+/g, '-');
   return COLLAR_FRICTION.find(p => p.id === key);

@@ -99,7 +99,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
       allowablePressure: input.allowablePressure !== undefined
         ? {min: input.allowablePressure, max: input.allowablePressure, condition: 'given', source: 'user'}
         : allow ?? null,
-      stripping: {nutForce: strip.nutForce, screwForce: strip.screwForce, nutArea: strip.nutArea, screwArea: strip.screwArea, weaker: strip.weaker, margin: strip.margin},
+      stripping: {nutForce: strip.nutForce, screwForce: strip.screwForce, nutArea: strip.nutArea, screwArea: strip.screwArea, weaker: strip.weaker, margin: strip.margin, wearToStrip: strip.wearToStrip},
     },
     screw: {material: scr.id, materialSource: input.screwYield !== undefined ? `yield given: ${screwYield} MPa; ${scr.source}` : scr.source, yield: screwYield, rm: scr.rm, elasticModulus: scr.elasticModulus},
     buckling: {

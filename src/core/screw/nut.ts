@@ -29,6 +29,11 @@ export interface StrippingResult {
   /** Force that strips the screw threads, N. */
   screwForce: number;
   weaker: 'nut' | 'screw';
+  /**
+   * Further loss of nut-thread thickness, mm, at which the nut threads strip at this load:
+   * P (w - F / (tau pi d Le)) - wear, not below 0 (same model).
+   */
+  wearToStrip: number;
   /** Weaker stripping force / load. */
   margin: number;
 }
@@ -55,7 +60,9 @@ export function stripping(i: StrippingInput): StrippingResult {
   const screwForce = screwArea * i.screwShear;
   const weaker = nutForce <= screwForce ? 'nut' : 'screw';
   const weakest = Math.min(nutForce, screwForce);
-  return {nutArea, screwArea, nutForce, screwForce, weaker, margin: i.load > 0 ? Math.min(MARGIN_CAP, weakest / i.load) : Infinity};
+  const wearLimit = i.pitch * (i.shearWidthFactor - i.load / (i.nutShear * Math.PI * i.major * i.nutLength));
+  const wearToStrip = Math.max(0, wearLimit - i.wear);
+  return {nutArea, screwArea, nutForce, screwForce, weaker, wearToStrip, margin: i.load > 0 ? Math.min(MARGIN_CAP, weakest / i.load) : Infinity};
 }
 
 /** Mean flank pressure of the nut, MPa: 2F / (pi dm Le) (Shigley 9th ed. Eq. 8-10, all turns). */

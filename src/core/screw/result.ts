@@ -59,7 +59,7 @@ export interface ScrewResult {
     engagedThreads: number;
     bearingPressure: number;
     allowablePressure: {min: number; max: number; condition: string; source: string} | null;
-    stripping: {nutForce: number; screwForce: number; nutArea: number; screwArea: number; weaker: 'nut' | 'screw'; margin: number};
+    stripping: {nutForce: number; screwForce: number; nutArea: number; screwArea: number; weaker: 'nut' | 'screw'; margin: number; wearToStrip: number};
   };
   screw: {material: string; materialSource: string; yield: number; rm: number; elasticModulus: number};
   buckling: {

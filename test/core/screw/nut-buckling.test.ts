@@ -109,3 +109,14 @@ describe('column buckling (Shigley 9th ed. Eqs. 4-42/4-43 Euler, Eq. 8-9 J. B. J
     expect(long.flags.find(f => f.code === 'buckling')?.level).toBe('fail');
   });
 });
+
+describe('wear allowance of the nut thread (same stripping model)', () => {
+  it('stripping at the load exactly when the remaining allowance is used up', () => {
+    const args = {load: 50000, major: 24, nutMinor: 19, pitch: 5, nutLength: 40, shearWidthFactor: 0.634, nutShear: 156, screwShear: 372, wear: 0.3};
+    const s = stripping(args);
+    // P (w - F / (tau pi d Le)) - wear = 5 (0.634 - 50 000 / (156 pi 24 x 40)) - 0.3 = 5 x 0.52773 - 0.3 = 2.3387 mm
+    expect(s.wearToStrip).toBeCloseTo(5 * (0.634 - 50000 / (156 * Math.PI * 24 * 40)) - 0.3, 9);
+    const worn = stripping({...args, wear: args.wear + s.wearToStrip});
+    expect(worn.nutForce).toBeCloseTo(args.load, 6);
+  });
+});
