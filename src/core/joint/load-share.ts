@@ -33,6 +33,7 @@ export interface ChainInput {
  * (both teeth in series, stiffness scaling with the thread circumference).
  */
 export const CALIBRATION_FIRST_SHARE = 0.38;
+// Equal moduli: E cancels out of beta for the reference joint, so its value (205 GPa, typical for steel, from memory) does not matter.
 const REF = {nominal: 10, pitch: 1.5, boltArea: 58.0, internalArea: hexNutArea(16, 10), boltModulus: 205000, internalModulus: 205000};
 
 /** Cross-section of a hexagon nut of width across flats s on a bolt of diameter d: (sqrt3/2) s² - pi d²/4, mm². */

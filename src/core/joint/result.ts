@@ -51,7 +51,10 @@ export interface CheckResult {
     /** Permissible preload and torque for the utilisation limit (VDI 2230 closed form), N and N·m. */
     permissiblePreload: number;
     permissibleTorque: number;
-    /** Assembly von Mises stress in the threaded section at max preload, MPa. */
+    /**
+     * Assembly von Mises stress in the threaded section at max preload, MPa, on the VDI 2230
+     * Part 1 convention behind FM,zul (torsion on pi d0^3/12), so utilisation = nu at FM,zul.
+     */
     assemblyVonMises: number;
     method: 'friction' | 'nut-factor';
     /** Effective bearing diameter DKm used, mm, and where it came from. */
@@ -62,6 +65,8 @@ export interface CheckResult {
   };
   stress: {
     firstThread: StressSet;
+    /** Threaded body on d0 = (d2 + d3)/2 at max preload + service load with the full thread torque,
+     *  elastic torsion 16T/(pi d0^3): higher than assemblyVonMises, which uses VDI's plastic modulus. */
     shank: {axial: number; torsion: number; vonMises: number};
   };
   /** Fraction of the load carried by each engaged thread, first (loaded face) first. */

@@ -72,4 +72,44 @@ describe('checkJoint', () => {
     expect(field({thread: 'M10', parent: 'S355', engagement: 10, tightening: 'preload'})).toBe('preload');
     expect(field({thread: 'M10', parent: 'S355', engagement: 10, boltRp: 900})).toBe('boltRp');
   });
+
+  it('blind hole: the last 4 pitches are incomplete thread and do not count (plug-tap chamfer, common practice)', () => {
+    const r = run({thread: 'M10', parent: 'S355', engagement: 15, holeDepth: 18});
+    expect(r.stripping.effectiveEngagement).toBeCloseTo(18 - 4 * 1.5, 12);
+    expect(r.flags.find(f => f.code === 'blind-hole-too-shallow')?.level).toBe('watch');
+    const through = run({thread: 'M10', parent: 'S355', engagement: 15, chamfer: 1});
+    expect(through.stripping.effectiveEngagement).toBeCloseTo(14, 12);
+  });
+
+  it('custom parent strength: shear taken as 0.6 Rm (textbook assumption, from memory) and labelled', () => {
+    const r = run({thread: 'M10', parentRm: 300, engagement: 15});
+    expect(r.materials.internal.shear).toBeCloseTo(180, 9);
+    expect(r.materials.internal.provenance.source).toMatch(/from memory/);
+  });
+
+  it('weak parent, strong bolt: RS <= 0.4 is flagged outside the published range of C3 (Alexander / VDI 2230)', () => {
+    const r = run({thread: 'M10', boltGrade: '12.9', parent: 'AZ91-DC', engagement: 20});
+    expect(r.stripping.alexander.rs).toBeLessThanOrEqual(0.4);
+    expect(r.flags.map(f => f.code)).toContain('outside-model-range');
+  });
+
+  it('a nut: C1 from s/d (ISO 4032 s = 16 mm for M10: s/d 1.6, C1 0.91, from memory)', () => {
+    const r = run(M10_NUT);
+    expect(r.stripping.alexander.c1).toBeCloseTo(0.91, 3);
+  });
+
+  it('special pitch is flagged; an inch size without a head table gets an estimated bearing diameter and says so', () => {
+    const special = run({thread: 'M10x1.1', parent: 'S355', engagement: 15});
+    expect(special.flags.map(f => f.code)).toContain('nonstandard-pitch');
+    const inch = run({thread: '1/4-20 UNC', boltGrade: 'SAE-5', parent: 'S355', engagement: 8});
+    expect(inch.tightening.bearingSource).toBe('estimate');
+    expect(inch.flags.map(f => f.code)).toContain('bearing-diameter-estimated');
+  });
+
+  it('service load adds to the largest bolt load in full (conservative: no joint stiffness factor)', () => {
+    const a = run({thread: 'M10', parent: 'S355', engagement: 15});
+    const b = run({thread: 'M10', parent: 'S355', engagement: 15, serviceLoad: 5000});
+    expect(b.boltLoad - a.boltLoad).toBeCloseTo(5000, 9);
+    expect(b.margin.stripping).toBeLessThan(a.margin.stripping);
+  });
 });
