@@ -2,10 +2,12 @@
  * Unified inch screw threads (ASME B1.1): sizes and threads per inch of the
  * UNC, UNF and UNEF series.
  *
- * Source: UNC and UNF #4 to 1-1/2 in: Shigley's Mechanical Engineering Design,
- * 9th ed., Table 8-2 (compiled from ANSI B1.1), and ASME B1.1 Table 1 for the
- * 1-1/8 and 1-3/8 rows. Rows marked `memory: true` (#0 to #3, above 1-1/2 in,
- * and the whole UNEF series) are from memory of ASME B1.1 Table 1.
+ * Source: ASME B1.1 series table (UNC, UNF, UNEF). UNC and UNF #4 to 1-1/2 in
+ * were read in Shigley's Mechanical Engineering Design, 9th ed., Table 8-2
+ * (compiled from ANSI B1.1; it omits 1-1/8 and 1-3/8). #0 to #3, 1-1/8, 1-3/8,
+ * 1-3/4 and the UNEF series were read in a public transcription of the ASME
+ * B1.1 series table. The row marked `memory: true` (2 in, 4-1/2 tpi UNC) is
+ * from memory: that transcription gives 4 tpi, which is not the UNC value.
  * Numbered sizes: D = 0.060 + 0.013 N in (ASME B1.1; Shigley Table 8-2).
  */
 
@@ -25,10 +27,10 @@ export interface UnifiedSeriesRow {
 const num = (n: number): number => Math.round((0.06 + 0.013 * n) * 1e4) / 1e4;
 
 export const UNIFIED_SERIES: readonly UnifiedSeriesRow[] = [
-  {label: '#0', inches: num(0), UNF: 80, memory: true},
-  {label: '#1', inches: num(1), UNC: 64, UNF: 72, memory: true},
-  {label: '#2', inches: num(2), UNC: 56, UNF: 64, memory: true},
-  {label: '#3', inches: num(3), UNC: 48, UNF: 56, memory: true},
+  {label: '#0', inches: num(0), UNF: 80},
+  {label: '#1', inches: num(1), UNC: 64, UNF: 72},
+  {label: '#2', inches: num(2), UNC: 56, UNF: 64},
+  {label: '#3', inches: num(3), UNC: 48, UNF: 56},
   {label: '#4', inches: num(4), UNC: 40, UNF: 48},
   {label: '#5', inches: num(5), UNC: 40, UNF: 44},
   {label: '#6', inches: num(6), UNC: 32, UNF: 40},
@@ -42,24 +44,24 @@ export const UNIFIED_SERIES: readonly UnifiedSeriesRow[] = [
   {label: '1/2', inches: 0.5, UNC: 13, UNF: 20, UNEF: 28},
   {label: '9/16', inches: 0.5625, UNC: 12, UNF: 18, UNEF: 24},
   {label: '5/8', inches: 0.625, UNC: 11, UNF: 18, UNEF: 24},
-  {label: '11/16', inches: 0.6875, UNEF: 24, memory: true},
+  {label: '11/16', inches: 0.6875, UNEF: 24},
   {label: '3/4', inches: 0.75, UNC: 10, UNF: 16, UNEF: 20},
-  {label: '13/16', inches: 0.8125, UNEF: 20, memory: true},
+  {label: '13/16', inches: 0.8125, UNEF: 20},
   {label: '7/8', inches: 0.875, UNC: 9, UNF: 14, UNEF: 20},
-  {label: '15/16', inches: 0.9375, UNEF: 20, memory: true},
+  {label: '15/16', inches: 0.9375, UNEF: 20},
   {label: '1', inches: 1, UNC: 8, UNF: 12, UNEF: 20},
-  {label: '1-1/16', inches: 1.0625, UNEF: 18, memory: true},
+  {label: '1-1/16', inches: 1.0625, UNEF: 18},
   {label: '1-1/8', inches: 1.125, UNC: 7, UNF: 12, UNEF: 18},
-  {label: '1-3/16', inches: 1.1875, UNEF: 18, memory: true},
+  {label: '1-3/16', inches: 1.1875, UNEF: 18},
   {label: '1-1/4', inches: 1.25, UNC: 7, UNF: 12, UNEF: 18},
-  {label: '1-5/16', inches: 1.3125, UNEF: 18, memory: true},
+  {label: '1-5/16', inches: 1.3125, UNEF: 18},
   {label: '1-3/8', inches: 1.375, UNC: 6, UNF: 12, UNEF: 18},
-  {label: '1-7/16', inches: 1.4375, UNEF: 18, memory: true},
+  {label: '1-7/16', inches: 1.4375, UNEF: 18},
   {label: '1-1/2', inches: 1.5, UNC: 6, UNF: 12, UNEF: 18},
-  {label: '1-9/16', inches: 1.5625, UNEF: 18, memory: true},
-  {label: '1-5/8', inches: 1.625, UNEF: 18, memory: true},
-  {label: '1-11/16', inches: 1.6875, UNEF: 18, memory: true},
-  {label: '1-3/4', inches: 1.75, UNC: 5, memory: true},
+  {label: '1-9/16', inches: 1.5625, UNEF: 18},
+  {label: '1-5/8', inches: 1.625, UNEF: 18},
+  {label: '1-11/16', inches: 1.6875, UNEF: 18},
+  {label: '1-3/4', inches: 1.75, UNC: 5},
   {label: '2', inches: 2, UNC: 4.5, memory: true},
 ];
 
