@@ -6,7 +6,9 @@ import {checkScrew, ScrewInputSchema} from '../../../src/core/screw/index.js';
  * p. 419: square-thread power screw, d = 32 mm, p = 4 mm, double thread,
  * f = fc = 0.08, dc = 40 mm, F = 6.4 kN.
  *
- * Book answers not confirmed here: no stored copy of the printed solution was found.
+ * The statement and the start of the solution, part (a) (depth = width = p/2 = 2 mm,
+ * dm = 32 - 4/2 = 30 mm, dr = d - p), were read in a stored copy of p. 419. The printed
+ * answers of parts (b) to (h) are on the next page: book answers not confirmed here.
  * Every expected value below is computed by hand from the book's equations (the
  * arithmetic is shown), independently of the code under test.
  *
