@@ -101,7 +101,10 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string): 
     h.wall !== null ? `edge distance ${length(h.wall, units)} ${L}` : null,
   ].filter(Boolean);
   out.push(...wrap(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin}.`, '', '  '));
-  if (plan.asIs) out.push(`As is: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`);
+  if (plan.asIs) {
+    const label = h.state === 'stripped' ? 'As designed, before the damage' : 'As is';
+    out.push(...wrap(`${label}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`, '', '  '));
+  }
   out.push('');
   out.push(row(['#', 'option (effort)', 'ok', 'strip', 'break', `drill`, 'tap', 'depth', 'torque']));
   out.push(row(['', '', '', 'margn', 'first', L, '', L, T]));

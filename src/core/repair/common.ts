@@ -43,6 +43,13 @@ export function safeCheck(ctx: PlanContext, input: JointInput): Checked {
   }
 }
 
+/** Check `input` with the thread geometry of `designation` (see RepairDeps.checkWithThread). */
+export function safeCheckThread(ctx: PlanContext, input: JointInput, designation: string): Checked {
+  const viaThread = ctx.deps.checkWithThread;
+  if (!viaThread) return safeCheck(ctx, {...input, thread: designation});
+  return safeCheck({...ctx, deps: {...ctx.deps, check: i => viaThread(i, designation)}}, input);
+}
+
 /** An option with every number unset; builders fill in what they know. */
 export function skeleton(ctx: PlanContext, kind: RepairKind, label: string): RepairOption {
   return {

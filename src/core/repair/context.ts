@@ -21,6 +21,14 @@ export interface SeriesThread {
 export interface RepairDeps {
   /** The mechanics core: `checkJoint` of src/core/joint. May throw on input it rejects. */
   check: (input: JointInput) => CheckResult;
+  /**
+   * Check `input` (resolved with its own thread, so its materials and bearing
+   * diameter stay those of that size) but with the thread geometry of
+   * `designation`: used for the parent side of an insert, whose receiving or
+   * external thread is larger than any bolt the grade tables cover. Absent:
+   * `check` with the thread replaced.
+   */
+  checkWithThread?: (input: JointInput, designation: string) => CheckResult;
   /** Series sizes of the same family larger than the given thread (ISO 261/262 or unified); absent: no oversize candidates. */
   seriesAbove?: (spec: ThreadSpec) => SeriesThread[];
   /** Regular nut height m and width across flats s for nominal diameter d (mm); undefined when unknown. */

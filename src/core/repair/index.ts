@@ -5,8 +5,10 @@
  * ranked plan (mm, N, N·m). See plan.ts for the option list and rank.ts for the
  * ranking rule.
  */
-import {checkJoint} from '../joint/index.js';
+import {checkJoint, checkResolved, resolveJoint} from '../joint/index.js';
+import {resolveGeometry} from '../joint/resolve.js';
 import type {JointInput} from '../joint/input.js';
+import type {CheckResult} from '../joint/result.js';
 import {listDesignations, parseThread} from '../threads/index.js';
 import {nutClass, nutDimensions} from '../materials/index.js';
 import type {ThreadFamily, ThreadSpec} from '../types.js';
@@ -46,17 +48,40 @@ function seriesOf(family: ThreadFamily): SeriesThread[] {
   return list;
 }
 
+/** ISO 898-2 regular-nut classes, lowest first. */
+const ISO_NUT_CLASSES = [5, 6, 8, 9, 10, 12];
+
+/**
+ * Nut class for a bolt grade: ISO 898-1 class N.M takes the lowest ISO 898-2 nut
+ * class of at least N (a class-N nut serves bolts up to N.8; from memory); SAE
+ * J429 grade 5 or 8 takes the SAE J995 nut of the same grade. Undefined otherwise.
+ */
 function nutClassFor(boltGrade: string, spec: ThreadSpec): string | undefined {
   const g = boltGrade.trim().toUpperCase();
   const iso = /^(\d{1,2})\.\d$/.exec(g);
-  const id = iso ? iso[1] : /^SAE-(5|8)$/.test(g) ? g : undefined;
+  let id: string | undefined;
+  if (iso) {
+    const n = Number(iso[1]);
+    const c = ISO_NUT_CLASSES.find(k => k >= n);
+    id = c === undefined ? undefined : String(c);
+  } else if (/^SAE-(5|8)$/.test(g)) {
+    id = g;
+  }
   return id !== undefined && nutClass(id, spec.nominal) ? id : undefined;
+}
+
+/** checkJoint with the materials resolved for the input's own thread and the geometry of `designation`. */
+function checkWithThread(input: JointInput, designation: string): CheckResult {
+  const resolved = resolveJoint(input);
+  const geometry = resolveGeometry(designation);
+  return checkResolved({...input, thread: designation}, {...resolved, geometry});
 }
 
 /** The real dependencies; `solidTable` defaults to the shipped demo table. */
 export function defaultDeps(solidTable: SolidInsertTable = DEMO_SOLID_INSERTS): RepairDeps {
   return {
     check: checkJoint,
+    checkWithThread,
     seriesAbove: spec => seriesOf(spec.family).filter(s => s.nominal > spec.nominal + 1e-9),
     nutDimensions: spec => {
       const n = nutDimensions(spec.nominal);

@@ -10,7 +10,7 @@
  * stripping forces themselves are the core's).
  */
 import type {CheckResult} from '../joint/result.js';
-import {applyResult, infeasible, mm, judge, newBoltVariant, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
+import {applyResult, infeasible, mm, judge, newBoltVariant, roundUpHalf, safeCheck, safeCheckThread, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {HELICAL_LENGTH_FACTORS, INSERT_WIRE, insertDepths, receivingThread, type ThreadBasics} from './helical.js';
 import {blindHoleDepths, tapDrill, wallProblem} from './holes.js';
 import {DEMO_TABLE_WARNING, type SolidInsertEntry} from './solid-table.js';
@@ -93,10 +93,10 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
     let outer: Checked = {ok: false, error: 'no receiving-thread designation accepted'};
     for (const designation of receivingDesignations(t, rt.major)) {
-      outer = safeCheck(ctx, newBoltVariant(ctx, {
-        thread: designation, boltRm: INSERT_WIRE.rm, boltRp: INSERT_WIRE.rp, engagement, chamfer: 0,
+      outer = safeCheckThread(ctx, newBoltVariant(ctx, {
+        boltRm: INSERT_WIRE.rm, boltRp: INSERT_WIRE.rp, engagement, chamfer: 0,
         bearingDiameter: 1.5 * rt.major, serviceLoad: 0, internal: 'tapped', utilisation: joint.utilisation,
-      }));
+      }), designation);
       if (outer.ok) break;
     }
     if (!outer.ok) return infeasible(o, `not computed (parent at the receiving thread): ${outer.error}`);
@@ -138,9 +138,9 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     const fullReach = roundUpHalf(e.setDown + e.length);
     o.screwLengthChange = repair.boltLengthMayChange ? Math.max(0, fullReach - ctx.reach) : 0;
     if (engagement < ctx.thread.pitch) return infeasible(o, `the screw reaches ${mm(ctx.reach)} mm, too short for the insert`);
-    const outer = safeCheck(ctx, newBoltVariant(ctx, {
-      thread: e.external, boltRm: e.bodyRm, boltRp: 0.8 * e.bodyRm, engagement: e.length, chamfer: 0, serviceLoad: 0, internal: 'tapped',
-    }));
+    const outer = safeCheckThread(ctx, newBoltVariant(ctx, {
+      boltRm: e.bodyRm, boltRp: 0.8 * e.bodyRm, engagement: e.length, chamfer: 0, serviceLoad: 0, internal: 'tapped',
+    }), e.external);
     if (!outer.ok) return infeasible(o, `not computed (insert in the parent, ${e.external}): ${outer.error}`);
     const g = outer.result.geometry;
     const ext: ThreadBasics = {family: g.spec.family, nominal: g.nominal, pitch: g.pitch, tpi: g.spec.tpi, sizeLabel: g.spec.sizeLabel, series: g.spec.series};

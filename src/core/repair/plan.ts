@@ -4,17 +4,17 @@
  */
 import type {JointInput} from '../joint/input.js';
 import {CAUTION_LINES} from '../cautions.js';
-import {mm, type PlanContext} from './common.js';
+import {infeasible, mm, skeleton, type PlanContext} from './common.js';
 import type {RepairDeps} from './context.js';
 import {plainDesignation, HELICAL_SOURCES, type ThreadBasics} from './helical.js';
 import {HOLE_SOURCES} from './holes.js';
 import {helicalOptions, solidOptions} from './inserts.js';
 import type {RepairInput} from './input.js';
-import {rankOptions, REPAIR_RANKING_RULE} from './rank.js';
+import {EFFORT_SCALE, rankOptions, REPAIR_RANKING_RULE} from './rank.js';
 import {DEMO_TABLE_WARNING} from './solid-table.js';
 import {oversizeOptions, throughBoltOption} from './resize.js';
 import {longerEngagementOption, reuseOption} from './same-thread.js';
-import type {RepairPlan} from './types.js';
+import {REPAIR_KINDS, type RepairOption, type RepairPlan} from './types.js';
 
 /** Build the per-call context. Throws only when the joint itself is rejected by the mechanics core. */
 export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairInput): PlanContext {
@@ -41,15 +41,21 @@ export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairI
  */
 export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: RepairInput): RepairPlan {
   const ctx = planContext(deps, joint, repair);
-  const reuse = reuseOption(ctx);
-  const options = [
-    reuse,
-    longerEngagementOption(ctx, reuse),
-    ...helicalOptions(ctx),
-    ...solidOptions(ctx),
-    ...oversizeOptions(ctx),
-    throughBoltOption(ctx),
-  ];
+  let options: RepairOption[];
+  if (joint.internal === 'nut') {
+    // The planner repairs tapped holes; a nut joint is put right with a new nut (and bolt).
+    options = REPAIR_KINDS.map(kind => infeasible(skeleton(ctx, kind, EFFORT_SCALE[kind].name), 'the joint uses a nut, not a tapped hole: fit a new nut and bolt and check it'));
+  } else {
+    const reuse = reuseOption(ctx);
+    options = [
+      reuse,
+      longerEngagementOption(ctx, reuse),
+      ...helicalOptions(ctx),
+      ...solidOptions(ctx),
+      ...oversizeOptions(ctx),
+      throughBoltOption(ctx),
+    ];
+  }
   const notes: string[] = [];
   if (ctx.stripped) notes.push(`stripped from the surface to ${mm(Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach))} mm; good thread assumed below ${ctx.goodStart.toFixed(1)} mm`);
   if (repair.depthAvailable === undefined) notes.push(repair.through ? 'part thickness not given: depths are not checked' : 'depth available not given: hole depths are not checked');

@@ -63,13 +63,6 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
   });
 }
 
-/** Nut class matched to common bolt grades (ISO 898-2: a class-N nut for bolts up to N.8; from memory). */
-function defaultNutClass(grade: string): string | undefined {
-  const m = /^(\d{1,2})\.(\d)$/.exec(grade.trim());
-  if (m) return m[1];
-  return undefined;
-}
-
 export function throughBoltOption(ctx: PlanContext): RepairOption {
   const {deps, repair, joint, thread, base} = ctx;
   const o = skeleton(ctx, 'through-bolt', 'through-bolt and nut');
@@ -77,12 +70,12 @@ export function throughBoltOption(ctx: PlanContext): RepairOption {
   o.changeSize = o.drill;
   if (!repair.through) return infeasible(o, 'the hole is blind; a nut needs a hole through the part');
   if (!repair.boltLengthMayChange) return infeasible(o, 'needs a longer bolt to take a nut, and the screw length is fixed');
-  const nutClass = repair.nutClass ?? deps.nutClassFor?.(joint.boltGrade, base.geometry.spec) ?? defaultNutClass(joint.boltGrade);
+  const nutClass = repair.nutClass ?? deps.nutClassFor?.(joint.boltGrade, base.geometry.spec);
   if (nutClass === undefined) return infeasible(o, `no nut class matched to bolt grade ${joint.boltGrade}; give the nut class`);
   const dims = deps.nutDimensions?.(base.geometry.spec);
   const m = repair.nutHeight ?? dims?.m;
   const s = repair.nutFlats ?? dims?.s;
-  if (m === undefined || s === undefined) return infeasible(o, 'nut height and width across flats unknown for this size; give them');
+  if (m === undefined || s === undefined) return infeasible(o, `no tabulated nut for ${ctx.plain}; give the nut height and width across flats`);
   const wall = wallProblem(repair.wall, o.drill, 'the clearance hole');
   if (wall) return infeasible(o, wall);
   const r = safeCheck(ctx, {
