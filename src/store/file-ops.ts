@@ -203,9 +203,12 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
   try {
     fs.writeSync(fd, content);
     fs.fsyncSync(fd);
-  } finally {
+  } catch (e) {
     fs.closeSync(fd);
+    fs.rmSync(lock, {force: true}); // disk full or similar: leave no empty lock behind
+    throw e;
   }
+  fs.closeSync(fd);
   try {
     return fn();
   } finally {

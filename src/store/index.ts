@@ -11,3 +11,5 @@ export {saveDraft, loadDraft, clearDraft} from './draft.js';
 export {resolvePreset} from './resolve.js';
 export {StoreError} from './errors.js';
 export {MAX_IMPORT_BYTES, MAX_IMPORT_TEXT, MAX_DEPTH} from './guard.js';
+export type {SolidInsertTable, SolidInsertTableDraft} from './inserts.js';
+export {describePreset} from './describe.js';

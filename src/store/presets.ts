@@ -13,6 +13,7 @@ import {keyOf, readState, writeState, type Entry, type State} from './store-file
 import {NAME_RULE, PresetNameSchema, SavablePresetSchema, describeZodError, type Preset, type QuarantineEntry, type SavablePreset} from './schema.js';
 import {shippedPresets} from './shipped.js';
 import {exportDocument, importPresets, writeExport, type ImportOptions, type ImportReport} from './transfer.js';
+import {dropInsertTable, putInsertTable, readInsertTables, type SolidInsertTable, type SolidInsertTableDraft} from './inserts.js';
 
 export type {Preset, SavablePreset, QuarantineEntry} from './schema.js';
 export type {ImportOptions, ImportReport} from './transfer.js';
@@ -63,7 +64,12 @@ export interface PresetStore {
   exportTo(file: string, names?: string[], opts?: {force?: boolean}): void;
   /** The export document as JSON text (for writing to stdout). */
   exportJson(names?: string[]): string;
+  /** Presets, and solid insert tables, that could not be read; kept in the file. */
   quarantined(): QuarantinedItem[];
+  /** The user's own solid key-locked insert tables (for the repair planner). */
+  insertTables(): SolidInsertTable[];
+  saveInsertTable(t: SolidInsertTableDraft, opts?: {overwrite?: boolean}): SolidInsertTable;
+  removeInsertTable(name: string): void;
   /** One-line messages for the user about what happened to the files. */
   warnings(): string[];
 }
@@ -282,7 +288,22 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
       return exportDocument(chosen, now());
     },
     quarantined() {
-      return current().quarantine.map(q => structuredClone(q));
+      const s = current();
+      const tables = readInsertTables(s).invalid.map(t => ({...t, at: ''}));
+      return [...s.quarantine, ...tables].map(q => structuredClone(q));
+    },
+    insertTables() {
+      return readInsertTables(current()).valid.map(v => structuredClone(v.table));
+    },
+    saveInsertTable(t, o = {}) {
+      let out: SolidInsertTable | undefined;
+      mutate(s => {
+        out = putInsertTable(s, t, o.overwrite === true);
+      });
+      return structuredClone(out!);
+    },
+    removeInsertTable(name) {
+      mutate(s => dropInsertTable(s, name));
     },
     warnings() {
       return [...notes];
