@@ -46,18 +46,23 @@ export function metricTolerances(
 ): {tol: MetricTolerances; method: 'table' | 'formula'; source: string; checked: boolean; missing: string[]} {
   const t = tableTolerances(d, P, ext, int);
   if (t.complete) return {tol: t.values as MetricTolerances, method: 'table', source: t.source, checked: t.checked, missing: []};
+  // Per value: the table where it has an entry, the generating formula where it has none.
+  const v = t.values;
   const f: MetricTolerances = {
-    es: formulaDeviation(ext.position, P),
-    Td: formulaTd(P, ext.crestGrade),
-    Td2: formulaTd2(d, P, ext.pitchGrade),
-    EI: formulaDeviation(int.position, P),
-    TD1: formulaTD1(P, int.crestGrade),
-    TD2: formulaTD2(d, P, int.pitchGrade),
+    es: v.es ?? formulaDeviation(ext.position, P),
+    Td: v.Td ?? formulaTd(P, ext.crestGrade),
+    Td2: v.Td2 ?? formulaTd2(d, P, ext.pitchGrade),
+    EI: v.EI ?? formulaDeviation(int.position, P),
+    TD1: v.TD1 ?? formulaTD1(P, int.crestGrade),
+    TD2: v.TD2 ?? formulaTD2(d, P, int.pitchGrade),
   };
+  const partial = Object.keys(v).length > 0;
   return {
     tol: f,
     method: 'formula',
-    source: 'ISO 965-1 generating formulas (from memory of ISO 965-1), rounded to 1 µm',
+    source: partial
+      ? 'ISO 965-1 generating formulas (from memory of ISO 965-1), rounded to 1 µm, for the values the shipped ISO 965-1 tables lack; the rest from those tables'
+      : 'ISO 965-1 generating formulas (from memory of ISO 965-1), rounded to 1 µm',
     checked: false,
     missing: t.missing,
   };

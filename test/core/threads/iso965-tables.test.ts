@@ -103,6 +103,15 @@ describe('ISO 965-1 positions h and H', () => {
     expect(g.limits.internal.minorMin).toBe(8.376);
   });
 
+  it('a class the shipped tables lack falls back to the formulas for that value only, and says so', () => {
+    // ISO 965-1 gives no grade-8 major-diameter tolerance for P 0.5 mm (grades 4 and 6 only below P 0.8)
+    const g = geom('M3-8g');
+    expect(g.limitsProvenance.method).toBe('formula');
+    expect(g.notes.join(' ')).toMatch(/no Td grade 8 for P 0\.5 mm/);
+    // es(g) still from the table: -20 µm for P 0.5 (ISO 965-2: M3 6g d max 2.980); the formula would give -21
+    expect(g.limits.external.majorMax).toBe(2.98);
+  });
+
   it('grades other than 6 use the shipped tables but say they are from memory', () => {
     const g = geom('M10x1.5-5H/4g6g');
     expect(g.limitsProvenance.method).toBe('table');
