@@ -71,6 +71,13 @@ describe('tapwright screw text output', () => {
     expect(out).toMatch(/ksi/);
     expect(out).toMatch(/ in\b/);
   });
+  it('--help and --picks fit 80 columns', async () => {
+    const io = memoryIo();
+    expect(await runCli(['screw', '--help'], io)).toBe(0);
+    const picks = await run(['--picks']);
+    for (const line of (io.stdout() + picks.out).split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+    expect(io.stdout()).toMatch(/--nut-length/);
+  });
   it('--picks lists the friction tables with their source', async () => {
     const {code, out} = await run(['--picks']);
     expect(code).toBe(0);

@@ -9,7 +9,8 @@ import {CAUTION_LINES} from '../../core/cautions.js';
 const WIDTH = 80;
 const LABEL = 14;
 
-function wrap(text: string, first: string, indent: string): string[] {
+/** Word-wrap `text` to 80 columns; `first` prefixes the first line, `indent` the others. */
+export function wrap(text: string, first: string, indent: string): string[] {
   const lines: string[] = [];
   let line = first;
   let empty = true;

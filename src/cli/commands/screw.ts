@@ -23,7 +23,7 @@ import {
 import type {Range} from '../../core/types.js';
 import type {UnitSystem} from '../../core/units.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
-import {screwText} from './screw-text.js';
+import {screwText, wrap} from './screw-text.js';
 
 const OPTION_FIELD: Record<string, string> = {
   thread: '--thread', starts: '--starts', load: '--load', loadDirection: '--direction', muThread: '--mu-thread',
@@ -163,10 +163,10 @@ export function screwInputFromArgs(args: string[]): {input: ScrewInput; units: U
 function picksText(): string {
   const out = ['THREAD FRICTION f (--mu-thread pick: min..max)'];
   for (const p of THREAD_FRICTION) out.push(`  ${p.id.padEnd(22)} ${p.min.toFixed(2)}..${p.max.toFixed(2)}  ${p.screw} screw, ${p.nut} nut`);
-  out.push(`  source: ${THREAD_FRICTION_SOURCE.source}`, '', 'COLLAR FRICTION fc (--mu-collar pick: running value used)');
+  out.push(...wrap(THREAD_FRICTION_SOURCE.source, '  source: ', '    '), '', 'COLLAR FRICTION fc (--mu-collar pick: running value used)');
   for (const p of COLLAR_FRICTION) out.push(`  ${p.id.padEnd(22)} running ${p.running.toFixed(2)}, starting ${p.starting.toFixed(2)}`);
-  out.push(`  source: ${COLLAR_FRICTION_SOURCE.source}`, '');
-  return out.map(l => (l.length > 80 ? l.slice(0, 80) : l)).join('\n');
+  out.push(...wrap(COLLAR_FRICTION_SOURCE.source, '  source: ', '    '), '');
+  return out.join('\n');
 }
 
 export const command: Command = {
