@@ -31,7 +31,7 @@ function run(args: string[]): {child: ChildProcess; done: Promise<{code: number 
 function waitFor(child: ChildProcess, text: string): Promise<void> {
   return new Promise((resolve, reject) => {
     let seen = '';
-    const t = setTimeout(() => reject(new Error(`worker did not print "${text}"`)), 10000);
+    const t = setTimeout(() => reject(new Error(`worker did not print "${text}"`)), 30000);
     child.stdout!.on('data', d => {
       seen += d;
       if (seen.includes(text)) {
@@ -59,7 +59,7 @@ describe('concurrent processes', () => {
     expect(saved).toContain('before');
     expect(fs.existsSync(path.join(dir, 'presets.json.lock'))).toBe(false);
     console.info(`20 processes x 3 saves: ${saved.length - 1}/60 kept, plus the earlier one; ${elapsed} ms wall time including start-up`);
-  });
+  }, 60_000); // no timing assertion (speed is measured by npm run bench); a loaded 2-core machine needs the room
 });
 
 describe('kill -9 during a save', () => {
@@ -86,7 +86,7 @@ describe('kill -9 during a save', () => {
       expect(after.list().filter(p => p.source === 'saved').map(p => p.name).sort()).toEqual(['keep-me', 'next']);
       expect(fs.existsSync(path.join(dir, 'presets.json.lock'))).toBe(false);
       expect(fs.readdirSync(dir).some(n => n.includes('.tmp-'))).toBe(false);
-    });
+    }, 60_000);
   }
 
   it('random kills of a process saving in a loop never leave a broken store', async () => {
@@ -108,5 +108,5 @@ describe('kill -9 during a save', () => {
       const mine = names.filter(n => n.startsWith(`r${round}-`)).map(n => Number(n.split('-')[1])).sort((a, b) => a - b);
       expect(mine).toEqual(mine.map((_, i) => i));
     }
-  });
+  }, 60_000);
 });
