@@ -16,6 +16,15 @@ describe('checkJoint', () => {
     expect(Math.abs(r.stripping.boltBreakForce - 46400)).toBeLessThan(50);
   });
 
+  it('default bearing diameter reproduces the VDI 2230 Part 1 fine-thread table: M8x1 8.8 20.2 kN / 26.1 N·m, M10x1.25 10.9 46.4 kN / 75 N·m (mu 0.12, 90 %)', () => {
+    const a = run({...M10_NUT, thread: 'M8x1'});
+    expect(Math.abs(a.tightening.preload.max / 1000 - 20.2)).toBeLessThanOrEqual(0.1);
+    expect(Math.abs(a.tightening.torque - 26.1)).toBeLessThanOrEqual(0.5);
+    const b = run({...M10_NUT, thread: 'M10x1.25', boltGrade: '10.9', nutClass: '10'});
+    expect(Math.abs(b.tightening.preload.max / 1000 - 46.4)).toBeLessThanOrEqual(0.1);
+    expect(Math.abs(b.tightening.torque - 75)).toBeLessThanOrEqual(0.5);
+  });
+
   it('uses the least-material limits of the classes and says so (FED-STD-H28/2B)', () => {
     const r = run(M10_NUT);
     expect(r.stripping.limitsUsed).toBe('worst-case');
