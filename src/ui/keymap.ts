@@ -69,8 +69,8 @@ export const KEYMAP: readonly Binding[] = [
 
   {command: 'field.prev', keys: [k('up')], context: 'joint', hint: 'field', description: 'Previous field'},
   {command: 'field.next', keys: [k('down')], context: 'joint', description: 'Next field'},
-  {command: 'step.next', keys: [k('right'), k('tab')], context: 'joint', hint: 'step', description: 'Next step (Thread, Parts, Engagement, Tightening, Hole state)'},
-  {command: 'step.prev', keys: [k('left'), k('tab', {shift: true})], context: 'joint', description: 'Previous step'},
+  {command: 'step.prev', keys: [k('left'), k('tab', {shift: true})], context: 'joint', hint: 'step', description: 'Previous step'},
+  {command: 'step.next', keys: [k('right'), k('tab')], context: 'joint', description: 'Next step (Thread, Parts, Engagement, Tightening, Hole state)'},
   {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
   {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
   {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},
@@ -184,7 +184,7 @@ export function hintText(contexts: readonly Context[], ascii: boolean, width: nu
       seen.add(b.command);
       const same = KEYMAP.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
       const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);
-      parts.push(`${keys.map(s => keyLabel(s, ascii)).join('')} ${b.hint}`);
+      parts.push(`${keys.map(s => keyLabel(s, ascii)).join(ascii ? '/' : '')} ${b.hint}`);
     }
   }
   let line = '';
@@ -199,7 +199,7 @@ export function hintText(contexts: readonly Context[], ascii: boolean, width: nu
 /** Commands whose key is shown together with another's on the hint line (↑↓ field). */
 function pairOf(command: string): string | undefined {
   const pairs: Record<string, string> = {
-    'field.prev': 'field.next', 'step.next': 'step.prev', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down',
+    'field.prev': 'field.next', 'step.prev': 'step.next', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down',
   };
   return pairs[command];
 }

@@ -1,6 +1,189 @@
-// Placeholder until the workbench lands.
+/**
+ * `tapwright` with no command: start the interactive workbench, or, where there
+ * is no terminal, print the check report of the preset and point to the CLI.
+ * Owns the terminal while the workbench runs: the alternate screen, raw mode
+ * through Ink, and its restoration on quit, Ctrl-C, SIGTERM and SIGHUP, with
+ * unsaved edits kept as a draft for the next start.
+ */
+import React from 'react';
+import {render} from 'ink';
 import type {CliIo} from '../cli/io.js';
-export async function launch(_args: string[], io: CliIo): Promise<number> {
-  io.err('tapwright: the workbench is not available in this build yet; see tapwright --help\n');
+import {checkJoint} from '../core/joint/index.js';
+import {formatCheckText} from '../report/index.js';
+import {DEFAULT_PRESET, configDir, openSettings, resolvePreset, type SettingsHandle} from '../store/index.js';
+import {LaunchUsageError, parseLaunchArgs, wantsAscii, wantsColor, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
+import {createFrameWriter} from './terminal/frame-writer.js';
+import {presetValues, realServices} from './real-services.js';
+import {App} from './app.js';
+import {initialState, isDirty, type Message, type WorkbenchState} from './state/workbench.js';
+import {makeTheme} from './theme.js';
+import type {FormValues} from './state/fields.js';
+
+export interface LaunchTerminal {
+  stdin: NodeJS.ReadStream;
+  stdout: NodeJS.WriteStream;
+}
+
+const ENTER_ALT = '\u001B[?1049h\u001B[H';
+const LEAVE_ALT = '\u001B[?1049l';
+const SHOW_CURSOR = '\u001B[?25h';
+const RESET_STYLE = '\u001B[0m';
+
+function nonInteractive(why: string, presetName: string, io: CliIo, ascii: boolean): number {
+  const hint =
+    `tapwright: the interactive workbench needs a terminal (${why}).\n` +
+    `For scripts and pipes use the commands: tapwright check --preset NAME (or --thread ... --engage ...),\n` +
+    `tapwright repair, tapwright presets list; see tapwright --help.\n`;
+  try {
+    const p = resolvePreset(presetName, io.env, 'joint');
+    const values = presetValues(p);
+    const report = formatCheckText(checkJoint(values.joint as never), values.joint as never, {units: 'si', ascii});
+    io.out(report.endsWith('\n') ? report : `${report}\n`);
+    io.err(`${hint}Printed above: the check report of preset "${p.name}".\n`);
+  } catch (e) {
+    io.err(`${hint}(The check report of preset "${presetName}" could not be printed: ${e instanceof Error ? e.message : String(e)})\n`);
+  }
   return 2;
+}
+
+/** Start the workbench; resolves with the exit code. */
+export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {stdin: process.stdin, stdout: process.stdout}): Promise<number> {
+  let opts;
+  try {
+    opts = parseLaunchArgs(args);
+  } catch (e) {
+    if (e instanceof LaunchUsageError) {
+      io.err(`tapwright: ${e.message}\n`);
+      return 2;
+    }
+    throw e;
+  }
+  const tenv: TerminalEnv = {env: io.env, stdinIsTTY: io.stdinIsTTY, stdoutIsTTY: io.stdoutIsTTY};
+  const why = whyNoWorkbench(tenv);
+  const dir = configDir(io.env);
+  let settings: SettingsHandle | undefined;
+  try {
+    settings = openSettings(dir);
+  } catch {
+    settings = undefined;
+  }
+  const saved = settings?.get();
+  const ascii = wantsAscii(tenv, opts.ascii || saved?.ascii === true);
+  const presetName = opts.preset ?? DEFAULT_PRESET;
+  if (why) return nonInteractive(why, presetName, io, ascii);
+
+  const svc = realServices({configDir: dir, cwd: io.cwd, now: io.now});
+  const notes: string[] = [...svc.store.warnings(), ...(settings?.warnings() ?? [])];
+  let name = presetName;
+  let readOnly = true;
+  let values: FormValues;
+  try {
+    const p = svc.presets.load(presetName);
+    ({name, readOnly, values} = p);
+  } catch (e) {
+    if (opts.preset !== undefined) {
+      io.err(`tapwright: --preset "${opts.preset}": ${e instanceof Error ? e.message : String(e)}; see tapwright presets list\n`);
+      return 2;
+    }
+    notes.push(`the default preset could not be opened (${e instanceof Error ? e.message : String(e)}); starting empty`);
+    values = {joint: {thread: 'M10', engagement: 10}, hole: {}};
+    name = 'new joint';
+    readOnly = false;
+  }
+  let draft;
+  try {
+    draft = svc.draft.load();
+  } catch {
+    draft = undefined;
+  }
+  const message: Message | undefined = notes.length ? {text: notes.join('; '), level: 'error'} : undefined;
+
+  const {stdin, stdout} = term;
+  // A 0x0 pty (script(1), some docker exec) reports no size: Ink would wrap at 0 columns.
+  if (!stdout.columns || !stdout.rows) {
+    stdout.columns = Number(io.env.COLUMNS) || 80;
+    stdout.rows = Number(io.env.LINES) || 24;
+  }
+  const units = opts.units ?? saved?.units ?? 'si';
+  const initial = initialState({name, readOnly, values, units, ascii, draft, message, size: {columns: stdout.columns, rows: stdout.rows}});
+  const theme = makeTheme(wantsColor(tenv, opts.color), ascii);
+
+  let latest: WorkbenchState = initial;
+  let restored = false;
+  let draftKept = false;
+  const keepDraft = (s: WorkbenchState) => {
+    try {
+      if (isDirty(s) && !s.draftOffer) {
+        svc.draft.save({savedAt: io.now().toISOString(), presetName: s.preset.name, values: s.values});
+        draftKept = true;
+      } else if (!s.draftOffer) svc.draft.clear();
+    } catch {
+      // The draft is a convenience; a failure to keep it must not stop the exit.
+    }
+  };
+  const restore = () => {
+    if (restored) return;
+    restored = true;
+    stdout.write(`${RESET_STYLE}${SHOW_CURSOR}${LEAVE_ALT}`);
+  };
+
+  stdout.write(ENTER_ALT);
+  const writer = createFrameWriter(stdout);
+  const app = React.createElement(App, {
+    initial,
+    svc,
+    theme,
+    onState: s => {
+      latest = s;
+    },
+    onQuit: s => {
+      latest = s;
+      keepDraft(s);
+    },
+  });
+  const instance = render(app, {stdout: writer as unknown as NodeJS.WriteStream, stdin, exitOnCtrlC: false, patchConsole: false, maxFps: 30});
+
+  let signalCode: number | undefined;
+  const onSignal = (signal: NodeJS.Signals, code: number) => () => {
+    signalCode = code;
+    keepDraft(latest);
+    try {
+      instance.unmount();
+    } catch {
+      // Already unmounting.
+    }
+    restore();
+    if (signal === 'SIGHUP') {
+      // The terminal is gone: nothing more can be written to it.
+      process.exit(code);
+    }
+  };
+  const handlers: [NodeJS.Signals, () => void][] = [
+    ['SIGTERM', onSignal('SIGTERM', 143)],
+    ['SIGHUP', onSignal('SIGHUP', 129)],
+    ['SIGINT', onSignal('SIGINT', 130)],
+  ];
+  for (const [sig, h] of handlers) process.on(sig, h);
+  process.on('exit', restore);
+
+  try {
+    await instance.waitUntilExit();
+  } catch (e) {
+    keepDraft(latest);
+    restore();
+    io.err(`tapwright: the workbench stopped: ${e instanceof Error ? e.message : String(e)}\n`);
+    return 1;
+  } finally {
+    for (const [sig, h] of handlers) process.off(sig, h);
+    restore();
+    process.off('exit', restore);
+  }
+  try {
+    settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64)});
+  } catch {
+    // Settings are a convenience.
+  }
+  if (draftKept) io.err('tapwright: unsaved edits were kept as a draft; the next start offers to restore them.\n');
+  if (signalCode !== undefined) return signalCode;
+  return latest.quit === 'interrupt' ? 130 : 0;
 }

@@ -58,8 +58,8 @@ export interface PresetPort {
   rename(from: string, to: string): void;
   duplicate(from: string, to: string): void;
   remove(name: string): void;
-  /** Import presets from a JSON file; returns the names imported. */
-  importFile(path: string): string[];
+  /** Import presets from a JSON file: the names imported, and each one skipped with the reason. */
+  importFile(path: string): {imported: string[]; skipped: string[]};
   /** Export one preset (or all when name is undefined) to a JSON file. */
   exportFile(path: string, name: string | undefined, overwrite: boolean): void;
 }
@@ -75,7 +75,8 @@ export interface WorkbenchServices {
   check(input: JointInput): CheckResult;
   /** Designations for the type-ahead, best match first. */
   designations(query: string, limit: number): string[];
-  picks(source: PickSource): PickItem[];
+  /** Picker entries, their numbers formatted in the display units. */
+  picks(source: PickSource, units: 'si' | 'us'): PickItem[];
   /** The ranked repair list; undefined while the repair planner is not in this build. */
   repairs?: (joint: JointInput, hole: RepairInput) => RepairPlan;
   presets: PresetPort;

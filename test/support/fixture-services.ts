@@ -119,7 +119,7 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}): Wor
       importFile(path) {
         if (!store.files.has(path)) throw new Error(`cannot read ${path}: no such file`);
         store.saved.set('imported-one', {values: structuredClone(FIXTURE_VALUES), savedAt: '2026-01-01T10:00:00.000Z'});
-        return ['imported-one'];
+        return {imported: ['imported-one'], skipped: []};
       },
       exportFile(path, name, overwrite) {
         if (store.files.has(path) && !overwrite) throw new Error(`${path} exists; not overwritten`);

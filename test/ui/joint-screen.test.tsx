@@ -8,7 +8,7 @@ afterEach(() => cleanup());
 describe('joint screen', () => {
   it('draws at most rows-1 lines at 80x24 with the caution and the hint line', async () => {
     const app = startApp();
-    await app.see('Results (SI)');
+    await app.see('Preload');
     const lines = app.frame().split('\n');
     expect(lines.length).toBeLessThanOrEqual(23);
     expect(lines.every(l => l.length <= 80)).toBe(true);

@@ -55,7 +55,7 @@ function FieldRows({state, ev, width}: {state: WorkbenchState; ev: Evaluation; w
   const t = useTheme();
   const fields = currentFields(state);
   const sel = currentField(state);
-  const labelW = 20;
+  const labelW = 18;
   return (
     <>
       {fields.map(f => {
@@ -129,11 +129,12 @@ function ThreadInfo({ev, state, width, height}: {ev: Evaluation; state: Workbenc
     `limits: ${g.limitsProvenance.method === 'table' ? 'table' : 'formulas'}, ${g.limitsProvenance.source}`,
     ...g.notes,
   ];
+  const wrapped = lines.flatMap((l, i) => wrap(l, width, 3, t.sym.ellipsis).map((w, j) => ({text: j ? `  ${w}` : w, first: i === 0})));
   return (
     <Box flexDirection="column" width={width}>
-      {lines.slice(0, height).map((l, i) => (
-        <Text key={i} color={i === 0 ? undefined : t.tone('dim')}>
-          {fit(l, width, t.sym.ellipsis)}
+      {wrapped.slice(0, height).map((l, i) => (
+        <Text key={i} color={l.first ? undefined : t.tone('dim')}>
+          {fit(l.text, width, t.sym.ellipsis)}
         </Text>
       ))}
     </Box>
@@ -153,7 +154,7 @@ function LeftColumn({state, ev, svc, width, height}: Props) {
       </Box>
     );
   }
-  const helpLines = sel ? wrap(sel.help, width, 2, t.sym.ellipsis) : [];
+  const helpLines = sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : [];
   const below = rest - helpLines.length - 1;
   const shares = ev.result?.loadShare ?? [];
   const isThreadStep = STEPS[state.step]?.id === 'thread';
@@ -169,7 +170,7 @@ function LeftColumn({state, ev, svc, width, height}: Props) {
         <ThreadInfo ev={ev} state={state} width={width} height={below + 1} />
       ) : below >= 2 && shares.length > 0 ? (
         <Box flexDirection="column" marginTop={1}>
-          <Text bold>{fit('Load share per thread, 1 = loaded face', width, t.sym.ellipsis)}</Text>
+          <Text bold>{fit('Load share/thread, 1 = loaded face', width, t.sym.ellipsis)}</Text>
           {loadShareLines(shares, width, below - 1, t).map((l, i) => (
             <Text key={`l${i}`}>{l}</Text>
           ))}
@@ -183,7 +184,7 @@ function FlagsPanel({flags, width, height}: {flags: Flag[]; width: number; heigh
   const t = useTheme();
   const lines: {text: string; tone?: Flag['level']}[] = [];
   for (const f of sortedFlags(flags)) {
-    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width, 4, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, tone: f.level}));
+    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width - 2, 5, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, tone: f.level}));
   }
   return (
     <Box flexDirection="column" width={width} height={height}>
@@ -214,8 +215,10 @@ function FlagSummary({ev, width, lines}: {ev: Evaluation; width: number; lines: 
   return (
     <Box height={lines} flexDirection="column">
       {shown.map((f, i) => {
-        const suffix = i === shown.length - 1 && more > 0 ? `  (+${more} more: f)` : '';
-        const text = fit(`${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`, width - suffix.length, t.sym.ellipsis) + suffix;
+        const full = `${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`;
+        const last = i === shown.length - 1;
+        const suffix = last && more > 0 ? ` (+${more}, f: all)` : Array.from(full).length > width ? ' (f)' : '';
+        const text = fit(full, width - suffix.length, t.sym.ellipsis) + suffix;
         return (
           <Text key={f.code + i} color={f.level === 'fail' ? t.tone('fail') : f.level === 'watch' ? t.tone('watch') : undefined} bold={f.level === 'fail'}>
             {text}
@@ -230,7 +233,7 @@ export function JointScreen(props: Props) {
   const {state, ev, width, height} = props;
   const flagLines = height >= 20 ? 4 : 2;
   const bodyH = height - 1 - flagLines;
-  const leftW = Math.max(33, Math.floor(width * 0.42));
+  const leftW = Math.max(34, Math.floor(width * 0.42));
   const rightW = width - leftW - 1;
   const problem = ev.error ?? Object.values(ev.errors)[0];
   return (

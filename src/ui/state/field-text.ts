@@ -6,6 +6,11 @@
 import {parseQuantity, formatQuantity, formatNumber, displayUnit, toDisplay, type UnitSystem} from '../../core/units.js';
 import {fieldBounds, type FieldDef} from './fields.js';
 
+/** A number without trailing zeros, to 5 significant figures ("12", "0.472"). */
+export function plain(x: number): string {
+  return String(Number(x.toPrecision(5)));
+}
+
 export type FieldParse = {ok: true; value: unknown} | {ok: false; error: string};
 
 /** The unit shown beside a field, e.g. "mm", "N·m"; empty for ratios and text. */
@@ -17,7 +22,7 @@ export function fieldUnit(f: FieldDef, units: UnitSystem, ascii: boolean): strin
 export function rangeText(f: FieldDef, units: UnitSystem, ascii: boolean): string {
   const b = fieldBounds(f.id);
   if (b.min === undefined && b.max === undefined) return '';
-  const show = (x: number) => (f.dimension ? formatNumber(toDisplay(x, f.dimension, units), 3) : formatNumber(x, 3));
+  const show = (x: number) => plain(f.dimension ? toDisplay(x, f.dimension, units) : x);
   const unit = fieldUnit(f, units, ascii);
   const lo = b.min !== undefined ? show(b.min) : undefined;
   const hi = b.max !== undefined ? show(b.max) : undefined;
@@ -27,10 +32,16 @@ export function rangeText(f: FieldDef, units: UnitSystem, ascii: boolean): strin
 
 /** Value shown in the field when not editing. */
 export function formatField(f: FieldDef, value: unknown, units: UnitSystem, ascii: boolean): string {
-  if (value === undefined || value === null || value === '') return f.optional ? '-' : '(empty)';
+  if (value === undefined || value === null || value === '') {
+    if (!f.optional) return '(needed)';
+    const d = fieldBounds(f.id).default;
+    if (d === undefined || d === null) return f.empty ?? '-';
+    const shown = formatField(f, d, units, ascii);
+    return shown.length <= 4 ? `${shown} (default)` : `${shown} (def.)`;
+  }
   switch (f.kind) {
     case 'quantity':
-      return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: 4}) : String(value);
+      return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: 3}) : String(value);
     case 'ratio':
       return typeof value === 'number' ? formatNumber(value, 3) : String(value);
     case 'range': {
@@ -47,7 +58,7 @@ export function formatField(f: FieldDef, value: unknown, units: UnitSystem, asci
 /** Text put in the edit buffer when editing starts (number without its unit). */
 export function editText(f: FieldDef, value: unknown, units: UnitSystem): string {
   if (value === undefined || value === null) return '';
-  if (f.kind === 'quantity' && typeof value === 'number') return formatNumber(toDisplay(value, f.dimension ?? 'ratio', units), 4);
+  if (f.kind === 'quantity' && typeof value === 'number') return plain(toDisplay(value, f.dimension ?? 'ratio', units));
   if (f.kind === 'range' || f.kind === 'ratio' || f.kind === 'bool') return formatField(f, value, units, true);
   return String(value);
 }

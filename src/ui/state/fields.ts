@@ -39,6 +39,8 @@ export interface FieldDef {
   pick?: PickSource;
   /** May be left empty (the core then uses its default or leaves it out). */
   optional: boolean;
+  /** What applies when the field is empty, shown in its place ("from grade"). */
+  empty?: string;
   /** One line shown under the fields when this one is selected. */
   help: string;
   isVisible?: (v: FormValues) => boolean;
@@ -53,35 +55,35 @@ export const FIELDS: readonly FieldDef[] = [
     help: 'Thread with tolerance class, e.g. M10x1.5-6H/6g or 1/4-20 UNC-2A; type to see matches.'},
   {id: 'boltGrade', label: 'Bolt grade', step: 'parts', kind: 'pick', pick: 'boltGrade', optional: false,
     help: 'Property class of the bolt or screw; Enter opens the list with sources.'},
-  {id: 'boltRm', label: 'Bolt Rm (custom)', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true,
+  {id: 'boltRm', label: 'Bolt Rm', empty: 'from grade', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true,
     help: 'Tensile strength from a certificate; leave empty to use the grade.'},
-  {id: 'boltRp', label: 'Bolt Rp0.2 (custom)', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true,
+  {id: 'boltRp', label: 'Bolt Rp0.2', empty: 'from grade', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true,
     help: 'Yield strength from a certificate; leave empty to use the grade.'},
-  {id: 'internal', label: 'Internal thread in', step: 'parts', kind: 'choice', choices: ['tapped', 'nut'], optional: false,
+  {id: 'internal', label: 'Internal thread', step: 'parts', kind: 'choice', choices: ['tapped', 'nut'], optional: false,
     help: 'tapped = a tapped hole in the part; nut = a nut. Enter switches.'},
-  {id: 'parent', label: 'Parent material', step: 'parts', kind: 'pick', pick: 'parent', optional: true, isVisible: isTapped,
+  {id: 'parent', label: 'Parent material', empty: 'custom values', step: 'parts', kind: 'pick', pick: 'parent', optional: true, isVisible: isTapped,
     help: 'Material of the part with the tapped hole; Enter opens the list with sources.'},
-  {id: 'parentRm', label: 'Parent Rm (custom)', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true, isVisible: isTapped,
+  {id: 'parentRm', label: 'Parent Rm', empty: 'from material', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true, isVisible: isTapped,
     help: 'Tensile strength of the part from a certificate; empty = material value.'},
-  {id: 'parentShear', label: 'Parent shear (custom)', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true, isVisible: isTapped,
+  {id: 'parentShear', label: 'Parent shear', empty: 'from material', step: 'parts', kind: 'quantity', dimension: 'stress', optional: true, isVisible: isTapped,
     help: 'Shear strength of the part; empty = derived from the material.'},
-  {id: 'nutClass', label: 'Nut class', step: 'parts', kind: 'pick', pick: 'nutClass', optional: true, isVisible: isNut,
+  {id: 'nutClass', label: 'Nut class', empty: 'from bolt grade', step: 'parts', kind: 'pick', pick: 'nutClass', optional: true, isVisible: isNut,
     help: 'Property class of the nut; Enter opens the list with sources.'},
-  {id: 'nutHeight', label: 'Nut height m', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut,
+  {id: 'nutHeight', label: 'Nut height m', empty: 'standard nut', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut,
     help: 'Height of the nut; empty = standard height for the size.'},
-  {id: 'nutFlats', label: 'Nut across flats s', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut,
+  {id: 'nutFlats', label: 'Nut flats s', empty: 'standard nut', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut,
     help: 'Width across flats of the nut; empty = standard for the size.'},
   {id: 'engagement', label: 'Engaged length', step: 'engagement', kind: 'quantity', dimension: 'length', optional: false,
     help: 'From the loaded face, chamfer included. A unit may be typed: 12mm, 0.5in.'},
-  {id: 'chamfer', label: 'Chamfer/countersink', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true,
+  {id: 'chamfer', label: 'Chamfer', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true,
     help: 'Axial length at the loaded face without full thread.'},
-  {id: 'holeDepth', label: 'Blind hole depth', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true, isVisible: isTapped,
+  {id: 'holeDepth', label: 'Blind hole depth', empty: 'through hole', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true, isVisible: isTapped,
     help: 'Drilled-and-tapped depth of a blind hole; empty for a through hole.'},
   {id: 'requiredMargin', label: 'Required margin', step: 'engagement', kind: 'ratio', optional: true,
     help: 'Stripping margin wanted on bolt break; 1.0 = the bolt must break first.'},
   {id: 'tightening', label: 'Tighten by', step: 'tightening', kind: 'choice', choices: ['utilisation', 'torque', 'preload'], optional: false,
     help: 'What you set: a yield utilisation, a torque, or a target preload. Enter switches.'},
-  {id: 'utilisation', label: 'Utilisation of Rp0.2', step: 'tightening', kind: 'ratio', optional: true, isVisible: tighten('utilisation'),
+  {id: 'utilisation', label: 'Utilisation', step: 'tightening', kind: 'ratio', optional: true, isVisible: tighten('utilisation'),
     help: 'Von Mises stress during tightening over yield; 0.9 is usual. 90% also accepted.'},
   {id: 'torque', label: 'Torque', step: 'tightening', kind: 'quantity', dimension: 'torque', optional: false, isVisible: tighten('torque'),
     help: 'Tightening torque; 40Nm or 30ft-lbf accepted.'},
@@ -89,11 +91,11 @@ export const FIELDS: readonly FieldDef[] = [
     help: 'Wanted clamp force; 20kN or 4500lbf accepted.'},
   {id: 'muThread', label: 'Thread friction', step: 'tightening', kind: 'range', optional: true,
     help: 'muG as one value or min..max, e.g. 0.10..0.16.'},
-  {id: 'muHead', label: 'Under-head friction', step: 'tightening', kind: 'range', optional: true,
+  {id: 'muHead', label: 'Head friction', step: 'tightening', kind: 'range', optional: true,
     help: 'muK as one value or min..max, e.g. 0.10..0.16.'},
-  {id: 'nutFactor', label: 'Nut factor K', step: 'tightening', kind: 'ratio', optional: true,
+  {id: 'nutFactor', label: 'Nut factor K', empty: 'use friction', step: 'tightening', kind: 'ratio', optional: true,
     help: 'K of T = K F d; when given it replaces the two friction values. Empty = friction.'},
-  {id: 'bearingDiameter', label: 'Head bearing dia.', step: 'tightening', kind: 'quantity', dimension: 'length', optional: true,
+  {id: 'bearingDiameter', label: 'Head bearing dia', empty: 'standard head', step: 'tightening', kind: 'quantity', dimension: 'length', optional: true,
     help: 'Effective diameter under the head; empty = hexagon head, medium clearance hole.'},
   {id: 'scatter', label: 'Method scatter', step: 'tightening', kind: 'ratio', optional: true,
     help: 'Tightening-method scatter Fmax/Fmin beyond friction; 1 = friction range only.'},
@@ -101,16 +103,16 @@ export const FIELDS: readonly FieldDef[] = [
     help: 'External axial load on the bolt in service; empty = none.'},
   {id: 'hole.holeState', label: 'Hole', step: 'hole', kind: 'choice', choices: ['intact', 'stripped'], optional: false,
     help: 'State of the tapped hole, for the repair planner. Enter switches.'},
-  {id: 'hole.strippedDepth', label: 'Stripped to depth', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
+  {id: 'hole.strippedDepth', label: 'Stripped to depth', empty: 'not given', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
     isVisible: v => v.hole.holeState === 'stripped',
     help: 'Thread is gone from the surface to this depth; good thread below.'},
   {id: 'hole.through', label: 'Through hole', step: 'hole', kind: 'bool', optional: false,
     help: 'yes = a nut can go on the far side. Enter switches.'},
-  {id: 'hole.depthAvailable', label: 'Depth available', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
+  {id: 'hole.depthAvailable', label: 'Depth available', empty: 'not given', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
     help: 'To the bottom of a blind hole, or the through-thickness.'},
-  {id: 'hole.wall', label: 'Wall / edge distance', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
+  {id: 'hole.wall', label: 'Wall/edge dist.', empty: 'not given', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
     help: 'From the hole centre line to the nearest edge; limits oversize repairs.'},
-  {id: 'hole.boltLengthMayChange', label: 'Longer bolt allowed', step: 'hole', kind: 'bool', optional: false,
+  {id: 'hole.boltLengthMayChange', label: 'Longer bolt OK', step: 'hole', kind: 'bool', optional: false,
     help: 'yes = a longer screw may be fitted. Enter switches.'},
 ];
 
@@ -146,19 +148,21 @@ export function setValue(v: FormValues, id: string, value: unknown): FormValues 
 interface Bounds {
   min?: number;
   max?: number;
+  /** The schema's default, applied by the core when the field is empty. */
+  default?: unknown;
 }
 
-type JsonProps = Record<string, {minimum?: number; maximum?: number; properties?: Record<string, {minimum?: number; maximum?: number}>}>;
+type JsonProps = Record<string, {minimum?: number; maximum?: number; default?: unknown; properties?: Record<string, {minimum?: number; maximum?: number}>}>;
 let boundsCache: Map<string, Bounds> | undefined;
 
-/** Accepted range of a field in working units, read from the zod schema. */
+/** Accepted range and default of a field in working units, read from the zod schema. */
 export function fieldBounds(id: string): Bounds {
   if (!boundsCache) {
     boundsCache = new Map();
     const add = (prefix: string, props: JsonProps) => {
       for (const [k, p] of Object.entries(props)) {
         const inner = p.properties?.min ?? p;
-        boundsCache!.set(prefix + k, {min: inner.minimum, max: inner.maximum});
+        boundsCache!.set(prefix + k, {min: inner.minimum, max: inner.maximum, default: p.default});
       }
     };
     add('', (z.toJSONSchema(JointInputSchema, {io: 'input'}) as {properties: JsonProps}).properties);

@@ -145,7 +145,7 @@ export function pickerItems(s: WorkbenchState, svc: WorkbenchServices): {label: 
   if (f.kind === 'thread') return svc.designations(s.picker.filter, 8).map(d => ({label: d, value: d}));
   const q = s.picker.filter.toLowerCase();
   return svc
-    .picks(f.pick!)
+    .picks(f.pick!, s.units)
     .filter(p => q === '' || p.id.toLowerCase().includes(q) || p.name.toLowerCase().includes(q))
     .map(p => ({label: `${p.id}  ${p.name}`, value: p.id, item: p}));
 }
@@ -285,8 +285,9 @@ function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
         svc.presets.duplicate(p.target!, text);
         return {...base, message: info(`Copied "${p.target}" to "${text}".`)};
       case 'import': {
-        const names = svc.presets.importFile(text);
-        return {...base, message: info(`Imported ${names.length} preset(s): ${names.join(', ')}`)};
+        const r = svc.presets.importFile(text);
+        const skipped = r.skipped.length ? `; skipped ${r.skipped.join('; ')}` : '';
+        return {...base, message: info(`Imported ${r.imported.length} preset(s)${r.imported.length ? `: ${r.imported.join(', ')}` : ''}${skipped}`)};
       }
       case 'export':
         try {

@@ -169,7 +169,7 @@ export interface FrameWriter extends EventEmitter {
   readonly isTTY: true;
   readonly columns: number;
   readonly rows: number;
-  write(chunk: string): boolean;
+  write(chunk: string, encodingOrCallback?: unknown, callback?: unknown): boolean;
   /** Bytes passed to the terminal so far (for the bench). */
   bytesWritten: number;
   /** Forget what is on screen: the next frame is painted in full. */
@@ -180,10 +180,16 @@ export interface FrameWriter extends EventEmitter {
 export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
   let screen: string[] | undefined;
   const emitter = new EventEmitter() as FrameWriter;
+  let done: (() => void) | undefined;
   const send = (s: string) => {
-    if (s === '') return true;
+    const cb = done;
+    done = undefined;
+    if (s === '') {
+      if (cb) out.write('', cb);
+      return true;
+    }
     emitter.bytesWritten += Buffer.byteLength(s);
-    return out.write(s);
+    return cb ? out.write(s, cb) : out.write(s);
   };
   Object.defineProperties(emitter, {
     isTTY: {value: true},
@@ -194,7 +200,8 @@ export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
   emitter.invalidate = () => {
     screen = undefined;
   };
-  emitter.write = (chunk: string) => {
+  emitter.write = (chunk: string, a?: unknown, b?: unknown) => {
+    done = (typeof a === 'function' ? a : typeof b === 'function' ? b : undefined) as (() => void) | undefined;
     const data = String(chunk);
     if (data === SYNC_BEGIN || data === SYNC_END) return send(data);
     const body = data.replace(ERASE_PREFIX, '');

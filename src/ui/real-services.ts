@@ -1,0 +1,131 @@
+/**
+ * The workbench's services wired to the real core, store and report modules.
+ * This is the only UI file that touches the file system (through the store and
+ * one writeFile for reports).
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import {checkJoint} from '../core/joint/index.js';
+import type {JointInput} from '../core/joint/input.js';
+import {planRepairs} from '../core/repair/index.js';
+import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
+import {listDesignations, nearestDesignations} from '../core/threads/index.js';
+import {formatQuantity, type UnitSystem} from '../core/units.js';
+import {formatCheckMarkdown, formatCheckText} from '../report/index.js';
+import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
+import type {Draft, PickItem, WorkbenchServices} from './services.js';
+import type {FormValues, PickSource} from './state/fields.js';
+
+export function presetValues(p: Preset): FormValues {
+  return {joint: structuredClone(p.joint ?? {thread: '', engagement: 0}), hole: structuredClone(p.repair ?? {})} as FormValues;
+}
+
+const sizeText = (r: {sizeMinMm?: number; sizeMaxMm?: number}) =>
+  r.sizeMinMm === undefined && r.sizeMaxMm === undefined ? '' : `d ${r.sizeMinMm !== undefined ? `> ${r.sizeMinMm} ` : ''}${r.sizeMaxMm !== undefined ? `<= ${r.sizeMaxMm} ` : ''}mm: `;
+
+function picks(source: PickSource, units: UnitSystem): PickItem[] {
+  const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
+  const group = <T extends {id: string; name: string; provenance: PickItem['provenance']}>(rows: T[], detail: (r: T) => string): PickItem[] => {
+    const ids = [...new Set(rows.map(r => r.id))];
+    return ids.map(id => {
+      const mine = rows.filter(r => r.id === id);
+      const first = mine[0]!;
+      return {id, name: first.name, detail: mine.map(detail).join('; '), provenance: first.provenance};
+    });
+  };
+  if (source === 'boltGrade') return group(listBoltGrades(), g => `${sizeText(g)}Rm ${s(g.rmMin)}, Rp0.2 ${s(g.rpMin)}`);
+  if (source === 'nutClass') return group(listNutClasses(), n => `${sizeText(n)}Rm ${s(n.rm)}`);
+  return group(listParentMaterials(), m => `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`);
+}
+
+/** Type-ahead: designations starting with the text first, then the nearest by spelling. */
+function designations(query: string, limit: number): string[] {
+  const q = query.trim().toLowerCase().replace(/\s+/g, ' ');
+  if (q === '') return [];
+  const all = listDesignations().filter(d => !/^tr|acme/i.test(d));
+  const starts = all.filter(d => d.toLowerCase().startsWith(q));
+  const out = starts.slice(0, limit);
+  if (out.length < limit) for (const d of nearestDesignations(query, limit)) if (!out.includes(d) && out.length < limit) out.push(d);
+  return out;
+}
+
+export function realServices(opts: {configDir: string; cwd: string; now: () => Date; store?: PresetStore}): WorkbenchServices & {store: PresetStore} {
+  const store = opts.store ?? openPresetStore(opts.configDir);
+  const loaded = new Map<string, {revision: number; notes: Preset['notes']}>();
+  const getPreset = (name: string): Preset => {
+    const p = store.get(name);
+    if (!p) throw new Error(`no preset named "${name}"`);
+    return p;
+  };
+  return {
+    store,
+    check: (input: JointInput) => checkJoint(input),
+    designations,
+    picks: (source, units) => picks(source, units),
+    repairs: (joint, hole) => planRepairs(joint, hole),
+    presets: {
+      list: () =>
+        store.list().map(p => ({
+          name: p.name,
+          readOnly: p.readOnly,
+          savedAt: p.source === 'saved' ? p.savedAt : undefined,
+          thread: p.thread,
+          kind: p.kind,
+          notes: [p.asset, p.location, p.workOrder].filter(Boolean).join(' '),
+        })),
+      load(name) {
+        const p = getPreset(name);
+        if (p.kind !== 'joint') throw new Error(`"${p.name}" is a power-screw preset: the workbench's power-screw mode is not in this build; use tapwright screw --preset "${p.name}"`);
+        const readOnly = store.list().find(s => s.name === p.name)?.readOnly ?? false;
+        loaded.set(p.name, {revision: p.revision, notes: p.notes});
+        return {name: p.name, readOnly, values: presetValues(p), notes: p.notes.text};
+      },
+      save(name, values, {overwrite}) {
+        const before = loaded.get(name);
+        const existing = overwrite ? store.get(name) : undefined;
+        const saved = store.save(
+          {name, kind: 'joint', joint: values.joint as JointInput, repair: values.hole, notes: existing?.notes ?? before?.notes ?? {}},
+          {overwrite, ...(before && overwrite ? {expectedRevision: before.revision} : {})},
+        );
+        loaded.set(saved.name, {revision: saved.revision, notes: saved.notes});
+      },
+      rename: (from, to) => store.rename(from, to),
+      duplicate: (from, to) => {
+        store.duplicate(from, to);
+      },
+      remove: name => store.remove(name),
+      importFile(file) {
+        const r = store.importFile(path.resolve(opts.cwd, file));
+        return {imported: [...r.added, ...r.replaced], skipped: r.skipped.map(x => `${x.name}: ${x.reason}`)};
+      },
+      exportFile: (file, name, overwrite) => store.exportTo(path.resolve(opts.cwd, file), name ? [name] : undefined, {force: overwrite}),
+    },
+    draft: {
+      load: () => {
+        const d = loadDraft<Draft>(opts.configDir);
+        return d && typeof d.savedAt === 'string' && d.values && typeof d.values === 'object' ? d : undefined;
+      },
+      save: d => saveDraft(opts.configDir, d),
+      clear: () => clearDraft(opts.configDir),
+    },
+    report(format, result, input, meta) {
+      if (format === 'text') return formatCheckText(result, input, {units: meta.units});
+      const notes = loaded.get(meta.presetName)?.notes;
+      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, ...(notes ? {notes} : {})});
+    },
+    writeFile(file, text, overwrite) {
+      const full = path.resolve(opts.cwd, file);
+      try {
+        fs.writeFileSync(full, text, {flag: overwrite ? 'w' : 'wx'});
+      } catch (e) {
+        const code = (e as NodeJS.ErrnoException).code;
+        if (code === 'EEXIST') throw new Error(`${full} exists`);
+        if (code === 'ENOENT') throw new Error(`folder ${path.dirname(full)} does not exist`);
+        if (code === 'EACCES' || code === 'EPERM') throw new Error(`no permission to write ${full}`);
+        throw e;
+      }
+    },
+    defaultPreset: DEFAULT_PRESET,
+    now: opts.now,
+  };
+}
