@@ -11,7 +11,7 @@ import type {JointInput} from '../joint/input.js';
 import type {CheckResult} from '../joint/result.js';
 import {listDesignations, parseThread} from '../threads/index.js';
 import {nutClass, nutDimensions} from '../materials/index.js';
-import type {ThreadFamily, ThreadSpec} from '../types.js';
+import type {ThreadFamily, ThreadGeometry, ThreadSpec} from '../types.js';
 import demoTable from '../../../presets/solid-inserts-demo.json' with {type: 'json'};
 import type {RepairDeps, SeriesThread} from './context.js';
 import {RepairInputSchema, type RepairInput, type RepairInputDraft} from './input.js';
@@ -70,10 +70,23 @@ function nutClassFor(boltGrade: string, spec: ThreadSpec): string | undefined {
   return id !== undefined && nutClass(id, spec.nominal) ? id : undefined;
 }
 
+const GEOMETRY_CACHE = new Map<string, ThreadGeometry>();
+
+/** Geometry of a designation, remembered (the receiving threads repeat on every keystroke). */
+function geometryOf(designation: string): ThreadGeometry {
+  let g = GEOMETRY_CACHE.get(designation);
+  if (!g) {
+    g = resolveGeometry(designation);
+    if (GEOMETRY_CACHE.size > 500) GEOMETRY_CACHE.clear();
+    GEOMETRY_CACHE.set(designation, g);
+  }
+  return g;
+}
+
 /** checkJoint with the materials resolved for the input's own thread and the geometry of `designation`. */
 function checkWithThread(input: JointInput, designation: string): CheckResult {
   const resolved = resolveJoint(input);
-  const geometry = resolveGeometry(designation);
+  const geometry = geometryOf(designation);
   return checkResolved({...input, thread: designation}, {...resolved, geometry});
 }
 
