@@ -10,7 +10,7 @@ import {JointInputError} from './errors.js';
 import {resolveJoint, type ResolvedJoint} from './resolve.js';
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
-import {chainBeta, hexNutArea, tappedBodyArea, threadShares} from './load-share.js';
+import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags} from './flags.js';
 
@@ -79,7 +79,12 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     internalModulus: r.internal.elasticModulus,
   });
   const loadShare = threadShares(engagedThreads, beta);
-  const firstShare = engagedThreads >= LONG_ENGAGEMENT_THREADS ? FIRST_THREAD_SHARE_LONG : (loadShare[0] ?? 1);
+  // Fewer than 6 threads: the chain's rise over its own long-engagement share, applied to the book's 0.38
+  // (for the calibration joint, a steel nut, this is the chain share itself). Never below 0.38, never above 1.
+  const firstShare =
+    engagedThreads >= LONG_ENGAGEMENT_THREADS
+      ? FIRST_THREAD_SHARE_LONG
+      : Math.min(1, Math.max(FIRST_THREAD_SHARE_LONG, (FIRST_THREAD_SHARE_LONG * (loadShare[0] ?? 1)) / longEngagementFirstShare(beta)));
 
   // Stresses at the largest bolt load: max preload plus the full service load (conservative).
   const boltLoad = t.preload.max + input.serviceLoad;

@@ -59,6 +59,12 @@ export function betaForFirstShare(s: number): number {
 
 const KAPPA = betaForFirstShare(CALIBRATION_FIRST_SHARE) / rawBeta(REF);
 
+/** First-thread share of a long engagement, 1 - 1/r with r = ((2 + beta) + sqrt(beta^2 + 4 beta))/2 (closed form of the recurrence). */
+export function longEngagementFirstShare(beta: number): number {
+  const r = (2 + beta + Math.sqrt(beta * beta + 4 * beta)) / 2;
+  return 1 - 1 / r;
+}
+
 /** The chain parameter beta = kt (1/kb + 1/kn) for a joint (dimensionless). */
 export function chainBeta(c: ChainInput): number {
   return KAPPA * rawBeta(c);

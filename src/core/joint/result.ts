@@ -71,7 +71,11 @@ export interface CheckResult {
   };
   /** Fraction of the load carried by each engaged thread, first (loaded face) first. */
   loadShare: number[];
-  /** Share used for the first-thread stresses (0.38 from 6 threads, else the spring-chain share) and the chain parameter. */
+  /**
+   * Share used for the first-thread stresses: 0.38 from 6 engaged threads (Shigley 9th ed. p. 419); below 6,
+   * 0.38 x (chain first share at this count / the chain's long-engagement first share), which for the
+   * calibration joint (steel bolt, steel nut) is the chain share itself. Also the chain parameter beta.
+   */
   firstThreadShare: number;
   loadShareBeta: number;
   /** Largest axial load on the bolt used for the thread and shank stresses: max preload + service load, N. */

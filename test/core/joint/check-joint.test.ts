@@ -42,10 +42,24 @@ describe('checkJoint', () => {
     const long = run({thread: 'M10', parent: 'S355', engagement: 15});
     expect(long.firstThreadShare).toBe(0.38);
     const short = run({thread: 'M10', parent: 'S355', engagement: 6});
-    expect(short.firstThreadShare).toBe(short.loadShare[0]);
+    expect(short.firstThreadShare).toBeGreaterThan(0.38);
+    // Steel bolt in a steel nut (the calibration joint): the chain share itself, within 0.01.
+    const nut = run({...M10_NUT, nutHeight: 6});
+    expect(Math.abs(nut.firstThreadShare - nut.loadShare[0]!)).toBeLessThan(0.01);
     expect(short.flags.map(f => f.code)).toContain('short-engagement');
     const sum = long.loadShare.reduce((a, b) => a + b, 0);
     expect(sum).toBeCloseTo(1, 12);
+  });
+
+  it('property: the first-thread share never falls below 0.38 and does not rise as engagement grows', () => {
+    fc.assert(
+      fc.property(fc.double({min: 0.6, max: 30, noNaN: true}), fc.double({min: 0.1, max: 10, noNaN: true}), fc.constantFrom('S355', '6061-T6', 'EN-GJL-250'), (le, extra, parent) => {
+        const a = run({thread: 'M10', parent, engagement: le});
+        const b = run({thread: 'M10', parent, engagement: le + extra});
+        return a.firstThreadShare >= 0.38 && a.firstThreadShare <= 1 && b.firstThreadShare <= a.firstThreadShare + 1e-12;
+      }),
+      {numRuns: 100},
+    );
   });
 
   it('property: stripping forces grow with engagement (FED-STD-H28/2B areas are proportional to Le)', () => {

@@ -1,6 +1,6 @@
 import {describe, expect, it} from 'vitest';
 import fc from 'fast-check';
-import {betaForFirstShare, chainBeta, hexNutArea, tappedBodyArea, threadShares} from '../../../src/core/joint/load-share.js';
+import {betaForFirstShare, chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from '../../../src/core/joint/load-share.js';
 
 // Steel M10x1.5 bolt (As 58.0 mm², ISO 898-1) in a steel hexagon nut, s = 16 mm (ISO 4032);
 // E = 205 GPa for both (typical value for steel, from memory).
@@ -42,6 +42,8 @@ describe('per-thread load share, elastic spring chain (Sopwith 1948 / Yamamoto 1
     const beta = betaForFirstShare(0.38);
     const r = (2 + beta + Math.sqrt(beta * beta + 4 * beta)) / 2;
     expect(1 - 1 / r).toBeCloseTo(0.38, 12);
+    expect(longEngagementFirstShare(beta)).toBeCloseTo(0.38, 12);
+    expect(threadShares(200, beta)[0]!).toBeCloseTo(0.38, 9);
   });
 
   it('a finer pitch shares the load more evenly; fewer threads load the first thread more', () => {
