@@ -115,7 +115,7 @@ function joinNegativeValues(args: string[]): string[] {
 
 const REPAIR_FIELD_OPTION: Record<string, string> = {
   strippedDepth: '--stripped-depth', depthAvailable: '--depth-available', wall: '--wall', margin: '--margin',
-  nutClass: '--nut', nutHeight: '--nut-height', nutFlats: '--nut-flats', solidInserts: '--solid-table',
+  nutClass: '--nut', nutHeight: '--nut-height', nutFlats: '--nut-flats',
 };
 
 export const command: Command = {
@@ -161,7 +161,7 @@ export const command: Command = {
     if (nut !== undefined) draft.nutClass = nut;
     if (marginValue !== undefined) draft.margin = marginValue;
     const tableFile = str(values, 'solid-table');
-    if (tableFile !== undefined) draft.solidInserts = await loadTable(tableFile, io);
+    const table = tableFile === undefined ? undefined : await loadTable(tableFile, io);
     const repair = RepairInputSchema.safeParse(draft);
     if (!repair.success) {
       const issue = repair.error.issues[0];
@@ -174,7 +174,7 @@ export const command: Command = {
 
     let plan;
     try {
-      plan = planRepairs(joint, repair.data);
+      plan = planRepairs(joint, repair.data, table);
     } catch (e) {
       if (e instanceof JointInputError) {
         const option = FIELD_OPTION[e.field] ?? e.field;

@@ -107,10 +107,11 @@ export function defaultDeps(solidTable: SolidInsertTable = DEMO_SOLID_INSERTS): 
 
 /**
  * Ranked repair options for a joint and the state of its hole (mm, N, N·m).
- * `repair` may be a draft (defaults applied). Throws the mechanics core's
- * JointInputError when the joint itself cannot be computed.
+ * `repair` may be a draft (defaults applied); `solidTable` is the user's solid
+ * key-locked insert table (default: the shipped demo table). Throws the
+ * mechanics core's JointInputError when the joint itself cannot be computed.
  */
-export function planRepairs(joint: JointInput, repair: RepairInput | RepairInputDraft = {}): RepairPlan {
+export function planRepairs(joint: JointInput, repair: RepairInput | RepairInputDraft = {}, solidTable: SolidInsertTable = DEMO_SOLID_INSERTS): RepairPlan {
   const r = RepairInputSchema.parse(repair);
-  return planRepairsWith(defaultDeps(r.solidInserts ?? DEMO_SOLID_INSERTS), joint, r);
+  return planRepairsWith(defaultDeps(solidTable), joint, r);
 }

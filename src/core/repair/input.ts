@@ -3,11 +3,13 @@
  * Owned by the repair planner; the preset store embeds this schema, so field
  * names are kept stable (adding is fine).
  *
+ * The solid key-locked insert table is not part of this input (presets stay
+ * small): pass the user's table to planRepairs, or the demo table is used.
+ *
  * Depths are measured from the surface of the part that carries the thread (the
  * face the clamped part sits on), along the hole axis.
  */
 import {z} from 'zod';
-import {SolidInsertTableSchema} from './solid-table.js';
 
 export const HOLE_STATES = ['intact', 'stripped'] as const;
 
@@ -43,8 +45,6 @@ export const RepairInputSchema = z
     nutHeight: z.number().min(0.5).max(500).optional(),
     /** Nut width across flats for the through-bolt option, mm. */
     nutFlats: z.number().min(1).max(1000).optional(),
-    /** The user's own solid key-locked insert table; absent: the shipped demo table. */
-    solidInserts: SolidInsertTableSchema.optional(),
   })
   .superRefine((r, ctx) => {
     if (r.holeState === 'intact' && r.strippedDepth !== undefined && r.strippedDepth > 0) {
