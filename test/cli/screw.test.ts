@@ -1,6 +1,9 @@
 import {describe, expect, it} from 'vitest';
 import {runCli} from '../../src/cli/main.js';
 import {memoryIo} from '../../src/cli/io.js';
+import {mkdtempSync, rmSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import path from 'node:path';
 
 async function run(args: string[]) {
   const io = memoryIo();
@@ -137,4 +140,37 @@ describe('tapwright screw exit codes and bad input', () => {
       expect(out).toBe('');
     });
   }
+});
+
+describe('tapwright screw --preset (shipped demo preset)', () => {
+  // No engineering source: the preset is invented demo data; this checks the plumbing.
+  it('runs the shipped screw preset; options given override it; a joint preset is refused', async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'tw-screw-'));
+    try {
+      const env = {TAPWRIGHT_CONFIG_DIR: dir};
+      const go = async (args: string[]) => {
+        const io = memoryIo({env});
+        const code = await runCli(['screw', ...args], io);
+        return {code, out: io.stdout(), err: io.stderr()};
+      };
+      const a = await go(['--preset', 'demo-lifting-table-screw', '--json']);
+      expect(a.err).toBe('');
+      const j = JSON.parse(a.out);
+      expect(j.preset).toBe('demo-lifting-table-screw');
+      expect(j.thread.designation).toMatch(/^Tr24x5/);
+      const b = JSON.parse((await go(['--preset', 'demo-lifting-table-screw', '--load', '12kN', '--json'])).out);
+      expect(b.input.load).toBe(12000);
+      expect(b.input.nutLength).toBe(j.input.nutLength);
+      const text = await go(['--preset', 'demo-lifting-table-screw']);
+      expect(text.out).toMatch(/Preset\s+demo-lifting-table-screw/);
+      const joint = await go(['--preset', 'demo-gearbox-cover']);
+      expect(joint.code).toBe(2);
+      expect(joint.err).toMatch(/--preset.*needs a screw preset/);
+      const none = await go(['--preset', 'no-such-preset']);
+      expect(none.code).toBe(2);
+      expect(none.err).toMatch(/--preset/);
+    } finally {
+      rmSync(dir, {recursive: true, force: true});
+    }
+  });
 });

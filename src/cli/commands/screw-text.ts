@@ -31,11 +31,12 @@ function field(label: string, text: string): string[] {
   return wrap(text, label.padEnd(LABEL), ' '.repeat(LABEL));
 }
 
-export function screwText(r: ScrewResult, units: UnitSystem): string {
+export function screwText(r: ScrewResult, units: UnitSystem, preset?: string): string {
   const q = (v: number, d: Dimension) => formatQuantity(v, d, units);
   const deg = (v: number) => `${formatNumber(v, 3)} deg`;
   const g = r.geometry;
   const out: string[] = ['tapwright screw - power screw check', ''];
+  if (preset !== undefined) out.push(...field('Preset', preset));
   out.push(...field('Thread', `${r.thread.designation} (${r.thread.family}, ${r.geometry.starts} start${g.starts > 1 ? 's' : ''}); ${g.source}`));
   out.push(...field('Geometry', `d ${q(g.major, 'length')}, P ${q(g.pitch, 'length')}, dm ${q(g.meanDiameter, 'length')}, root ${q(g.rootDiameter, 'length')}, nut minor ${q(g.nutMinorDiameter, 'length')}, flank half-angle ${deg(g.flankAngle)}`));
   out.push(...field('Lead', `${q(r.lead, 'length')}, lead angle ${deg(r.leadAngle)}`));

@@ -37,6 +37,8 @@ self-locking, stresses, nut pressure and stripping, buckling
 
 Usage:
   tapwright screw --thread T --load F --nut-length L [options]
+  tapwright screw --preset NAME [options]   a saved or shipped screw preset;
+                                            options given override it
   tapwright screw --picks          friction picks with their source
 
 Options:
@@ -75,7 +77,7 @@ const OPTIONS = {
   'nut-length': {type: 'string'}, 'nut-material': {type: 'string'}, 'nut-wear': {type: 'string'},
   'screw-material': {type: 'string'}, 'screw-yield': {type: 'string'}, length: {type: 'string'}, ends: {type: 'string'},
   speed: {type: 'string'}, 'allowable-pressure': {type: 'string'}, units: {type: 'string'}, format: {type: 'string'},
-  json: {type: 'boolean'}, picks: {type: 'boolean'},
+  json: {type: 'boolean'}, picks: {type: 'boolean'}, preset: {type: 'string'},
 } as const;
 
 function oneOf<T extends string>(option: string, text: string | undefined, allowed: readonly T[], fallback: T): T {
@@ -105,14 +107,26 @@ function collarFriction(text: string): number {
   return quantity('--mu-collar', text, 'ratio', {min: 0, max: 0.6, rangeText: '0 to 0.6'});
 }
 
-function required(values: Record<string, unknown>, name: string, what: string): string {
+function required(values: Record<string, unknown>, name: string, what: string, base: Record<string, unknown> | undefined): string | undefined {
   const v = str(values as never, name);
-  if (v === undefined) throw new UsageError(`--${name} is required (${what}); see tapwright screw --help`, `--${name}`);
+  if (v === undefined && base === undefined) throw new UsageError(`--${name} is required (${what}); see tapwright screw --help`, `--${name}`);
   return v;
 }
 
-/** Build the ScrewInput from the options; every rejection names its option. */
-export function screwInputFromArgs(args: string[]): {input: ScrewInput; units: UnitSystem; json: boolean; picks: boolean} {
+export interface ScrewArgs {
+  input: ScrewInput;
+  units: UnitSystem;
+  json: boolean;
+  picks: boolean;
+  /** Name of the preset the inputs started from, if any. */
+  preset?: string;
+}
+
+/**
+ * Build the ScrewInput from the options, on top of a preset's screw inputs when
+ * `base` is given; every rejection names its option.
+ */
+export function screwInputFromArgs(args: string[], base?: Record<string, unknown>): ScrewArgs {
   const {values} = parseOptions(args, OPTIONS, false);
   const units = oneOf('--units', str(values, 'units'), ['si', 'us'] as const, 'si');
   const format = oneOf('--format', str(values, 'format'), ['text', 'json'] as const, 'text');
@@ -134,24 +148,29 @@ export function screwInputFromArgs(args: string[]): {input: ScrewInput; units: U
   const yieldText = opt('screw-yield');
   const wearText = opt('nut-wear');
   const draft = {
-    thread: required(values, 'thread', THREAD_EXAMPLES),
+    thread: required(values, 'thread', THREAD_EXAMPLES, base),
     starts,
-    load: quantity('--load', required(values, 'load', 'axial load, e.g. 6.4kN'), 'force', {min: 0, max: 1e8, rangeText: '0 to 100 MN', defaultUnit: 'n'}),
-    loadDirection: oneOf('--direction', opt('direction'), ['compression', 'tension'] as const, 'compression'),
+    load: opt('load') === undefined ? (required(values, 'load', 'axial load, e.g. 6.4kN', base), undefined)
+      : quantity('--load', opt('load') ?? '', 'force', {min: 0, max: 1e8, rangeText: '0 to 100 MN', defaultUnit: 'n'}),
+    loadDirection: opt('direction') === undefined ? undefined : oneOf('--direction', opt('direction'), ['compression', 'tension'] as const, 'compression'),
     muThread: opt('mu-thread') === undefined ? undefined : threadFriction(opt('mu-thread') ?? ''),
     muCollar: opt('mu-collar') === undefined ? undefined : collarFriction(opt('mu-collar') ?? ''),
     collarDiameter: len('collar-diameter', 0, 2000, '0 to 2000 mm'),
-    nutLength: quantity('--nut-length', required(values, 'nut-length', 'engaged nut length, e.g. 40mm'), 'length', {min: 0.5, max: 2000, rangeText: '0.5 to 2000 mm', defaultUnit: 'mm'}),
+    nutLength: opt('nut-length') === undefined ? (required(values, 'nut-length', 'engaged nut length, e.g. 40mm', base), undefined)
+      : quantity('--nut-length', opt('nut-length') ?? '', 'length', {min: 0.5, max: 2000, rangeText: '0.5 to 2000 mm', defaultUnit: 'mm'}),
     nutMaterial: opt('nut-material'),
     nutWear: wearText === undefined ? undefined : quantity('--nut-wear', wearText, 'length', {min: 0, max: 50, rangeText: '0 to 50 mm', defaultUnit: 'mm'}),
     screwMaterial: opt('screw-material'),
     screwYield: yieldText === undefined ? undefined : quantity('--screw-yield', yieldText, 'stress', {min: 50, max: 2500, rangeText: '50 to 2500 MPa', defaultUnit: 'mpa'}),
     length: len('length', 0, 20000, '0 to 20 000 mm'),
-    ends: oneOf('--ends', opt('ends'), END_CONDITION_IDS, 'pinned-pinned'),
+    ends: opt('ends') === undefined ? undefined : oneOf('--ends', opt('ends'), END_CONDITION_IDS, 'pinned-pinned'),
     speed: speedText === undefined ? undefined : quantity('--speed', speedText, 'speed', {min: 0, max: 10, rangeText: '0 to 10 m/s', defaultUnit: 'm/s'}),
     allowablePressure: allowText === undefined ? undefined : quantity('--allowable-pressure', allowText, 'stress', {min: 0.1, max: 500, rangeText: '0.1 to 500 MPa', defaultUnit: 'mpa'}),
   };
-  const parsed = ScrewInputSchema.safeParse(Object.fromEntries(Object.entries(draft).filter(([, v]) => v !== undefined)));
+  const given = Object.fromEntries(Object.entries(draft).filter(([, v]) => v !== undefined));
+  // A multi-start thread typed over a preset brings its own starts.
+  const merged = base && given.thread !== undefined && given.starts === undefined ? {...base, starts: undefined, ...given} : {...base, ...given};
+  const parsed = ScrewInputSchema.safeParse(merged);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
     const field = String(issue?.path[0] ?? '');
@@ -174,7 +193,15 @@ export const command: Command = {
   summary: 'power screws (lead screws and nuts): torque, efficiency, stresses, buckling',
   help: HELP,
   async run(args: string[], io: CliIo) {
-    const {input, units, json, picks} = screwInputFromArgs(args);
+    const presetName = str(parseOptions(args, OPTIONS, false).values, 'preset');
+    let base: Record<string, unknown> | undefined;
+    if (presetName !== undefined) {
+      const {resolvePreset} = await import('../../store/index.js');
+      const p = resolvePreset(presetName, io.env, 'screw');
+      if (!p.screw) throw new UsageError(`--preset "${presetName}" has no power-screw inputs`, '--preset');
+      base = {...p.screw};
+    }
+    const {input, units, json, picks} = screwInputFromArgs(args, base);
     if (picks) {
       io.out(json ? `${JSON.stringify({threadFriction: THREAD_FRICTION, threadFrictionSource: THREAD_FRICTION_SOURCE, collarFriction: COLLAR_FRICTION, collarFrictionSource: COLLAR_FRICTION_SOURCE}, null, 2)}\n` : `${picksText()}\n`);
       return EXIT.ok;
@@ -186,8 +213,8 @@ export const command: Command = {
       if (e instanceof ScrewInputError) throw new UsageError(`${OPTION_FIELD[e.field] ?? e.field}: ${e.message}`, OPTION_FIELD[e.field]);
       throw e;
     }
-    if (json) io.out(`${JSON.stringify({...result, input: {...input, ...result.input}, cautions: CAUTION_LINES}, null, 2)}\n`);
-    else io.out(screwText(result, units));
+    if (json) io.out(`${JSON.stringify({...result, input: {...input, ...result.input}, preset: presetName ?? null, cautions: CAUTION_LINES}, null, 2)}\n`);
+    else io.out(screwText(result, units, presetName));
     return result.flags.some(f => f.level === 'fail') ? EXIT.fail : EXIT.ok;
   },
 };
