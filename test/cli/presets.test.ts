@@ -62,6 +62,30 @@ describe('tapwright presets', () => {
     expect((await run('list', '--search', 'nothing-like-it')).out).not.toContain('pump-7');
   });
 
+  it('save takes every joint option of check, and check --preset computes the same joint as the options', async () => {
+    const {command: check} = await import('../../src/cli/commands/check.js');
+    const {JOINT_OPTIONS} = await import('../../src/cli/joint-options.js');
+    const notJoint = new Set(['--format', '--json', '--ascii', '--preset', '--help']);
+    const checkOptions = [...new Set(check.help.match(/--[a-z][a-z-]+/g))].filter(o => !notJoint.has(o));
+    expect(checkOptions.length).toBeGreaterThanOrEqual(21);
+    for (const o of checkOptions) expect(Object.keys(JOINT_OPTIONS), o).toContain(o.slice(2));
+
+    const {run, dir} = setup();
+    const opts = ['--thread', 'M12', '--bolt', '10.9', '--parent', 'C45', '--engage', '0.7', '--units', 'us', '--mu-thread', '0.1..0.14', '--scatter', '1.4', '--service-load', '1000'];
+    expect((await run('save', 'same', ...opts)).code).toBe(0);
+    expect(openPresetStore(dir).get('same')?.joint?.engagement).toBeCloseTo(17.78, 6); // 0.7 in, read in US units
+    const viaCheck = async (...args: string[]) => {
+      const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: dir}, cwd: dir});
+      const code = await runCli(['check', ...args, '--json'], io);
+      return {code, out: io.stdout(), err: io.stderr()};
+    };
+    const a = await viaCheck(...opts);
+    const b = await viaCheck('--preset', 'same');
+    expect(a.err).toBe('');
+    expect(b.err).toBe('');
+    expect(JSON.parse(b.out)).toEqual(JSON.parse(a.out));
+  });
+
   it('saves with units in the values and a nut instead of a tapped hole', async () => {
     const {run, dir} = setup();
     const r = await run('save', 'inch-nut', '--thread', '3/8-16 UNC', '--bolt', 'SAE-5', '--nut', 'SAE-5', '--nut-height', '21/64in', '--nut-flats', '9/16in', '--engage', '0.5in', '--preload', '2kN');
@@ -84,7 +108,7 @@ describe('tapwright presets', () => {
   it('refuses bad input with exit 2 and a message naming the option and the range, saving nothing', async () => {
     const {run, dir} = setup();
     const cases: Array<[string[], RegExp]> = [
-      [['save', 'x', '--thread', 'M10', '--parent', 'S355', '--engage', '0.1'], /--engage .*0\.5 to 1000 mm/],
+      [['save', 'x', '--thread', 'M10', '--parent', 'S355', '--engage', '0.1'], /--engage .*accepted: 0\.5 mm to 1000 mm/],
       [['save', 'x', '--thread', 'M10', '--parent', 'S355', '--engage', '10', '--mu-thread', '0.9'], /--mu-thread .*0\.02 to 0\.6/],
       [['save', 'x', '--thread', 'M10', '--parent', 'S355', '--engage', '10', '--torque', '40', '--preload', '5kN'], /--torque.*--preload/],
       [['save', 'x', '--thread', 'M10', '--parent', 'S355', '--engage', '12furlong'], /--engage .*unit/],

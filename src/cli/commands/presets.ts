@@ -6,7 +6,7 @@ import path from 'node:path';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {parseOptions, str, type OptionSpec, type ParsedOptions} from '../args.js';
-import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, OPTION_OF_FIELD, jointFromOptions} from '../joint-options.js';
+import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
 import {configDir} from '../../store/paths.js';
 import {openPresetStore, type Preset, type PresetStore, type PresetSummary} from '../../store/presets.js';
 import {MAX_IMPORT_TEXT} from '../../store/guard.js';
@@ -131,17 +131,14 @@ async function save(args: string[], io: CliIo): Promise<number> {
     if (jointGiven) throw new UsageError(`--from "${base.name}" is a power-screw preset; joint options do not apply to it`, '--from');
     preset = {...base, name, notes: notesFrom(p.values, base.notes)};
   } else {
-    const joint = jointFromOptions(p.values, base?.joint ?? {});
     try {
+      const joint = jointFromOptions(p.values, base?.joint);
       resolveJoint(joint); // unknown thread, grade or material: refused now, not when the preset is used
+      preset = {...(base ?? {kind: 'joint' as const, savedAt: '', revision: 1}), name, kind: 'joint', joint, notes: notesFrom(p.values, base?.notes)};
     } catch (e) {
-      if (e instanceof JointInputError) {
-        const option = OPTION_OF_FIELD[e.field] ?? e.field;
-        throw new UsageError(`${option}: ${e.message}`, option);
-      }
+      if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.message}`, optionFor(e.field));
       throw e;
     }
-    preset = {...(base ?? {kind: 'joint' as const, savedAt: '', revision: 1}), name, kind: 'joint', joint, notes: notesFrom(p.values, base?.notes)};
   }
   const out = store.save({...preset, savedAt: undefined, revision: undefined}, {overwrite: p.values.overwrite === true});
   if (p.values.json) json(io, out);
