@@ -8,6 +8,7 @@ import {ACME_CLASSES, ACME_SERIES, TRAPEZOIDAL_SERIES, TR_CLASSES_EXTERNAL, TR_C
 import {trimNumber} from './designations.js';
 import {IN, SIZE_RE, fail, inchSize, num} from './parse-common.js';
 
+/** ISO 2904 trapezoidal "Tr<d>x<P>" or "Tr<d>x<lead>(P<P>)", mm; classes per ISO 2903, default 7H/7e. */
 export function parseTrapezoidal(raw: string): Parsed<ThreadSpec> {
   const c = raw.replace(/\s+/g, '');
   const m = /^tr(\d+(?:[.,]\d+)?)x(\d+(?:[.,]\d+)?)(?:\(p(\d+(?:[.,]\d+)?)\))?(?:-(.*))?$/i.exec(c);
@@ -70,7 +71,8 @@ export function parseTrapezoidal(raw: string): Parsed<ThreadSpec> {
 const ACME_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d+(?:\.\d+)?)\s*-?\s*acme\s*(?:-\s*(.*))?$`, 'i');
 const ACME_PL_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d*\.\d+)\s*p\s*-\s*(\d*\.\d+)\s*l\s*-?\s*acme\s*(?:-\s*(.*))?$`, 'i');
 
-export function parseAcme(raw: string): Parsed<ThreadSpec> {
+export /** ASME B1.5 Acme "<size>-<tpi> ACME-<class>" or "<size>-<P>P-<L>L-ACME-<class>" (inches in, mm out); default 2G. */
+function parseAcme(raw: string): Parsed<ThreadSpec> {
   let sizeText: string;
   let pitchIn: number;
   let leadIn: number;
@@ -130,7 +132,8 @@ export function parseAcme(raw: string): Parsed<ThreadSpec> {
   };
 }
 
-export function parseSquare(raw: string): Parsed<ThreadSpec> {
+export /** Square thread "square <d>x<P>" or "square <d>x<lead>(P<P>)", mm; no standard series, no class. */
+function parseSquare(raw: string): Parsed<ThreadSpec> {
   const m = /^(?:square|sq)\s*(\d+(?:[.,]\d+)?)\s*x\s*(\d+(?:[.,]\d+)?)\s*(?:\(\s*p\s*(\d+(?:[.,]\d+)?)\s*\))?$/i.exec(raw);
   if (!m) return fail(`square-thread designation "${raw}" is not understood; write square <diameter>x<pitch> in mm, e.g. square 32x4, or square 32x8(P4) for 2 starts`, raw, []);
   const d = num(m[1] ?? '');

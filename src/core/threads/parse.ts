@@ -19,7 +19,11 @@ export const ACCEPTED_FORMS =
 const METRIC_D = {min: 1, max: 355};
 const METRIC_P = {min: 0.2, max: 8};
 
-/** Parse a typed thread designation. */
+/**
+ * Parse a typed thread designation into a ThreadSpec (lengths in mm). Forms and
+ * defaults: see ACCEPTED_FORMS; a failure names the field at fault, the accepted
+ * values, and the nearest standard designations.
+ */
 export function parseThread(text: string): Parsed<ThreadSpec> {
   const raw = (text ?? '').replace(/×/g, 'x').replace(/\s+/g, ' ').trim();
   if (raw === '') return {ok: false, error: `designation is empty; accepted forms: ${ACCEPTED_FORMS}`};

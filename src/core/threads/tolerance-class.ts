@@ -81,6 +81,7 @@ export interface UnifiedClass {
 
 export const UNIFIED_CLASS_HELP = '1A, 2A, 3A (external) or 1B, 2B, 3B (internal), e.g. 2A, 2B, 2A/2B';
 
+/** Parse one unified class token (ASME B1.1 classes 1A-3A, 1B-3B); case-insensitive. */
 export function parseUnifiedClass(token: string): Parsed<UnifiedClass> {
   const m = /^([123])\s*([ab])$/i.exec(token.trim());
   if (!m) return {ok: false, error: `class "${token}" is not a unified thread class; accepted: ${UNIFIED_CLASS_HELP}`};

@@ -48,7 +48,7 @@ export function minorTolerance(D: number, P: number, grade: 1 | 2 | 3): number {
   return Math.min(Math.max(t, 0.12 * P), 0.394 * P);
 }
 
-/** Limits of size in inches. */
+/** Limits of size in inches, from the ASME B1.1 formulas and rounding stated at the top of this file. */
 export function unifiedLimitsInches(D: number, tpi: number, ext: UnifiedClass, int: UnifiedClass): UnifiedLimitsInches {
   const P = 1 / tpi;
   const t2a = td2Class2A(D, P);
