@@ -121,7 +121,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     ].filter(s => s !== ''),
     notes: [
       ...g.notes,
-      `nut stripping: basic profile, threads sheared on the cylinders d and D1 over the nut length, every turn loaded; no tolerance allowance`,
+      `nut stripping: basic profile, threads sheared on the cylinders d and D1 over the nut length, every turn loaded; no tolerance allowance (a few per cent high)`,
       `torsion in the stresses uses the full raising torque with collar (conservative)`,
       ...(column ? [] : [compression ? 'no column check: give --length' : 'screw in tension: no column check']),
     ],

@@ -12,7 +12,9 @@
  *   diameter D1, over the engaged length Le; the thread thickness on those cylinders is
  *   w P with w = 0.5 + 0.5 tan(alpha) for the basic profile (0.5 for a square thread):
  *     A_nut = pi d Le (w - wear / P),   A_screw = pi D1 Le w,   F_strip = tau_u A.
- *   Basic dimensions, no tolerance allowance: an upper estimate for a new nut; `wear`
+ *   Basic dimensions, no tolerance allowance: an upper estimate for a new nut (for Acme
+ *   the basic screw-thread area is 4 to 6 % above the class 3G shear areas of Machinery's
+ *   Handbook 27th ed. Table 3); `wear`
  *   (loss of nut-thread thickness, mm, e.g. measured as extra axial backlash) lowers it.
  */
 

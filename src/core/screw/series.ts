@@ -48,20 +48,22 @@ export interface AcmeRow {
   minorDiameter: number;
   /** Lead angle at the basic pitch diameter, degrees and minutes as tabulated. */
   leadAngle: {deg: number; min: number};
+  /** Class 3G shear area per inch of engagement, in²/in, as tabulated. */
+  shearArea3G: number;
 }
 
 export const ACME_SOURCE = "Machinery's Handbook, 27th ed., Table 3 (ASME/ANSI B1.5-1988 general-purpose Acme)";
 
 export const ACME_ROWS: readonly AcmeRow[] = [
-  {size: '1/4', major: 0.25, tpi: 16, pitchDiameter: 0.2188, minorDiameter: 0.1875, leadAngle: {deg: 5, min: 12}},
-  {size: '5/16', major: 0.3125, tpi: 14, pitchDiameter: 0.2768, minorDiameter: 0.2411, leadAngle: {deg: 4, min: 42}},
-  {size: '3/8', major: 0.375, tpi: 12, pitchDiameter: 0.3333, minorDiameter: 0.2917, leadAngle: {deg: 4, min: 33}},
-  {size: '7/16', major: 0.4375, tpi: 12, pitchDiameter: 0.3958, minorDiameter: 0.3542, leadAngle: {deg: 3, min: 50}},
-  {size: '1/2', major: 0.5, tpi: 10, pitchDiameter: 0.45, minorDiameter: 0.4, leadAngle: {deg: 4, min: 3}},
-  {size: '5/8', major: 0.625, tpi: 8, pitchDiameter: 0.5625, minorDiameter: 0.5, leadAngle: {deg: 4, min: 3}},
-  {size: '3/4', major: 0.75, tpi: 6, pitchDiameter: 0.6667, minorDiameter: 0.5833, leadAngle: {deg: 4, min: 33}},
-  {size: '7/8', major: 0.875, tpi: 6, pitchDiameter: 0.7917, minorDiameter: 0.7083, leadAngle: {deg: 3, min: 50}},
-  {size: '1', major: 1, tpi: 5, pitchDiameter: 0.9, minorDiameter: 0.8, leadAngle: {deg: 4, min: 3}},
+  {size: '1/4', major: 0.25, tpi: 16, pitchDiameter: 0.2188, minorDiameter: 0.1875, leadAngle: {deg: 5, min: 12}, shearArea3G: 0.35},
+  {size: '5/16', major: 0.3125, tpi: 14, pitchDiameter: 0.2768, minorDiameter: 0.2411, leadAngle: {deg: 4, min: 42}, shearArea3G: 0.451},
+  {size: '3/8', major: 0.375, tpi: 12, pitchDiameter: 0.3333, minorDiameter: 0.2917, leadAngle: {deg: 4, min: 33}, shearArea3G: 0.545},
+  {size: '7/16', major: 0.4375, tpi: 12, pitchDiameter: 0.3958, minorDiameter: 0.3542, leadAngle: {deg: 3, min: 50}, shearArea3G: 0.66},
+  {size: '1/2', major: 0.5, tpi: 10, pitchDiameter: 0.45, minorDiameter: 0.4, leadAngle: {deg: 4, min: 3}, shearArea3G: 0.749},
+  {size: '5/8', major: 0.625, tpi: 8, pitchDiameter: 0.5625, minorDiameter: 0.5, leadAngle: {deg: 4, min: 3}, shearArea3G: 0.941},
+  {size: '3/4', major: 0.75, tpi: 6, pitchDiameter: 0.6667, minorDiameter: 0.5833, leadAngle: {deg: 4, min: 33}, shearArea3G: 1.108},
+  {size: '7/8', major: 0.875, tpi: 6, pitchDiameter: 0.7917, minorDiameter: 0.7083, leadAngle: {deg: 3, min: 50}, shearArea3G: 1.339},
+  {size: '1', major: 1, tpi: 5, pitchDiameter: 0.9, minorDiameter: 0.8, leadAngle: {deg: 4, min: 3}, shearArea3G: 1.519},
 ];
 
 /** Preferred Acme pitches (Shigley 9th ed. Table 8-3): major diameter in -> threads per inch. */

@@ -130,3 +130,17 @@ describe('preferred sizes are labelled', () => {
     expect(m.ok && m.value.lead).toBeCloseTo(10.16, 9);
   });
 });
+
+describe("stripping area of the basic profile against Machinery's Handbook 27th ed. Table 3 (class 3G shear area)", () => {
+  // The model shears the screw thread on the cylinder D1 with thickness (0.5 + 0.5 tan 14.5 deg) P:
+  // area per inch = pi D1 x 0.62933. The tabulated class 3G area (with tolerances) must not exceed it,
+  // and the basic value should be only a few per cent larger (here 4 to 6 %).
+  for (const row of ACME_ROWS) {
+    it(`${row.size}-${row.tpi}: basic ${(Math.PI * row.minorDiameter * 0.62933).toFixed(3)} vs tabulated ${row.shearArea3G} in²/in`, () => {
+      const g = geo(`${row.size}-${row.tpi} ACME-3G`);
+      const perInch = (Math.PI * g.nutMinorDiameter * 25.4 * g.shearWidthFactor) / 25.4 ** 2; // in²/in
+      expect(perInch).toBeGreaterThanOrEqual(row.shearArea3G);
+      expect(perInch / row.shearArea3G).toBeLessThan(1.07);
+    });
+  }
+});
