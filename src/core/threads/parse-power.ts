@@ -71,8 +71,8 @@ export function parseTrapezoidal(raw: string): Parsed<ThreadSpec> {
 const ACME_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d+(?:\.\d+)?)\s*-?\s*acme\s*(?:-\s*(.*))?$`, 'i');
 const ACME_PL_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d*\.\d+)\s*p\s*-\s*(\d*\.\d+)\s*l\s*-?\s*acme\s*(?:-\s*(.*))?$`, 'i');
 
-export /** ASME B1.5 Acme "<size>-<tpi> ACME-<class>" or "<size>-<P>P-<L>L-ACME-<class>" (inches in, mm out); default 2G. */
-function parseAcme(raw: string): Parsed<ThreadSpec> {
+/** ASME B1.5 Acme "<size>-<tpi> ACME-<class>" or "<size>-<P>P-<L>L-ACME-<class>" (inches in, mm out); default 2G. */
+export function parseAcme(raw: string): Parsed<ThreadSpec> {
   let sizeText: string;
   let pitchIn: number;
   let leadIn: number;
@@ -132,8 +132,8 @@ function parseAcme(raw: string): Parsed<ThreadSpec> {
   };
 }
 
-export /** Square thread "square <d>x<P>" or "square <d>x<lead>(P<P>)", mm; no standard series, no class. */
-function parseSquare(raw: string): Parsed<ThreadSpec> {
+/** Square thread "square <d>x<P>" or "square <d>x<lead>(P<P>)", mm; no standard series, no class. */
+export function parseSquare(raw: string): Parsed<ThreadSpec> {
   const m = /^(?:square|sq)\s*(\d+(?:[.,]\d+)?)\s*x\s*(\d+(?:[.,]\d+)?)\s*(?:\(\s*p\s*(\d+(?:[.,]\d+)?)\s*\))?$/i.exec(raw);
   if (!m) return fail(`square-thread designation "${raw}" is not understood; write square <diameter>x<pitch> in mm, e.g. square 32x4, or square 32x8(P4) for 2 starts`, raw, []);
   const d = num(m[1] ?? '');
