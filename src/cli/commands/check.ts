@@ -185,7 +185,7 @@ export function buildDraft(values: ParsedOptions['values'], units: UnitSystem, b
 }
 
 /** A nut without --engage engages over its height (given, or ISO 4032 m min). */
-function defaultEngagement(d: JointInputDraft): void {
+export function defaultEngagement(d: JointInputDraft): void {
   if (d.engagement !== undefined) return;
   if (d.internal !== 'nut') throw new UsageError('--engage is needed: the length of thread engaged in the tapped hole (e.g. 15mm)', '--engage');
   if (d.nutHeight !== undefined) {
