@@ -1,0 +1,88 @@
+/**
+ * The built one-file app in a real terminal: tmux at 80x24 on a private socket.
+ * Types a designation and an engagement, checks the readout changed, resizes,
+ * presses Ctrl-C and checks the terminal came back (main screen, cursor shown).
+ */
+import {execFileSync, spawnSync} from 'node:child_process';
+import {mkdtempSync, rmSync, existsSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import path from 'node:path';
+import {afterAll, beforeAll, describe, expect, it} from 'vitest';
+
+const hasTmux = spawnSync('tmux', ['-V']).status === 0;
+const root = path.resolve(import.meta.dirname, '../..');
+const work = mkdtempSync(path.join(tmpdir(), 'tw-tmux-'));
+const socket = `tw-ui-test-${process.pid}`;
+const session = 'wb';
+
+const tmux = (...args: string[]) => execFileSync('tmux', ['-L', socket, ...args], {encoding: 'utf8'});
+const screen = () => tmux('capture-pane', '-p', '-t', session);
+const show = (fmt: string) => tmux('display-message', '-p', '-t', session, fmt).trim();
+const keys = (...k: string[]) => tmux('send-keys', '-t', session, ...k);
+
+async function until(what: string, test: (s: string) => boolean, timeoutMs = 8000): Promise<string> {
+  const start = Date.now();
+  for (;;) {
+    const s = screen();
+    if (test(s)) return s;
+    if (Date.now() - start > timeoutMs) throw new Error(`timed out waiting for ${what}; screen:\n${s}`);
+    await new Promise(r => setTimeout(r, 50));
+  }
+}
+const line = (s: string, start: string) => s.split('\n').find(l => l.includes(start)) ?? '';
+
+describe.skipIf(!hasTmux)('real terminal (tmux 80x24)', () => {
+  beforeAll(() => {
+    execFileSync(process.execPath, [path.join(root, 'scripts/build.mjs'), '--out', path.join(work, 'dist')], {stdio: 'ignore'});
+  }, 120_000);
+  afterAll(() => {
+    spawnSync('tmux', ['-L', socket, 'kill-server']);
+    rmSync(work, {recursive: true, force: true});
+  });
+
+  it('edits, follows a resize, and restores the terminal on Ctrl-C', async () => {
+    const app = path.join(work, 'dist', 'tapwright.mjs');
+    expect(existsSync(app)).toBe(true);
+    const cmd = `env TAPWRIGHT_CONFIG_DIR=${path.join(work, 'cfg')} LANG=C.UTF-8 TERM=xterm-256color node ${app}; echo "EXITED $?"; sleep 30`;
+    tmux('new-session', '-d', '-s', session, '-x', '80', '-y', '24', cmd);
+    let s = await until('the first frame', x => x.includes('Preload') && x.includes('Estimates only'));
+    expect(show('#{alternate_on}')).toBe('1');
+    expect(s.split('\n').filter(l => l.trim() !== '').length).toBeLessThanOrEqual(23);
+
+    // Designation: open the type-ahead, erase, type, take it as typed.
+    keys('Enter');
+    await until('the picker', x => x.includes('Matches') || x.includes('No match'));
+    for (let i = 0; i < 16; i++) keys('BSpace');
+    keys('-l', 'M12');
+    await until('matches for M12', x => /M12x1\.5/.test(x));
+    keys('Enter');
+    s = await until('M12 in the readout', x => /Designation\s+M12\s/.test(x) && x.includes('* unsaved changes'));
+
+    // Engagement: step 3, type a new length; the readout follows.
+    const before = line(s, 'Engaged    ');
+    keys('Right', 'Right');
+    await until('the engagement step', x => /(>|▶) Engaged length/.test(x));
+    keys('-l', '24');
+    keys('Enter');
+    s = await until('the new engagement', x => /Engaged length\s+24\.0 mm/.test(x));
+    const after = line(s, 'Engaged    ');
+    expect(after).not.toBe(before);
+
+    // Resize: larger, then below the minimum, then back.
+    tmux('resize-window', '-t', session, '-x', '100', '-y', '30');
+    s = await until('the wider frame', x => x.split('\n').some(l => l.trimEnd().length > 80) && x.includes('Preload'));
+    tmux('resize-window', '-t', session, '-x', '70', '-y', '20');
+    await until('the size notice', x => x.includes('Terminal is 70x20'));
+    tmux('resize-window', '-t', session, '-x', '80', '-y', '24');
+    await until('the frame again', x => /Engaged length\s+24\.0 mm/.test(x));
+
+    // Ctrl-C: the shell's screen comes back, the cursor is shown, the draft is kept.
+    keys('C-c');
+    s = await until('the exit', x => x.includes('EXITED'));
+    expect(s).toContain('EXITED 130');
+    expect(s).toContain('unsaved edits were kept as a draft');
+    expect(s).not.toContain('Preload');
+    expect(show('#{alternate_on}')).toBe('0');
+    expect(show('#{cursor_flag}')).toBe('1');
+  }, 60_000);
+});
