@@ -229,7 +229,8 @@ export function removeOrphanTemps(file: string): void {
     return;
   }
   for (const n of names) {
-    if ((n.startsWith(`${base}${TMP_MARK}`) || n.startsWith(`${base}.bak${TMP_MARK}`))) {
+    // presets.json.tmp-*, presets.json.bak.tmp-*, presets.json.corrupt-<time>.tmp-*, ...
+    if (n.startsWith(`${base}.`) && n.includes(TMP_MARK)) {
       fs.rmSync(path.join(dir, n), {force: true});
     }
   }

@@ -5,6 +5,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import {openPresetStore} from '../../src/store/presets.js';
+import {MAX_STORE_BYTES} from '../../src/store/store-file.js';
 import {jointPreset, tempDir} from './helpers.js';
 
 const file = (dir: string) => path.join(dir, 'presets.json');
@@ -70,6 +71,17 @@ describe('damaged store file', () => {
       expect(s.warnings()[0]).toMatch(/moved aside to/);
       expect(fs.readFileSync(path.join(dir, asides(dir, 'corrupt-')[0]!), 'utf8')).toBe(content);
     }
+  });
+
+  it('a store file over the size limit is moved aside unread, and the store starts again', () => {
+    const dir = storeWith(['a']);
+    openPresetStore(dir).save(jointPreset('b')); // a second session: .bak holds a
+    fs.truncateSync(file(dir), MAX_STORE_BYTES + 1); // sparse: quick to make
+    const s = openPresetStore(dir);
+    expect(s.warnings()[0]).toMatch(/^preset store was bigger than 32 MiB; moved aside to .*corrupt-.*; recovered 1 preset \(1 of them from presets\.json\.bak\)$/);
+    expect(savedNames(s)).toEqual(['a']);
+    expect(fs.statSync(path.join(dir, asides(dir, 'corrupt-')[0]!)).size).toBe(MAX_STORE_BYTES + 1);
+    expect(fs.statSync(file(dir)).size).toBeLessThan(10_000);
   });
 
   it('an invalid preset is quarantined: kept verbatim, shown, never dropped by later saves', () => {
@@ -156,6 +168,8 @@ describe('locks', () => {
   it('leftover temp files of a killed writer are removed on the next save', () => {
     const dir = storeWith(['a']);
     fs.writeFileSync(`${file(dir)}.tmp-99999-deadbeef`, '{"half": ');
+    fs.writeFileSync(`${file(dir)}.bak.tmp-99999-deadbeef`, '{"half": ');
+    fs.writeFileSync(`${file(dir)}.corrupt-2026-01-01T00-00-00-000Z.tmp-99999-deadbeef`, '{"half": ');
     openPresetStore(dir).save(jointPreset('b'));
     expect(fs.readdirSync(dir).filter(n => n.includes('.tmp-'))).toEqual([]);
   });
