@@ -102,3 +102,20 @@ describe('properties (fast-check)', () => {
     );
   });
 });
+
+describe('two-start trapezoidal screw by hand (Shigley 9th ed. Eq. 8-5 and Eq. 8-2 with f sec a; ISO 2904 d2)', () => {
+  it('Tr40x14(P7), F = 20 kN, f = 0.10, no collar', () => {
+    // d2 = 40 - 7/2 = 36.5 mm, l = 14 mm, f sec 15 deg = 0.10 / 0.965926 = 0.1035276
+    // TR = (20 000 x 36.5 / 2) (14 + pi 0.1035276 x 36.5) / (pi 36.5 - 0.1035276 x 14)
+    //    = 365 000 x (14 + 11.871319) / (114.668132 - 1.449387) = 365 000 x 0.2285074 = 83 405.2 N·mm
+    // TL = 365 000 x (11.871319 - 14) / (114.668132 + 1.449387) = -6 691.2 N·mm: back-drives
+    // e = 20 000 x 14 / (2 pi 83 405.2) = 0.53430; lead angle atan(14 / (pi 36.5)) = 6.9609 deg
+    const r = checkScrew(ScrewInputSchema.parse({thread: 'Tr40x14(P7)', load: 20000, muThread: 0.1, nutLength: 70}));
+    expect(r.torque.raise).toBeCloseTo(83.4052, 3);
+    expect(r.torque.lower).toBeCloseTo(-6.6912, 3);
+    expect(r.efficiency).toBeCloseTo(0.53430, 4);
+    expect(r.leadAngle).toBeCloseTo(6.9609, 3);
+    expect(r.selfLocking).toBe(false);
+    expect(r.flags.find(f => f.code === 'back-drives')?.level).toBe('fail');
+  });
+});
