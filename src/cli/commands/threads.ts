@@ -147,10 +147,11 @@ function jsonOf(spec: ThreadSpec, g: ThreadGeometry | undefined): unknown {
       geometry: null,
       note: 'power-screw thread: geometry and mechanics come from tapwright screw',
       units: {length: 'mm'},
+      caution: CAUTION_SHORT,
     };
   }
   const {spec: _s, ...geometry} = g;
-  return {designation: spec.designation, spec, geometry, units: {length: 'mm', area: 'mm²'}};
+  return {designation: spec.designation, spec, geometry, units: {length: 'mm', area: 'mm²'}, caution: CAUTION_SHORT};
 }
 
 export const command: Command = {
