@@ -6,8 +6,10 @@ import {runCli} from '../../src/cli/main.js';
 import {memoryIo} from '../../src/cli/io.js';
 import {DEMO_SOLID_INSERTS, REPAIR_RANKING_RULE} from '../../src/core/repair/index.js';
 
+const CONFIG = mkdtempSync(path.join(tmpdir(), 'tw-repair-config-'));
+
 async function run(...args: string[]) {
-  const io = memoryIo();
+  const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: CONFIG}});
   const code = await runCli(['repair', ...args], io);
   return {code, out: io.stdout(), err: io.stderr()};
 }
@@ -39,7 +41,23 @@ describe('tapwright repair: text', () => {
   it('--help lists the hole options and exits 0', async () => {
     const r = await run('--help');
     expect(r.code).toBe(0);
-    for (const o of ['--stripped-depth', '--through', '--depth-available', '--wall', '--margin', '--json', '--units']) expect(r.out).toContain(o);
+    for (const o of ['--stripped-depth', '--through', '--depth-available', '--wall', '--margin', '--json', '--units', '--thread', '--torque']) expect(r.out).toContain(o);
+  });
+
+  it('reads the joint and the hole state from a preset, options override it', async () => {
+    const r = await run('--preset', 'demo-pump-casing-stud', '--json');
+    expect(r.err).toBe('');
+    const plan = JSON.parse(r.out) as {hole: {state: string; strippedDepth: number; depthAvailable: number; wall: number}; thread: string};
+    expect(plan.thread).toMatch(/^M12/);
+    expect(plan.hole).toMatchObject({state: 'stripped', strippedDepth: 7, depthAvailable: 30, wall: 14});
+    const changed = JSON.parse((await run('--preset', 'demo-pump-casing-stud', '--wall', '20', '--json')).out) as {hole: {wall: number}};
+    expect(changed.hole.wall).toBe(20);
+  });
+
+  it('reads bare hole lengths in inches with --units us', async () => {
+    const r = await run('--thread', '1/4-20', '--parent', '6061-T6', '--engage', '0.3', '--depth-available', '1', '--units', 'us', '--json');
+    const plan = JSON.parse(r.out) as {hole: {depthAvailable: number}};
+    expect(plan.hole.depthAvailable).toBeCloseTo(25.4, 9);
   });
 });
 
@@ -67,7 +85,7 @@ describe('tapwright repair: JSON contract (SI)', () => {
     const table = {...structuredClone(DEMO_SOLID_INSERTS), name: 'shop table', provenance: {kind: 'user', source: 'measured in the shop'}};
     table.entries = table.entries.filter(e => e.internal === 'M8x1.25' && e.type === 'heavy-duty');
     writeFileSync(path.join(dir, 't.json'), JSON.stringify(table));
-    const io = memoryIo({cwd: dir});
+    const io = memoryIo({cwd: dir, env: {TAPWRIGHT_CONFIG_DIR: CONFIG}});
     const code = await runCli(['repair', ...CAST_M8, '--solid-table', 't.json', '--json'], io);
     expect(code).toBe(0);
     const plan = JSON.parse(io.stdout()) as {options: Array<{kind: string; label: string}>};
@@ -84,12 +102,13 @@ describe('tapwright repair: exit codes and bad input', () => {
   it.each([
     [['--wall', '-3'], /--wall .*accepted: 0\.1 to 5000 mm/],
     [['--margin', '9'], /--margin .*accepted: 0\.5 to 5/],
+    [['--through-nut-height', '0'], /--through-nut-height .*accepted: 0\.5 to 500 mm/],
     [['--depth-available', '12 apples'], /--depth-available/],
     [['--stripped-depth', '20'], /--stripped-depth .*beyond the engaged length/],
     [['--units', 'furlong'], /--units .*accepted: si, us/],
     [['--solid-table', 'no-such-file.json'], /--solid-table: cannot read/],
     [['--parent', 'cheese'], /--parent: unknown parent material "cheese"; accepted:/],
-    [['--torque', '40', '--preload', '10kN'], /one of --torque, --preload or --utilisation/],
+    [['--torque', '40', '--preload', '10kN'], /--torque and --preload contradict each other/],
   ])('rejects %j naming the option', async (extra, message) => {
     const args = [...CAST_M8];
     const i = args.indexOf(extra[0] as string);
@@ -101,7 +120,7 @@ describe('tapwright repair: exit codes and bad input', () => {
   });
 
   it('needs --thread and --engage', async () => {
-    expect((await run('--engage', '8', '--parent', 'AlSi7Mg-T6')).err).toMatch(/--thread is required/);
-    expect((await run('--thread', 'M8', '--parent', 'AlSi7Mg-T6')).err).toMatch(/--engage is required/);
+    expect((await run('--engage', '8', '--parent', 'AlSi7Mg-T6')).err).toMatch(/--thread is needed/);
+    expect((await run('--thread', 'M8', '--parent', 'AlSi7Mg-T6')).err).toMatch(/--engage is needed/);
   });
 });

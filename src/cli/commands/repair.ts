@@ -10,9 +10,10 @@ import {EXIT, UsageError, type CliIo} from '../io.js';
 import {parseOptions, quantity, str, type OptionSpec} from '../args.js';
 import {JointInputError} from '../../core/joint/index.js';
 import {parseSolidInsertTable, planRepairs, RepairInputSchema, REPAIR_RANKING_RULE, EFFORT_SCALE_TEXT, type RepairInputDraft, type SolidInsertTable} from '../../core/repair/index.js';
+import type {JointInputDraft} from '../../core/joint/input.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
-import {FIELD_OPTION, JOINT_OPTIONS, jointFromOptions} from './repair-joint.js';
+import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
 import {lengthText, planText} from './repair-text.js';
 
 const OPTIONS: OptionSpec = {
@@ -21,13 +22,12 @@ const OPTIONS: OptionSpec = {
   through: {type: 'boolean'},
   'depth-available': {type: 'string'},
   wall: {type: 'string'},
-  margin: {type: 'string'},
   'fixed-length': {type: 'boolean'},
-  nut: {type: 'string'},
-  'nut-height': {type: 'string'},
-  'nut-flats': {type: 'string'},
+  'through-nut': {type: 'string'},
+  'through-nut-height': {type: 'string'},
+  'through-nut-flats': {type: 'string'},
   'solid-table': {type: 'string'},
-  units: {type: 'string'},
+  preset: {type: 'string'},
   json: {type: 'boolean'},
   format: {type: 'string'},
   help: {type: 'boolean', short: 'h'},
@@ -36,39 +36,33 @@ const OPTIONS: OptionSpec = {
 const HELP = `tapwright repair - ranked fixes for a weak or stripped tapped thread
 
 Usage:
-  tapwright repair --thread T --engage L [joint options] [hole options]
+  tapwright repair --thread T --parent ID --engage L [options]
+  tapwright repair --preset NAME [options that change the preset]
 
-Joint (as for tapwright check):
-  --thread T            M10, M10x1.25-6H/6g, 1/4-20 UNC-2A/2B
-  --bolt G              bolt grade id (default 8.8); --bolt-rm/--bolt-rp MPa
-  --parent ID           parent material id; or --parent-rm/--parent-shear MPa
-  --engage L            engaged length from the loaded face (the screw reach)
-  --chamfer L           length lost to the countersink at the face
-  --hole-depth L        drilled-and-tapped depth of the blind hole as it is
-  --torque T | --preload F | --utilisation U   tightening (default U 0.9)
-  --mu-thread, --mu-head  value or min..max;  --nut-factor K
-  --bearing-diameter L, --service-load F, --scatter A
-Hole and repair:
-  --stripped-depth L    stripped from the surface to L (good thread below);
-                        "all" for the whole engaged length
+The joint (the options of tapwright check; see tapwright check --help):
+${JOINT_OPTIONS_HELP}
+The hole and the repair:
+  --stripped-depth L    stripped from the surface to L, good thread below it;
+                        "all": the whole engaged length is gone
   --through             the hole goes through the part (a nut can be fitted)
   --depth-available L   depth to the bottom of a blind hole, or the thickness
   --wall L              edge distance: hole centre line to the nearest edge
   --margin M            required margin, 0.5 to 5 (default 1: bolt breaks first)
   --fixed-length        the screw length may not change
-  --nut C               nut class for the through-bolt (default: matched to
-                        the bolt grade); --nut-height L, --nut-flats L
-  --solid-table FILE    your solid key-locked insert table (JSON); default:
-                        the shipped demo table (demo values: use the insert
+  --through-nut CLASS   nut class for the through-bolt option (default: matched
+                        to the bolt grade); --through-nut-height L,
+                        --through-nut-flats L (default: ISO 4032)
+  --solid-table FILE    your solid key-locked insert table (JSON); default: the
+                        shipped demo table (demo values: use the insert
                         maker's data)
+  --preset NAME         joint and hole state from a saved or shipped preset
 Output:
-  --units si|us         text units (default si); JSON is always SI
-  --json                the plan as JSON (same as --format json)
+  --json                the plan as JSON, always SI (same as --format json)
   --help                this text
 
-Lengths take units (12mm, 0.5in); a bare number is mm. Torque: 40Nm, 30ft-lbf.
-Exit codes: 0 at least one option meets the margin; 3 computed, none meets
-the margin; 2 bad input.
+Lengths take units (12mm, 0.5in); a bare number is in the --units system.
+Exit codes: 0 at least one option meets the margin; 3 computed, but none
+meets the margin; 2 bad input or usage.
 
 Ranking: ${REPAIR_RANKING_RULE}
 
@@ -114,9 +108,16 @@ function joinNegativeValues(args: string[]): string[] {
 }
 
 const REPAIR_FIELD_OPTION: Record<string, string> = {
-  strippedDepth: '--stripped-depth', depthAvailable: '--depth-available', wall: '--wall', margin: '--margin',
-  nutClass: '--nut', nutHeight: '--nut-height', nutFlats: '--nut-flats',
+  holeState: '--stripped-depth', strippedDepth: '--stripped-depth', depthAvailable: '--depth-available', wall: '--wall',
+  margin: '--margin', nutClass: '--through-nut', nutHeight: '--through-nut-height', nutFlats: '--through-nut-flats',
 };
+
+async function loadPreset(name: string, io: CliIo): Promise<{joint?: JointInputDraft; repair?: RepairInputDraft}> {
+  const {resolvePreset} = await import('../../store/index.js');
+  const p = resolvePreset(name, io.env, 'joint');
+  if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
+  return {joint: p.joint, ...(p.repair ? {repair: p.repair} : {})};
+}
 
 export const command: Command = {
   name: 'repair',
@@ -132,34 +133,36 @@ export const command: Command = {
     if (format !== 'text' && format !== 'json') throw new UsageError(`--format is "${format}"; accepted: text, json`, '--format');
     const units = (str(values, 'units') ?? 'si').toLowerCase();
     if (units !== 'si' && units !== 'us') throw new UsageError(`--units is "${units}"; accepted: si, us`, '--units');
-    const margin = str(values, 'margin');
-    const marginValue = margin === undefined ? undefined : quantity('--margin', margin, 'ratio', {min: 0.5, max: 5, rangeText: '0.5 to 5'});
-    const joint = jointFromOptions(values);
-    if (marginValue !== undefined) joint.requiredMargin = marginValue;
+    const presetName = str(values, 'preset');
+    const preset = presetName === undefined ? {} : await loadPreset(presetName, io);
+    const joint = jointFromOptions(values, preset.joint);
 
-    const draft: RepairInputDraft = {through: values.through === true, boltLengthMayChange: values['fixed-length'] !== true};
+    const draft: RepairInputDraft = {...(preset.repair ?? {})};
+    if (values.through === true) draft.through = true;
+    if (values['fixed-length'] === true) draft.boltLengthMayChange = false;
+    const bare = units === 'us' ? 'in' : 'mm';
+    const range = (lo: number, hi: number) => (units === 'us' ? `${Number((lo / 25.4).toPrecision(3))} to ${Number((hi / 25.4).toPrecision(4))} in` : `${lo} to ${hi} mm`);
+    const len = (option: string, min: number, max: number, extra = '') => {
+      const v = str(values, option);
+      return v === undefined ? undefined : quantity(`--${option}`, v, 'length', {min, max, defaultUnit: bare, rangeText: range(min, max) + extra});
+    };
     const stripped = str(values, 'stripped-depth');
     if (stripped !== undefined) {
       draft.holeState = 'stripped';
-      if (stripped.trim().toLowerCase() !== 'all') {
-        draft.strippedDepth = quantity('--stripped-depth', stripped, 'length', {min: 0, max: 2000, defaultUnit: 'mm', rangeText: '0 to 2000 mm, or "all"'});
-      }
+      if (stripped.trim().toLowerCase() === 'all') delete draft.strippedDepth;
+      else draft.strippedDepth = len('stripped-depth', 0, 2000, ', or "all"');
     }
-    const len = (option: string, min: number, max: number, text: string) => {
-      const v = str(values, option);
-      return v === undefined ? undefined : quantity(`--${option}`, v, 'length', {min, max, defaultUnit: 'mm', rangeText: text});
-    };
-    const depth = len('depth-available', 0.5, 5000, '0.5 to 5000 mm');
+    const depth = len('depth-available', 0.5, 5000);
     if (depth !== undefined) draft.depthAvailable = depth;
-    const wall = len('wall', 0.1, 5000, '0.1 to 5000 mm');
+    const wall = len('wall', 0.1, 5000);
     if (wall !== undefined) draft.wall = wall;
-    const nutHeight = len('nut-height', 0.5, 500, '0.5 to 500 mm');
+    const nutHeight = len('through-nut-height', 0.5, 500);
     if (nutHeight !== undefined) draft.nutHeight = nutHeight;
-    const nutFlats = len('nut-flats', 1, 1000, '1 to 1000 mm');
+    const nutFlats = len('through-nut-flats', 1, 1000);
     if (nutFlats !== undefined) draft.nutFlats = nutFlats;
-    const nut = str(values, 'nut');
-    if (nut !== undefined) draft.nutClass = nut;
-    if (marginValue !== undefined) draft.margin = marginValue;
+    const nut = str(values, 'through-nut');
+    if (nut !== undefined) draft.nutClass = nut.trim();
+    if (str(values, 'margin') !== undefined) draft.margin = joint.requiredMargin;
     const tableFile = str(values, 'solid-table');
     const table = tableFile === undefined ? undefined : await loadTable(tableFile, io);
     const repair = RepairInputSchema.safeParse(draft);
@@ -168,7 +171,7 @@ export const command: Command = {
       const option = REPAIR_FIELD_OPTION[String(issue?.path[0] ?? '')] ?? String(issue?.path[0] ?? '');
       throw new UsageError(`${option}: ${issue?.message ?? 'invalid'}`, option);
     }
-    if (repair.data.holeState === 'stripped' && repair.data.strippedDepth !== undefined && repair.data.strippedDepth > joint.engagement) {
+    if (repair.data.holeState === 'stripped' && repair.data.strippedDepth !== undefined && repair.data.strippedDepth > joint.engagement + 1e-9) {
       throw new UsageError(`--stripped-depth ${repair.data.strippedDepth} mm is beyond the engaged length (--engage ${joint.engagement} mm); use "all"`, '--stripped-depth');
     }
 
@@ -177,7 +180,7 @@ export const command: Command = {
       plan = planRepairs(joint, repair.data, table);
     } catch (e) {
       if (e instanceof JointInputError) {
-        const option = FIELD_OPTION[e.field] ?? e.field;
+        const option = optionFor(e.field);
         throw new UsageError(`${option}: ${e.message}`, option);
       }
       throw e;
