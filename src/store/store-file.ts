@@ -89,11 +89,7 @@ function readText(file: string): string | undefined {
 export function readState(file: string, now: Date): State {
   const text = readText(file);
   if (text === undefined) return emptyState('missing');
-  if (text.startsWith('\u0000too-big:')) {
-    const s = emptyState('damaged');
-    s.reason = `bigger than ${MAX_STORE_BYTES / 1024 / 1024} MiB`;
-    return s;
-  }
+  if (text.startsWith('\u0000too-big:')) return recover(file, undefined, `bigger than ${MAX_STORE_BYTES / 1024 / 1024} MiB`, now);
   const damaged = (reason: string): State => recover(file, text, reason, now);
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '') return damaged('empty');
@@ -128,12 +124,14 @@ export function readState(file: string, now: Date): State {
 }
 
 /** Salvage a damaged file, topped up from presets.json.bak. */
-function recover(file: string, text: string, reason: string, now: Date): State {
+function recover(file: string, text: string | undefined, reason: string, now: Date): State {
   const s = emptyState('damaged');
   s.reason = reason;
-  s.text = text;
-  const found = salvage(text);
-  itemize(s, found.presets, found.quarantine, now);
+  if (text !== undefined) {
+    s.text = text;
+    const found = salvage(text);
+    itemize(s, found.presets, found.quarantine, now);
+  }
   const bak = `${file}.bak`;
   if (fs.existsSync(bak)) {
     let fromBak = 0;
