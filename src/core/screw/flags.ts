@@ -7,6 +7,8 @@ import type {Flag} from '../types.js';
 import type {ScrewResult} from './result.js';
 
 export const WATCH_MARGIN = {stripping: 2, buckling: 2, yield: 1.5} as const;
+/** Self-locking with f sec(alpha) below this multiple of tan(lambda) is marked marginal (common practice, no source). */
+export const SELF_LOCKING_MARGIN = 1.5;
 /** Fewer engaged threads than this: the 0.38 first-thread share is not yet reached (Shigley 9th ed. p. 419). */
 export const SHARE_THREADS = 6;
 
@@ -48,6 +50,12 @@ export function screwFlags(c: FlagContext): Flag[] {
         message: `thread alone back-drives (f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}); only collar friction holds the load (lowering torque ${f2(r.torque.lower)} N·m). Vibration or grease can let it run down`,
       });
     }
+  }
+  if (r.torque.lowerThread > 0 && fsec < SELF_LOCKING_MARGIN * tanL) {
+    out.push({
+      code: 'self-locking-marginal', level: 'info',
+      message: `thread is self-locking but only just: f sec(alpha) ${f3(fsec)} against tan(lead angle) ${f3(tanL)}; vibration or better lubrication can let the load creep down`,
+    });
   }
   const p = r.nut.bearingPressure;
   const allow = r.nut.allowablePressure;

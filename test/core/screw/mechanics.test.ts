@@ -119,3 +119,13 @@ describe('two-start trapezoidal screw by hand (Shigley 9th ed. Eq. 8-5 and Eq. 8
     expect(r.flags.find(f => f.code === 'back-drives')?.level).toBe('fail');
   });
 });
+
+describe('self-locking-marginal (info; threshold 1.5 x tan lambda is common practice, no source)', () => {
+  // Tr24x5: tan(lambda) = 0.0740256, f sec a at the boundary x 1.5: f = 1.5 x 0.0740256 x cos 15 deg = 0.107254
+  const mk = (mu: number) => checkScrew(ScrewInputSchema.parse({thread: 'Tr24x5', load: 10000, muThread: mu, nutLength: 40}));
+  it('is raised just below 1.5 x and not just above', () => {
+    expect(mk(0.107).flags.find(f => f.code === 'self-locking-marginal')?.level).toBe('info');
+    expect(mk(0.1075).flags.find(f => f.code === 'self-locking-marginal')).toBeUndefined();
+    expect(mk(0.07).flags.find(f => f.code === 'self-locking-marginal')).toBeUndefined(); // back-drives instead
+  });
+});
