@@ -168,6 +168,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       boltBreakForce,
       weaker,
       requiredEngagement: {fedStd: fed.required, alexander: alex.required},
+      requiredEngagedLength: {fedStd: fed.required + input.chamfer, alexander: alex.required + input.chamfer},
       effectiveEngagement: le,
       engagedThreads,
       limitsUsed: 'worst-case',

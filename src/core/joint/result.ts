@@ -88,6 +88,9 @@ export interface CheckResult {
     weaker: 'external' | 'internal';
     /** Required effective engagement so the bolt breaks first, mm. */
     requiredEngagement: {fedStd: number; alexander: number};
+    /** The same as an engaged length to compare with the input engagement (adds the chamfer), mm;
+     *  a blind hole also needs the incomplete threads at its bottom below this. */
+    requiredEngagedLength?: {fedStd: number; alexander: number};
     /** Effective (fully formed) engagement used, mm. */
     effectiveEngagement: number;
     /** Engaged full threads (effective engagement / pitch). */

@@ -102,6 +102,7 @@ describe('checkJoint', () => {
     expect(r.flags.find(f => f.code === 'blind-hole-too-shallow')?.level).toBe('watch');
     const through = run({thread: 'M10', parent: 'S355', engagement: 15, chamfer: 1});
     expect(through.stripping.effectiveEngagement).toBeCloseTo(14, 12);
+    expect(through.stripping.requiredEngagedLength?.fedStd).toBeCloseTo(through.stripping.requiredEngagement.fedStd + 1, 12);
   });
 
   it('custom parent strength: shear taken as 0.6 Rm (textbook assumption, from memory) and labelled', () => {
