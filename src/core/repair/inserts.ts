@@ -89,6 +89,9 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     } else {
       o.screwLengthChange = Math.max(0, fullReach - ctx.reach);
     }
+    if (!repair.through && o.drilledDepth !== null && ctx.reach > o.drilledDepth + 1e-9) {
+      o.notes.push(`the present screw reaches ${mm(ctx.reach)} mm, deeper than the ${mm(o.drilledDepth)} mm drilled: fit a screw that stops short of the bottom`);
+    }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: INSERT_WIRE.rm, parentShear: INSERT_WIRE.shear, engagement, chamfer: 0}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
     let outer: Checked = {ok: false, error: 'no receiving-thread designation accepted'};
@@ -160,6 +163,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
       if (repair.depthAvailable !== undefined && d.holeDepth > repair.depthAvailable + 1e-9) {
         return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
       }
+      if (ctx.reach > d.drilledDepth + 1e-9) o.notes.push(`the present screw reaches ${mm(ctx.reach)} mm, deeper than the ${mm(d.drilledDepth)} mm drilled: fit a screw that stops short of the bottom`);
     }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
