@@ -147,17 +147,18 @@ export function screwInputFromArgs(args: string[], base?: Record<string, unknown
   const allowText = opt('allowable-pressure');
   const yieldText = opt('screw-yield');
   const wearText = opt('nut-wear');
+  const thread = required(values, 'thread', THREAD_EXAMPLES, base);
+  const loadText = required(values, 'load', 'axial load, e.g. 6.4kN', base);
+  const nutLengthText = required(values, 'nut-length', 'engaged nut length, e.g. 40mm', base);
   const draft = {
-    thread: required(values, 'thread', THREAD_EXAMPLES, base),
+    thread,
     starts,
-    load: opt('load') === undefined ? (required(values, 'load', 'axial load, e.g. 6.4kN', base), undefined)
-      : quantity('--load', opt('load') ?? '', 'force', {min: 0, max: 1e8, rangeText: '0 to 100 MN', defaultUnit: 'n'}),
+    load: loadText === undefined ? undefined : quantity('--load', loadText, 'force', {min: 0, max: 1e8, rangeText: '0 to 100 MN', defaultUnit: 'n'}),
     loadDirection: opt('direction') === undefined ? undefined : oneOf('--direction', opt('direction'), ['compression', 'tension'] as const, 'compression'),
     muThread: opt('mu-thread') === undefined ? undefined : threadFriction(opt('mu-thread') ?? ''),
     muCollar: opt('mu-collar') === undefined ? undefined : collarFriction(opt('mu-collar') ?? ''),
     collarDiameter: len('collar-diameter', 0, 2000, '0 to 2000 mm'),
-    nutLength: opt('nut-length') === undefined ? (required(values, 'nut-length', 'engaged nut length, e.g. 40mm', base), undefined)
-      : quantity('--nut-length', opt('nut-length') ?? '', 'length', {min: 0.5, max: 2000, rangeText: '0.5 to 2000 mm', defaultUnit: 'mm'}),
+    nutLength: nutLengthText === undefined ? undefined : quantity('--nut-length', nutLengthText, 'length', {min: 0.5, max: 2000, rangeText: '0.5 to 2000 mm', defaultUnit: 'mm'}),
     nutMaterial: opt('nut-material'),
     nutWear: wearText === undefined ? undefined : quantity('--nut-wear', wearText, 'length', {min: 0, max: 50, rangeText: '0 to 50 mm', defaultUnit: 'mm'}),
     screwMaterial: opt('screw-material'),
