@@ -51,17 +51,15 @@ function emptyState(status: State['status']): State {
   return {status, entries: [], quarantine: [], materials: [], inserts: []};
 }
 
-/** Split raw items into valid entries and quarantine, never dropping anything. */
+/**
+ * Split raw items into valid entries and quarantine, never dropping anything.
+ * A quarantined item that reads as a valid preset again (after an upgrade or a
+ * hand fix) and whose name is free comes back as a preset.
+ */
 function itemize(state: State, items: unknown[], quarantine: unknown[], now: Date): void {
   const at = now.toISOString();
-  for (const q of quarantine) {
-    const r = QuarantineEntrySchema.safeParse(q);
-    state.quarantine.push(r.success ? r.data : {reason: 'unreadable quarantine entry', at, raw: q});
-  }
   const seen = new Set<string>();
-  items.forEach((raw, i) => {
-    const name = isPlainObject(raw) && typeof raw.name === 'string' ? raw.name : undefined;
-    const hold = (reason: string) => state.quarantine.push({...(name !== undefined ? {name} : {}), reason, at, raw});
+  const take = (raw: unknown, hold: (reason: string) => void, i: number): void => {
     const bad = findForbiddenKey(raw);
     if (bad !== undefined) return hold(`item ${i + 1} has the forbidden key ${bad}`);
     const r = PresetSchema.safeParse(raw);
@@ -71,6 +69,15 @@ function itemize(state: State, items: unknown[], quarantine: unknown[], now: Dat
     if (isShippedName(r.data.name)) return hold(`"${r.data.name}" is the name of a shipped demo preset`);
     seen.add(key);
     state.entries.push({preset: r.data, raw});
+  };
+  items.forEach((raw, i) => {
+    const name = isPlainObject(raw) && typeof raw.name === 'string' ? raw.name : undefined;
+    take(raw, reason => state.quarantine.push({...(name !== undefined ? {name} : {}), reason, at, raw}), i);
+  });
+  quarantine.forEach((q, i) => {
+    const r = QuarantineEntrySchema.safeParse(q);
+    if (!r.success) return void state.quarantine.push({reason: 'unreadable quarantine entry', at, raw: q});
+    take(r.data.raw, () => state.quarantine.push(r.data), i);
   });
 }
 

@@ -104,6 +104,18 @@ describe('damaged store file', () => {
     expect(again.quarantined().map(x => x.raw)).toEqual([bad, dup, 42]);
   });
 
+  it('a quarantined item that reads as a valid preset again comes back, when its name is free', () => {
+    const dir = tempDir('quarantine');
+    const back = {...jointPreset('back'), savedAt: '2026-01-01T00:00:00.000Z', revision: 2};
+    const taken = {...jointPreset('taken'), savedAt: '2026-01-01T00:00:00.000Z', revision: 1};
+    const q = (raw: unknown) => ({name: (raw as {name: string}).name, reason: 'failed an older check', at: '2026-01-01T00:00:00.000Z', raw});
+    fs.writeFileSync(file(dir), JSON.stringify({schemaVersion: 2, presets: [taken], quarantine: [q(back), q(taken)]}));
+    const s = openPresetStore(dir);
+    expect(savedNames(s)).toEqual(['back', 'taken']);
+    expect(s.get('back')?.revision).toBe(2);
+    expect(s.quarantined()).toEqual([q(taken)]);
+  });
+
   it('a store written by a newer tapwright is not read and never changed', () => {
     const dir = tempDir('newer');
     const text = JSON.stringify({schemaVersion: 3, presets: [{anything: true}]});
