@@ -92,6 +92,9 @@ describe('tapwright screw text output', () => {
     const j = JSON.parse((await run(['--thread', 'Tr24x5', '--load', '10kN', '--nut-length', '40', '--mu-thread', 'steel-oil/bronze', '--mu-collar', 'soft-steel/bronze', '--collar-diameter', '40', '--json'])).out);
     expect(j.friction.thread).toEqual({min: 0.1, max: 0.16});
     expect(j.friction.collar).toBe(0.08);
+    const st = JSON.parse((await run(['--thread', 'Tr24x5', '--load', '10kN', '--nut-length', '40', '--mu-collar', 'soft-steel/bronze:starting', '--collar-diameter', '40', '--json'])).out);
+    expect(st.friction.collar).toBe(0.1); // Table 8-6 starting value
+    expect((await run(['--thread', 'Tr24x5', '--load', '10kN', '--nut-length', '40', '--mu-collar', 'soft-steel/bronze:wet'])).err).toMatch(/--mu-collar.*running or starting/);
   });
 });
 

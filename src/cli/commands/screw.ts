@@ -49,7 +49,8 @@ Options:
   --mu-thread F         thread friction 0.01 to 0.6, a range 0.10..0.16, or a
                         pick such as steel-oil/bronze (default 0.15)
   --mu-collar F         collar friction 0 to 0.6 or a pick such as
-                        hard-steel/bronze (default 0: rolling thrust bearing)
+                        hard-steel/bronze (running value) or
+                        hard-steel/bronze:starting (default 0: rolling bearing)
   --collar-diameter D   mean collar diameter, 0 to 2000 mm (default 0)
   --nut-length L        engaged nut length, 0.5 to 2000 mm
   --nut-material M      bronze (default), cast-iron, steel, brass, plastic, or
@@ -99,8 +100,12 @@ function threadFriction(text: string): number | Range {
 }
 
 function collarFriction(text: string): number {
-  const pick = collarFrictionPick(text);
-  if (pick) return pick.running;
+  const [id = '', which = 'running'] = text.trim().split(':');
+  const pick = collarFrictionPick(id);
+  if (pick) {
+    if (which !== 'running' && which !== 'starting') throw new UsageError(`--mu-collar "${text}": after ":" write running or starting`, '--mu-collar');
+    return which === 'starting' ? pick.starting : pick.running;
+  }
   if (/^[a-z]/i.test(text.trim())) {
     throw new UsageError(`--mu-collar "${text}" is not a number or a pick; accepted: 0 to 0.6 or ${COLLAR_FRICTION.map(p => p.id).join(', ')}`, '--mu-collar');
   }
@@ -183,7 +188,7 @@ export function screwInputFromArgs(args: string[], base?: Record<string, unknown
 function picksText(): string {
   const out = ['THREAD FRICTION f (--mu-thread pick: min..max)'];
   for (const p of THREAD_FRICTION) out.push(`  ${p.id.padEnd(22)} ${p.min.toFixed(2)}..${p.max.toFixed(2)}  ${p.screw} screw, ${p.nut} nut`);
-  out.push(...wrap(THREAD_FRICTION_SOURCE.source, '  source: ', '    '), '', 'COLLAR FRICTION fc (--mu-collar pick: running value used)');
+  out.push(...wrap(THREAD_FRICTION_SOURCE.source, '  source: ', '    '), '', 'COLLAR FRICTION fc (--mu-collar pick; add :starting for the starting value)');
   for (const p of COLLAR_FRICTION) out.push(`  ${p.id.padEnd(22)} running ${p.running.toFixed(2)}, starting ${p.starting.toFixed(2)}`);
   out.push(...wrap(COLLAR_FRICTION_SOURCE.source, '  source: ', '    '), '');
   return out.join('\n');
