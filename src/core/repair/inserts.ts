@@ -27,8 +27,12 @@ function receivingDesignations(t: ThreadBasics, major: number): string[] {
   return [metric];
 }
 
-/** Combine the two checks of an insert into margins; `outer` gives the parent's stripping force. */
-function combine(o: RepairOption, inner: CheckResult, parentForce: number, names: {insert: string; parent: string}): void {
+/** Flags of the inner pair that speak of its own stripping only; the combined margins replace them. */
+const INNER_ONLY = new Set(['strips-at-preload', 'strips-before-break', 'engagement-beyond-useful']);
+
+/** Combine the two checks of an insert into margins and flags; `outer` gives the parent's stripping force. */
+function combine(o: RepairOption, inner: CheckResult, outer: CheckResult, names: {insert: string; parent: string}): void {
+  const parentForce = outer.stripping.internal.force;
   const parts: StrengthPart[] = [
     {name: 'bolt thread in the insert', force: inner.stripping.external.force},
     {name: names.insert, force: inner.stripping.internal.force},
@@ -41,6 +45,10 @@ function combine(o: RepairOption, inner: CheckResult, parentForce: number, names
   o.strength = {parts, governs: weakest.name, boltBreakForce: inner.stripping.boltBreakForce};
   o.margin = {stripping: weakest.force / load, boltBreaksFirst: weakest.force / inner.stripping.boltBreakForce};
   applyResult(o, inner);
+  o.flags = [
+    ...inner.flags.filter(f => !INNER_ONLY.has(f.code)),
+    ...outer.flags.filter(f => f.code === 'outside-model-range').map(f => ({...f, message: `Parent side: ${f.message}`})),
+  ];
 }
 
 export function helicalOptions(ctx: PlanContext): RepairOption[] {
@@ -103,7 +111,7 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
       if (outer.ok) break;
     }
     if (!outer.ok) return infeasible(o, `not computed (parent at the receiving thread): ${outer.error}`);
-    combine(o, inner.result, outer.result.stripping.internal.force, {insert: 'insert wire thread', parent: 'parent at the receiving thread'});
+    combine(o, inner.result, outer.result, {insert: 'insert wire thread', parent: 'parent at the receiving thread'});
     o.notes.push(`countersink 120 deg to about ${rt.major.toFixed(1)} mm before winding in the insert (common practice, no source)`);
     if (ctx.stripped) o.notes.push(`the receiving thread's minor diameter (${rt.minor.toFixed(2)} mm) is outside the old thread, so the torn thread is cut away`);
     return judge(ctx, o);
@@ -167,7 +175,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
-    combine(o, inner.result, outer.result.stripping.internal.force, {insert: 'insert internal thread', parent: `parent at the ${e.external} thread`});
+    combine(o, inner.result, outer.result, {insert: 'insert internal thread', parent: `parent at the ${e.external} thread`});
     o.notes.push(`${e.keys} keys lock the insert against turning; check the maker's key and torque data`);
     return judge(ctx, o);
   });
