@@ -212,4 +212,13 @@ describe('tapwright presets', () => {
     expect(r.out).not.toMatch(/^b\s/m);
     expect((await run('list')).err).toBe('');
   });
+
+  it('shows quarantined items: counted in the text list, kept verbatim in the JSON list', async () => {
+    const {run, dir} = setup();
+    const bad = {name: 'broken', kind: 'joint', joint: {thread: 'M10', engagement: -4}, notes: {}, savedAt: '2026-01-01T00:00:00Z', revision: 1};
+    fs.writeFileSync(path.join(dir, 'presets.json'), JSON.stringify({schemaVersion: 2, presets: [bad]}));
+    expect((await run('list')).out).toContain('1 unreadable item kept in quarantine (see presets list --json); nothing was deleted.');
+    const doc = JSON.parse((await run('list', '--json')).out);
+    expect(doc.quarantined).toEqual([{name: 'broken', reason: expect.stringMatching(/joint\.engagement/), at: expect.any(String), raw: bad}]);
+  });
 });

@@ -160,7 +160,7 @@ export const command: Command = {
         const rows = store.list().filter(r => q === undefined || matches(r, q));
         const quarantine = store.quarantined();
         if (p.values.json) {
-          json(io, {store: store.file, presets: rows, quarantined: quarantine.map(({name, reason, at}) => ({name, reason, at})), warnings: store.warnings()});
+          json(io, {store: store.file, presets: rows, quarantined: quarantine, warnings: store.warnings()});
         } else io.out(listText(rows, store, quarantine.length));
         return EXIT.ok;
       }
