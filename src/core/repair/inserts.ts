@@ -51,6 +51,10 @@ function combine(o: RepairOption, inner: CheckResult, outer: CheckResult, names:
   ];
 }
 
+/**
+ * One option per nominal length 1D..3D (ASME B18.29.1 / B18.29.2M): receiving thread, drill and
+ * depths from helical.ts, strength as two checkJoint evaluations in series (see the module comment), mm/N.
+ */
 export function helicalOptions(ctx: PlanContext): RepairOption[] {
   const {thread: t, repair, joint} = ctx;
   const rt = receivingThread(t);
@@ -132,6 +136,7 @@ export function matchingEntries(ctx: PlanContext): SolidInsertEntry[] {
   });
 }
 
+/** One option per matching entry of the solid key-locked insert table; strength as for helical inserts, mm/N. */
 export function solidOptions(ctx: PlanContext): RepairOption[] {
   const {repair, deps} = ctx;
   const table = deps.solidTable;

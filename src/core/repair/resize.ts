@@ -25,6 +25,7 @@ export function oversizeCandidates(thread: ThreadBasics, series: readonly Series
     .slice(0, OVERSIZE_CANDIDATES);
 }
 
+/** Oversize thread options (oversizeCandidates), each checked by checkJoint with the larger screw, mm/N/N·m. */
 export function oversizeOptions(ctx: PlanContext): RepairOption[] {
   const {deps, repair, joint, base} = ctx;
   const series = deps.seriesAbove ? deps.seriesAbove(base.geometry.spec) : [];
@@ -63,6 +64,7 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
   });
 }
 
+/** Through-bolt with a nut (ISO 898-2 class, ISO 4032 dimensions from the material library), checked by checkJoint as a nut joint. */
 export function throughBoltOption(ctx: PlanContext): RepairOption {
   const {deps, repair, joint, thread, base} = ctx;
   const o = skeleton(ctx, 'through-bolt', 'through-bolt and nut');

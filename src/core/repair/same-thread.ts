@@ -22,6 +22,7 @@ export function checkAtReach(ctx: PlanContext, reach: number, keepHoleDepth = fa
   return safeCheck(ctx, input);
 }
 
+/** Re-use the good thread left below the stripped zone (or the hole as it is); margins from checkJoint, mm/N/N·m. */
 export function reuseOption(ctx: PlanContext): RepairOption {
   const o = skeleton(ctx, 'reuse', 'clean and re-use');
   o.tapThread = ctx.plain;
@@ -65,6 +66,10 @@ export function reachForMargin(ctx: PlanContext, start: Checked): {reach: number
   return {reach, check, capped: !meets(ctx, check)};
 }
 
+/**
+ * Same thread, deeper: the shortest screw reach meeting the margin (reachForMargin), with the
+ * blind-hole depths of holes.ts (tap chamfer and 118° point included), mm; margins from checkJoint.
+ */
 export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): RepairOption {
   const o = skeleton(ctx, 'longer-engagement', 'longer engagement');
   const {repair, thread} = ctx;

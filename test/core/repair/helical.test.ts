@@ -46,8 +46,8 @@ describe('receiving (STI) thread of a helical wire insert', () => {
   // Typical published STI tap-drill recommendations, from memory (they vary with material):
   // M6 6.3, M8 8.3-8.4, M10 10.4-10.5, M12 12.4-12.5, M16 16.5 mm; 1/4-20 17/64 in.
   it.each([
-    [m(6, 1), 6.3], [m(8, 1.25), 8.3], [m(10, 1.5), 10.4], [m(12, 1.75), 12.4], [m(16, 2), 16.5],
-  ])('STI tap drill for M%# matches the typical recommendation (from memory)', (t, drill) => {
+    ['M6x1', m(6, 1), 6.3], ['M8x1.25', m(8, 1.25), 8.3], ['M10x1.5', m(10, 1.5), 10.4], ['M12x1.75', m(12, 1.75), 12.4], ['M16x2', m(16, 2), 16.5],
+  ])('STI tap drill for %s: %f mm, the typical recommendation (from memory)', (_n, t, drill) => {
     expect(receivingThread(t).drill).toBeCloseTo(drill, 6);
   });
 

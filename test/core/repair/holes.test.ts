@@ -9,11 +9,11 @@ const m = (d: number, p: number): ThreadBasics => ({family: 'metric', nominal: d
 describe('tap drills for ordinary threads', () => {
   // ISO 965-1 limits of size, 6H internal minor diameter D1 min/max (mm).
   it.each([
-    [m(6, 1), 4.917, 5.153],
-    [m(8, 1.25), 6.647, 6.912],
-    [m(10, 1.5), 8.376, 8.676],
-    [m(12, 1.75), 10.106, 10.441],
-  ])('the drill for M%# lies inside the 6H minor-diameter limits (ISO 965-1, 6H D1 limits)', (t, min, max) => {
+    ['M6x1', m(6, 1), 4.917, 5.153],
+    ['M8x1.25', m(8, 1.25), 6.647, 6.912],
+    ['M10x1.5', m(10, 1.5), 8.376, 8.676],
+    ['M12x1.75', m(12, 1.75), 10.106, 10.441],
+  ])('the drill for %s lies inside the 6H minor-diameter limits %f..%f mm (ISO 965-1, 6H D1 limits)', (_n, t, min, max) => {
     const d = tapDrill(t);
     expect(d).toBeGreaterThanOrEqual(min);
     expect(d).toBeLessThanOrEqual(max);
