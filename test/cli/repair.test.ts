@@ -89,7 +89,7 @@ describe('tapwright repair: JSON contract (SI)', () => {
     const code = await runCli(['repair', ...CAST_M8, '--solid-table', 't.json', '--json'], io);
     expect(code).toBe(0);
     const plan = JSON.parse(io.stdout()) as {options: Array<{kind: string; label: string}>};
-    expect(plan.options.filter(o => o.kind === 'solid-insert').map(o => o.label)).toEqual(['solid insert heavy-duty']);
+    expect(plan.options.filter(o => o.kind === 'solid-insert').map(o => o.label)).toEqual(['solid heavy-duty']);
   });
 });
 

@@ -52,17 +52,17 @@ function torque(nm: number | null, units: UnitSystem): string {
 
 function drill(mm: number | null, units: UnitSystem): string {
   if (mm === null) return '-';
-  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(4) : Number(mm.toFixed(2)).toString();
+  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(3) : Number(mm.toFixed(2)).toString();
 }
 
 function status(o: RepairOption): string {
   return !o.feasible ? 'no' : o.meetsMargin ? 'yes' : 'short';
 }
 
-/** Columns: rank 2, option 23, ok 5, strip 5, break 5, drill 6, tap 15, depth 5, torque 6 (79 wide with spaces). */
+/** Columns: rank 2, option 24, ok 5, strip 5, break 5, drill 5, tap 15, depth 5, torque 6 (80 wide with spaces). */
 function row(cells: string[]): string {
   const [rank = '', option = '', ok = '', strip = '', brk = '', dr = '', tap = '', depth = '', tq = ''] = cells;
-  return [right(rank, 2), fit(option, 23), fit(ok, 5), right(strip, 5), right(brk, 5), right(dr, 6), fit(tap, 15), right(depth, 5), right(tq, 6)].join(' ').trimEnd();
+  return [right(rank, 2), fit(option, 24), fit(ok, 5), right(strip, 5), right(brk, 5), right(dr, 5), fit(tap, 15), right(depth, 5), right(tq, 6)].join(' ').trimEnd();
 }
 
 function detail(o: RepairOption, units: UnitSystem): string {

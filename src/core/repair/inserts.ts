@@ -146,7 +146,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     return [infeasible(o, `no ${ctx.plain} entry in the solid insert table "${table.name}"`)];
   }
   return entries.map(e => {
-    const o = skeleton(ctx, 'solid-insert', `solid insert ${e.type}`);
+    const o = skeleton(ctx, 'solid-insert', `solid ${e.type}`);
     o.tapThread = e.external;
     const setDown = {min: e.setDown, max: e.setDown};
     if (table.provenance.kind === 'demo') o.notes.push(`insert sizes: ${DEMO_TABLE_WARNING}`);
