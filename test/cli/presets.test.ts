@@ -1,5 +1,5 @@
 /** `tapwright presets`, in-process with memoryIo and a fresh config folder per test. */
-import {describe, expect, it} from 'vitest';
+import {afterAll, describe, expect, it} from 'vitest';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -7,8 +7,14 @@ import {runCli} from '../../src/cli/main.js';
 import {memoryIo} from '../../src/cli/io.js';
 import {openPresetStore} from '../../src/store/presets.js';
 
+const made: string[] = [];
+afterAll(() => {
+  for (const d of made.splice(0)) fs.rmSync(d, {recursive: true, force: true});
+});
+
 function setup() {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'tapwright-cli-presets-'));
+  made.push(dir);
   const run = async (...args: string[]) => {
     const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: dir}, cwd: dir, now: () => new Date('2026-04-01T09:30:00Z')});
     const code = await runCli(['presets', ...args], io);

@@ -1,11 +1,20 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import {afterAll} from 'vitest';
 import type {SavablePreset} from '../../src/store/schema.js';
 
-/** A fresh config folder per test. */
+const made: string[] = [];
+// Registered in the root suite of each test file that imports this module.
+afterAll(() => {
+  for (const d of made.splice(0)) fs.rmSync(d, {recursive: true, force: true});
+});
+
+/** A fresh config folder per test, removed after the file's tests. */
 export function tempDir(label = 'store'): string {
-  return fs.mkdtempSync(path.join(os.tmpdir(), `tapwright-${label}-`));
+  const d = fs.mkdtempSync(path.join(os.tmpdir(), `tapwright-${label}-`));
+  made.push(d);
+  return d;
 }
 
 /** A small valid joint preset (invented test data). */
