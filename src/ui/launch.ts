@@ -128,7 +128,9 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   };
 
   stdout.write(ENTER_ALT);
-  const writer = createFrameWriter(stdout);
+  // TAPWRIGHT_FULL_REDRAW=1 hands Ink the terminal directly (full redraws), for a terminal that
+  // misdraws the cell-by-cell updates.
+  const writer = io.env.TAPWRIGHT_FULL_REDRAW === '1' ? stdout : createFrameWriter(stdout);
   const app = React.createElement(App, {
     initial,
     svc,

@@ -3,14 +3,13 @@ import React from 'react';
 import {App} from '../../src/ui/app.js';
 import {initialState, type WorkbenchState} from '../../src/ui/state/workbench.js';
 import {makeTheme} from '../../src/ui/theme.js';
-import type {WorkbenchServices} from '../../src/ui/services.js';
 import type {Draft} from '../../src/ui/services.js';
 import {renderAt} from './render-at.js';
 import {FIXTURE_VALUES, fixtureServices} from './fixture-services.js';
 import {waitFor} from './wait-for.js';
 
 export interface StartOptions {
-  svc?: WorkbenchServices;
+  svc?: ReturnType<typeof fixtureServices>;
   columns?: number;
   rows?: number;
   ascii?: boolean;

@@ -152,21 +152,41 @@ interface Bounds {
   default?: unknown;
 }
 
-type JsonProps = Record<string, {minimum?: number; maximum?: number; default?: unknown; properties?: Record<string, {minimum?: number; maximum?: number}>}>;
+interface ZodDefLike {
+  type: string;
+  innerType?: z.ZodType;
+  defaultValue?: unknown;
+  shape?: Record<string, z.ZodType>;
+  in?: z.ZodType;
+}
+
+/** Read min, max and default off a zod field, through optional/default wrappers. */
+function readBounds(schema: z.ZodType): Bounds {
+  const out: Bounds = {};
+  let cur: z.ZodType | undefined = schema;
+  for (let depth = 0; cur && depth < 6; depth++) {
+    const def: ZodDefLike = (cur as unknown as {def: ZodDefLike}).def;
+    if (def.type === 'default' && out.default === undefined) out.default = typeof def.defaultValue === 'function' ? (def.defaultValue as () => unknown)() : def.defaultValue;
+    if (def.type === 'number') {
+      const n = cur as unknown as {minValue: number | null; maxValue: number | null};
+      if (n.minValue !== null && Number.isFinite(n.minValue)) out.min = n.minValue;
+      if (n.maxValue !== null && Number.isFinite(n.maxValue)) out.max = n.maxValue;
+      return out;
+    }
+    if (def.type === 'object' && def.shape?.min) return {...readBounds(def.shape.min), default: out.default};
+    cur = def.innerType ?? def.in;
+  }
+  return out;
+}
+
 let boundsCache: Map<string, Bounds> | undefined;
 
 /** Accepted range and default of a field in working units, read from the zod schema. */
 export function fieldBounds(id: string): Bounds {
   if (!boundsCache) {
     boundsCache = new Map();
-    const add = (prefix: string, props: JsonProps) => {
-      for (const [k, p] of Object.entries(props)) {
-        const inner = p.properties?.min ?? p;
-        boundsCache!.set(prefix + k, {min: inner.minimum, max: inner.maximum, default: p.default});
-      }
-    };
-    add('', (z.toJSONSchema(JointInputSchema, {io: 'input'}) as {properties: JsonProps}).properties);
-    add('hole.', (z.toJSONSchema(RepairInputSchema, {io: 'input'}) as {properties: JsonProps}).properties);
+    for (const [k, v] of Object.entries(JointInputSchema.shape)) boundsCache.set(k, readBounds(v as z.ZodType));
+    for (const [k, v] of Object.entries(RepairInputSchema.shape)) boundsCache.set(`hole.${k}`, readBounds(v as z.ZodType));
   }
   return boundsCache.get(id) ?? {};
 }

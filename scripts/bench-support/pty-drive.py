@@ -1,0 +1,79 @@
+# Drive a program in a pseudo-terminal of a given size and time what it writes.
+# Used by scripts/bench.mjs (node-pty is not a dependency; Python's pty module is
+# in every CPython). Input: one JSON argument
+#   {"argv": [...], "env": {...}, "cols": 80, "rows": 24, "steps": [{"send": "...", "digit": bool}],
+#    "ready": "text that marks the first full frame", "gap": seconds between keys}
+# Output: one JSON document on stdout with the timings (seconds) and byte counts.
+import json, os, pty, select, struct, sys, termios, fcntl, time
+
+cfg = json.loads(sys.argv[1])
+ESU = b"\x1b[?2026l"
+t0 = time.monotonic()
+pid, fd = pty.fork()
+if pid == 0:
+    fcntl.ioctl(0, termios.TIOCSWINSZ, struct.pack("HHHH", cfg["rows"], cfg["cols"], 0, 0))
+    env = dict(os.environ)
+    env.update(cfg["env"])
+    for k in cfg.get("unset", []):
+        env.pop(k, None)
+    os.execvpe(cfg["argv"][0], cfg["argv"], env)
+
+buf = bytearray()
+
+def read_for(seconds, until=None):
+    """Read until `seconds` pass or until(buf_since) is true; returns (bytes, time of match)."""
+    start = len(buf)
+    end = time.monotonic() + seconds
+    while True:
+        left = end - time.monotonic()
+        if left <= 0:
+            return bytes(buf[start:]), None
+        r, _, _ = select.select([fd], [], [], left)
+        if not r:
+            continue
+        try:
+            chunk = os.read(fd, 65536)
+        except OSError:
+            return bytes(buf[start:]), None
+        if not chunk:
+            return bytes(buf[start:]), None
+        buf.extend(chunk)
+        if until is not None and until(bytes(buf[start:])):
+            return bytes(buf[start:]), time.monotonic()
+
+ready = cfg["ready"].encode()
+_, t_ready = read_for(20, lambda b: ready in b and b.rstrip().endswith(ESU))
+first_frame = (t_ready - t0) if t_ready else None
+read_for(0.3)  # let the start settle (resize handling, second frame)
+
+results = []
+for step in cfg["steps"]:
+    data = step["send"].encode()
+    start = len(buf)
+    t_send = time.monotonic()
+    os.write(fd, data)
+    _, t_done = read_for(2, lambda b: ESU in b)
+    read_for(cfg.get("gap", 0.12))  # until quiet: every byte this key caused
+    results.append({"digit": step.get("digit", False), "latency": (t_done - t_send) if t_done else None, "bytes": len(buf) - start})
+
+def status():
+    out = {}
+    try:
+        with open(f"/proc/{pid}/status") as f:
+            for line in f:
+                if line.startswith(("VmRSS:", "VmHWM:")):
+                    k, v = line.split(":", 1)
+                    out[k] = int(v.split()[0]) * 1024
+    except OSError:
+        pass
+    return out
+
+mem = status()
+os.write(fd, b"\x03")
+read_for(3, lambda b: False)
+try:
+    _, st = os.waitpid(pid, 0)
+    code = os.waitstatus_to_exitcode(st)
+except ChildProcessError:
+    code = None
+print(json.dumps({"firstFrame": first_frame, "steps": results, "total": len(buf), "mem": mem, "exitCode": code}))

@@ -1,0 +1,115 @@
+// npm run bench: the workbench's speed and size figures, measured on this machine.
+//   cold start to the first full frame, as a ratio to bare `node -e ''` timed in the same run
+//   keystroke to updated frame (median and p95), also as a ratio to bare node
+//   bytes written to the terminal per digit typed at 80x24 (cell-diff writer, and full redraws)
+//   resident memory of the running workbench
+// The app is the one-file build (dist/tapwright.mjs), built into a temporary folder, and the
+// split build through bin/tapwright.js when dist/ exists. It runs in a real pseudo-terminal
+// (Python's pty module; node-pty is not a dependency).
+import {execFileSync, spawnSync} from 'node:child_process';
+import {mkdtempSync, rmSync, existsSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import path from 'node:path';
+import {fileURLToPath} from 'node:url';
+
+const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
+const work = mkdtempSync(path.join(tmpdir(), 'tw-bench-'));
+const RUNS = Number(process.env.BENCH_RUNS) || 5;
+const TARGET = {start: 3, keyMs: 16, bytes: 300, rssMb: 90};
+
+const median = xs => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length ? s[Math.floor((s.length - 1) / 2)] : NaN;
+};
+const pct = (xs, p) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)];
+};
+const ms = s => `${(s * 1000).toFixed(1)} ms`;
+
+if (spawnSync('python3', ['-c', 'import pty']).status !== 0) {
+  console.error('bench: python3 with the pty module is needed to drive a pseudo-terminal; not found.');
+  process.exit(2);
+}
+
+console.log('Building the one-file app into a temporary folder...');
+execFileSync(process.execPath, [path.join(root, 'scripts/build.mjs'), '--out', path.join(work, 'dist')], {stdio: 'inherit'});
+const oneFile = path.join(work, 'dist', 'tapwright.mjs');
+
+function bareNode() {
+  const t = [];
+  for (let i = 0; i < RUNS * 2; i++) {
+    const s = process.hrtime.bigint();
+    spawnSync(process.execPath, ['-e', '']);
+    t.push(Number(process.hrtime.bigint() - s) / 1e9);
+  }
+  return median(t);
+}
+
+const RIGHT = '\u001B[C';
+const ESC = '\u001B';
+/** Go to the Engagement step, then type values digit by digit (Esc between values). */
+function typingSteps(rounds) {
+  const steps = [{send: RIGHT}, {send: RIGHT}];
+  const values = ['12.5', '16', '20.5', '9.5', '14'];
+  for (let r = 0; r < rounds; r++) {
+    for (const ch of values[r % values.length]) steps.push({send: ch, digit: /\d/.test(ch)});
+    steps.push({send: ESC});
+  }
+  return steps;
+}
+
+function drive(argv, extraEnv, steps, label) {
+  const cfg = {
+    argv,
+    env: {TAPWRIGHT_CONFIG_DIR: path.join(work, `cfg-${label}`), LANG: 'C.UTF-8', TERM: 'xterm-256color', ...extraEnv},
+    unset: ['CI', 'CONTINUOUS_INTEGRATION', 'NO_COLOR', 'FORCE_COLOR'],
+    cols: 80,
+    rows: 24,
+    ready: 'quit',
+    steps,
+    gap: 0.12,
+  };
+  const r = spawnSync('python3', [path.join(root, 'scripts/bench-support/pty-drive.py'), JSON.stringify(cfg)], {encoding: 'utf8', maxBuffer: 1 << 24});
+  if (r.status !== 0) throw new Error(`pty driver failed: ${r.stderr}`);
+  return JSON.parse(r.stdout);
+}
+
+const bare = bareNode();
+console.log(`\nbare node -e '' (median of ${RUNS * 2}): ${ms(bare)}`);
+
+const report = [];
+const apps = [['one-file build', [process.execPath, oneFile]]];
+if (existsSync(path.join(root, 'dist', 'lib', 'entry.js'))) apps.push(['bin/tapwright.js (split build in dist/)', [process.execPath, path.join(root, 'bin', 'tapwright.js')]]);
+
+for (const [label, argv] of apps) {
+  const starts = [];
+  for (let i = 0; i < RUNS; i++) {
+    const r = drive(argv, {}, [], `start${i}`);
+    if (r.firstFrame) starts.push(r.firstFrame);
+  }
+  const start = median(starts);
+  report.push({label: `cold start to first full frame, ${label}`, value: `${ms(start)} = ${(start / bare).toFixed(2)}x bare node`, ok: start / bare <= TARGET.start, target: `<= ${TARGET.start}x`});
+}
+
+const typed = drive([process.execPath, oneFile], {}, typingSteps(8), 'typing');
+const digits = typed.steps.filter(s => s.digit);
+const lat = digits.map(s => s.latency).filter(x => x !== null);
+const bytes = digits.map(s => s.bytes);
+const keyMed = median(lat);
+report.push({label: 'keystroke to updated frame, median', value: `${ms(keyMed)} = ${(keyMed / bare).toFixed(3)}x bare node (p95 ${ms(pct(lat, 95))}, ${lat.length} digits)`, ok: keyMed * 1000 <= TARGET.keyMs, target: `<= ${TARGET.keyMs} ms`});
+const bMed = median(bytes);
+report.push({label: 'bytes written per digit typed, 80x24', value: `median ${bMed} B, mean ${Math.round(bytes.reduce((a, b) => a + b, 0) / bytes.length)} B, max ${Math.max(...bytes)} B`, ok: bMed <= TARGET.bytes, target: `<= ${TARGET.bytes} B`});
+const rss = typed.mem.VmRSS ?? NaN;
+const hwm = typed.mem.VmHWM ?? NaN;
+report.push({label: 'resident memory after typing', value: `${(rss / 2 ** 20).toFixed(1)} MB (peak ${(hwm / 2 ** 20).toFixed(1)} MB)`, ok: hwm / 2 ** 20 <= TARGET.rssMb, target: `<= ${TARGET.rssMb} MB`});
+
+const full = drive([process.execPath, oneFile], {TAPWRIGHT_FULL_REDRAW: '1'}, typingSteps(3), 'full');
+const fullBytes = full.steps.filter(s => s.digit).map(s => s.bytes);
+report.push({label: 'for comparison: bytes per digit with Ink full redraws', value: `median ${median(fullBytes)} B`, ok: true, target: '(reference)'});
+
+console.log('');
+const w = Math.max(...report.map(r => r.label.length));
+for (const r of report) console.log(`${r.ok ? 'ok  ' : 'OVER'} ${r.label.padEnd(w)}  ${r.value}  [target ${r.target}]`);
+console.log(`\nexit code of the workbench after Ctrl-C: ${typed.exitCode} (130 = interrupted, terminal restored)`);
+rmSync(work, {recursive: true, force: true});
