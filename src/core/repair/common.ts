@@ -66,6 +66,7 @@ export function skeleton(ctx: PlanContext, kind: RepairKind, label: string): Rep
     tappedDepth: null,
     drilledDepth: null,
     engagement: null,
+    requiredEngagement: null,
     boltThread: ctx.plain,
     screwLengthChange: 0,
     torque: null,

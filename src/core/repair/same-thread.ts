@@ -35,6 +35,7 @@ export function reuseOption(ctx: PlanContext): RepairOption {
   if (!c.ok) return infeasible(o, `not computed: ${c.error}`);
   applyResult(o, c.result);
   o.margin = {stripping: c.result.margin.stripping, boltBreaksFirst: c.result.margin.boltBreaksFirst};
+  o.requiredEngagement = {fedStd: c.result.stripping.requiredEngagement.fedStd, alexander: c.result.stripping.requiredEngagement.alexander};
   if (ctx.stripped) o.notes.push(`the first ${ctx.goodStart.toFixed(1)} mm carry nothing: stripped zone plus one pitch cleaned up (common practice, no source)`);
   return judge(ctx, o);
 }
@@ -82,6 +83,9 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
   if (!found.check.ok) return infeasible(o, `not computed: ${found.check.error}`);
   applyResult(o, found.check.result);
   o.margin = {stripping: found.check.result.margin.stripping, boltBreaksFirst: found.check.result.margin.boltBreaksFirst};
+  const req = found.check.result.stripping.requiredEngagement;
+  o.requiredEngagement = {fedStd: req.fedStd, alexander: req.alexander};
+  o.notes.push(`full thread needed for the bolt to break first: ${req.fedStd.toFixed(1)} mm by FED-STD-H28/2B, ${req.alexander.toFixed(1)} mm by Alexander / VDI 2230; the larger, times the margin ${ctx.required}, is used`);
   o.screwLengthChange = newReach - ctx.reach;
   o.changeSize = newReach - ctx.reach;
   o.notes.push(`screw reach ${newReach.toFixed(1)} mm below the surface (${o.screwLengthChange.toFixed(1)} mm more than now)`);

@@ -53,6 +53,12 @@ export interface RepairOption {
   drilledDepth: number | null;
   /** Fully formed engaged length the option gives, mm. */
   engagement: number | null;
+  /**
+   * Full-thread engagement each method requires so the bolt breaks first (margin 1), mm:
+   * FED-STD-H28/2B Formula 1 with J, and Alexander / VDI 2230 (from the mechanics core).
+   * Set for the options that keep the thread; null otherwise.
+   */
+  requiredEngagement: {fedStd: number; alexander: number} | null;
   /** Screw (bolt) after the repair, designation. */
   boltThread: string;
   /** How much longer the screw must be, mm (0: same screw length). */

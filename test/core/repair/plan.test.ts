@@ -50,6 +50,16 @@ describe('repair plan: options and reasons', () => {
     expect(coil?.drill).toBeCloseTo(10.4, 6);
   });
 
+  it('longer engagement gives the engagement each method requires and at least the larger of them times the margin', () => {
+    const plan = planRepairs(base, {margin: 1.2});
+    const le = byKind(plan.options, 'longer-engagement')[0];
+    const req = le?.requiredEngagement;
+    expect(req?.fedStd).toBeGreaterThan(0);
+    expect(req?.alexander).toBeGreaterThan(0);
+    expect(le?.engagement ?? 0).toBeGreaterThanOrEqual(Math.max(req?.fedStd ?? 0, req?.alexander ?? 0) * 1.2 - 1e-9);
+    expect(le?.meetsMargin).toBe(true);
+  });
+
   it('a stripped hole with no good thread left cannot be re-used', () => {
     const plan = planRepairs(base, {holeState: 'stripped', strippedDepth: 12});
     const reuse = byKind(plan.options, 'reuse')[0];

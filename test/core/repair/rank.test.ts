@@ -24,6 +24,7 @@ const optionArb: fc.Arbitrary<RepairOption> = fc
     tappedDepth: null,
     drilledDepth: null,
     engagement: null,
+    requiredEngagement: null,
     boltThread: 'M10x1.5',
     screwLengthChange: 0,
     torque: null,
