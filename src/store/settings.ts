@@ -3,7 +3,8 @@
  * cwd, so no "-nodejs" suffix). zod checks every field on read; a broken file
  * never throws: it is moved aside and defaults are used, with a warning.
  * conf's own schema, migrations and clearInvalidConfig are not used (they
- * throw or wipe the file; see the terminal notes).
+ * throw or wipe the file; see the terminal notes). Changes are made under
+ * an O_EXCL lock (settings.json.lock), as for the presets.
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -11,7 +12,7 @@ import Conf from 'conf';
 import {z} from 'zod';
 import {StoreError} from './errors.js';
 import {FILES, fileStamp} from './paths.js';
-import {describeFsError} from './file-ops.js';
+import {describeFsError, withLock} from './file-ops.js';
 import {describeZodError} from './schema.js';
 
 export const SettingsSchema = z.object({
@@ -124,13 +125,18 @@ export function openSettings(dir: string): SettingsHandle {
         }
         return;
       }
+      const c = conf;
       try {
-        raw(); // moves a file broken since start-up aside before conf reads it again
-        for (const k of keys) {
-          if (patch[k] === undefined) conf.delete(k);
-        }
-        const defined = Object.fromEntries(keys.filter(k => patch[k] !== undefined).map(k => [k, patch[k]]));
-        if (Object.keys(defined).length) conf.set(defined);
+        // conf re-reads the file in set(); the lock closes the gap between that read and its
+        // rename, so two sessions changing different settings both keep theirs.
+        withLock(`${file}.lock`, () => {
+          raw(); // moves a file broken since start-up aside before conf reads it again
+          for (const k of keys) {
+            if (patch[k] === undefined) c.delete(k);
+          }
+          const defined = Object.fromEntries(keys.filter(k => patch[k] !== undefined).map(k => [k, patch[k]]));
+          if (Object.keys(defined).length) c.set(defined);
+        }, {timeoutMs: 3000});
       } catch (e) {
         memory = {...raw(), ...patch};
         warn(`cannot save settings to ${file} (${describeFsError(e)}); the change holds for this session only`);

@@ -10,11 +10,12 @@ import {fileURLToPath} from 'node:url';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
-export async function bundleStore(): Promise<{file: string; cleanup: () => void}> {
+/** Bundle src/store/<module>.ts (default: presets, the smallest bundle for the many-process tests). */
+export async function bundleStore(module = 'presets'): Promise<{file: string; cleanup: () => void}> {
   const out = fs.mkdtempSync(path.join(os.tmpdir(), 'tapwright-bundle-'));
-  const file = path.join(out, 'store.mjs');
+  const file = path.join(out, `${module}.mjs`);
   await build({
-    entryPoints: [path.join(root, 'src/store/presets.ts')],
+    entryPoints: [path.join(root, `src/store/${module}.ts`)],
     outfile: file,
     bundle: true,
     minify: true,

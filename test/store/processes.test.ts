@@ -62,6 +62,29 @@ describe('concurrent processes', () => {
   }, 60_000); // no timing assertion (speed is measured by npm run bench); a loaded 2-core machine needs the room
 });
 
+describe('settings from several processes', () => {
+  it('4 processes changing different settings at once each keep theirs', async () => {
+    const settingsBundle = await bundleStore('settings');
+    try {
+      const dir = tempDir('settings-procs');
+      const startAt = Date.now() + 800;
+      const fields = ['units', 'ascii', 'lastPreset', 'scatterDefault'];
+      const runs = fields.map(f => {
+        const child = spawn(process.execPath, [WORKER, settingsBundle.file, dir, 'setting', f, String(startAt), '60'], {stdio: ['ignore', 'pipe', 'pipe']});
+        let err = '';
+        child.stderr.on('data', d => (err += d));
+        return new Promise<{code: number | null; err: string}>(resolve => child.on('close', code => resolve({code, err})));
+      });
+      const results = await Promise.all(runs);
+      for (const r of results) expect(r.err, r.err).toBe('');
+      const {openSettings} = await import('../../src/store/settings.js');
+      expect(openSettings(dir).get()).toEqual({units: 'us', ascii: true, lastPreset: 'p-b', scatterDefault: 1.6});
+    } finally {
+      settingsBundle.cleanup();
+    }
+  }, 60_000);
+});
+
 describe('kill -9 during a save', () => {
   for (const mode of ['hang-rename', 'hang-write'] as const) {
     it(`${mode}: the old store stays readable, the lock is recovered, the next save works`, async () => {
