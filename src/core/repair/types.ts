@@ -58,7 +58,7 @@ export interface RepairOption {
    * FED-STD-H28/2B Formula 1 with J, and Alexander / VDI 2230 (from the mechanics core).
    * Set for the options that keep the thread; null otherwise.
    */
-  requiredEngagement: {fedStd: number; alexander: number} | null;
+  requiredEngagement?: {fedStd: number; alexander: number} | null;
   /** Screw (bolt) after the repair, designation. */
   boltThread: string;
   /** How much longer the screw must be, mm (0: same screw length). */
