@@ -151,7 +151,7 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}): Wor
 function option(o: Partial<RepairOption> & Pick<RepairOption, 'kind' | 'label' | 'rank' | 'feasible' | 'meetsMargin'>): RepairOption {
   return {
     reason: null, margin: {stripping: null, boltBreaksFirst: null}, drill: null, tapThread: null, holeDepth: null, tappedDepth: null,
-    drilledDepth: null, engagement: null, boltThread: 'M10x1.5', screwLengthChange: null, torque: null, preload: null,
+    drilledDepth: null, engagement: null, requiredEngagement: null, boltThread: 'M10x1.5', screwLengthChange: null, torque: null, preload: null,
     effort: {grade: 1, name: 'chase', text: 'fixture effort'}, strength: null, insert: null, changeSize: 0, flags: [], notes: [], ...o,
   };
 }

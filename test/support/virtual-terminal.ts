@@ -52,6 +52,12 @@ export class VirtualTerminal {
         case 'B':
           this.row = Math.min(this.rows - 1, this.row + n);
           break;
+        case 'C':
+          this.col = Math.min(this.columns - 1, this.col + n);
+          break;
+        case 'X':
+          this.eraseLine(this.col, Math.min(this.columns, this.col + n));
+          break;
         case 'G':
           this.col = (params[0] ?? 1) - 1;
           break;

@@ -53,6 +53,18 @@ describe('frame writer', () => {
     expect(term.text()).toBe(b.join('\n'));
   });
 
+  it('erases blank stretches instead of writing spaces, and keeps text after them', () => {
+    const a = ['left side text here            right 1'];
+    const b = ['                                right 2'];
+    const bytes = diffFrames(a, b);
+    expect(bytes).toContain('X');
+    expect(bytes.length).toBeLessThan(30);
+    const term = new VirtualTerminal();
+    term.write(`\u001B[H${a[0]}`);
+    term.write(bytes);
+    expect(term.text()).toBe(b[0]);
+  });
+
   it('rewrites a whole line when it holds a character of uncertain width', () => {
     expect(toCells('abc')).toHaveLength(3);
     expect(toCells('a\u4e2d')).toBeUndefined();

@@ -13,6 +13,7 @@ import type {Evaluation} from '../state/evaluate.js';
 import type {WorkbenchServices} from '../services.js';
 import {useTheme, fit, pad, wrap, type Theme} from '../theme.js';
 import {loadShareLines} from '../components/pictures.js';
+import {Lines, type Line} from '../components/lines.js';
 import {Readout} from './readout.js';
 
 interface Props {
@@ -51,35 +52,24 @@ function fieldValueText(state: WorkbenchState, f: FieldDef, t: Theme): string {
   return formatField(f, v, state.units, t.ascii);
 }
 
-function FieldRows({state, ev, width}: {state: WorkbenchState; ev: Evaluation; width: number}) {
-  const t = useTheme();
-  const fields = currentFields(state);
+function fieldLines(state: WorkbenchState, ev: Evaluation, width: number, t: Theme): Line[] {
   const sel = currentField(state);
   const labelW = 18;
-  return (
-    <>
-      {fields.map(f => {
-        const isSel = f === sel;
-        const err = ev.errors[f.id] ?? (state.edit?.fieldId === f.id ? state.edit.error : undefined);
-        const unit = f.kind === 'quantity' && state.edit?.fieldId === f.id ? ` ${fieldUnit(f, state.units, t.ascii)}` : '';
-        const mark = err ? '!' : isSel ? t.sym.select : ' ';
-        const value = fit(fieldValueText(state, f, t) + unit, width - labelW - 2, t.sym.ellipsis);
-        return (
-          <Box key={f.id} width={width}>
-            <Text color={err ? t.tone('fail') : undefined} bold={isSel}>{`${mark} `}</Text>
-            <Text bold={isSel}>{pad(f.label, labelW - 1)} </Text>
-            <Text inverse={isSel && !state.edit && !state.picker} color={err ? t.tone('fail') : undefined}>
-              {value}
-            </Text>
-          </Box>
-        );
-      })}
-    </>
-  );
+  return currentFields(state).map(f => {
+    const isSel = f === sel;
+    const err = ev.errors[f.id] ?? (state.edit?.fieldId === f.id ? state.edit.error : undefined);
+    const unit = f.kind === 'quantity' && state.edit?.fieldId === f.id ? ` ${fieldUnit(f, state.units, t.ascii)}` : '';
+    const mark = err ? '!' : isSel ? t.sym.select : ' ';
+    const value = fit(fieldValueText(state, f, t) + unit, width - labelW - 2, t.sym.ellipsis);
+    return [
+      {text: `${mark} `, color: err ? t.tone('fail') : undefined, bold: isSel},
+      {text: `${pad(f.label, labelW - 1)} `, bold: isSel},
+      {text: value, inverse: isSel && !state.edit && !state.picker, color: err ? t.tone('fail') : undefined},
+    ];
+  });
 }
 
-function PickerList({state, svc, width, height}: {state: WorkbenchState; svc: WorkbenchServices; width: number; height: number}) {
-  const t = useTheme();
+function pickerLines(state: WorkbenchState, svc: WorkbenchServices, width: number, height: number, t: Theme): Line[] {
   const p = state.picker!;
   const items = pickerItems(state, svc);
   const isThread = p.fieldId === 'thread';
@@ -94,30 +84,19 @@ function PickerList({state, svc, width, height}: {state: WorkbenchState; svc: Wo
         ? `No match for "${p.filter}": Enter takes it as typed`
         : `Matches (${t.ascii ? 'Up/Down' : '↑↓'} mark, Enter takes)`
     : `Filter: ${p.filter || '(type to narrow)'}  ${items.length} found`;
-  return (
-    <Box flexDirection="column" width={width} height={height}>
-      <Text color={t.tone('dim')}>{fit(header, width, t.sym.ellipsis)}</Text>
-      {items.slice(start, start + listRows).map((it, i) => {
-        const isMarked = start + i === p.index;
-        return (
-          <Text key={it.value} inverse={isMarked}>
-            {pad(`${isMarked ? t.sym.select : ' '} ${it.label}`, width)}
-          </Text>
-        );
-      })}
-      {sourceLines.map((l, i) => (
-        <Text key={`s${i}`} color={t.tone('info')}>
-          {l}
-        </Text>
-      ))}
-    </Box>
-  );
+  return [
+    {text: fit(header, width, t.sym.ellipsis), color: t.tone('dim')},
+    ...items.slice(start, start + listRows).map((it, i): Line => {
+      const isMarked = start + i === p.index;
+      return {text: pad(`${isMarked ? t.sym.select : ' '} ${it.label}`, width), inverse: isMarked};
+    }),
+    ...sourceLines.map((text): Line => ({text, color: t.tone('info')})),
+  ];
 }
 
-function ThreadInfo({ev, state, width, height}: {ev: Evaluation; state: WorkbenchState; width: number; height: number}) {
-  const t = useTheme();
+function threadInfoLines(ev: Evaluation, state: WorkbenchState, width: number, height: number, t: Theme): Line[] {
   const g = ev.result?.geometry;
-  if (!g || height <= 0) return null;
+  if (!g || height <= 0) return [];
   const L = (v: number) => formatQuantity(v, 'length', state.units, {ascii: t.ascii, significant: 4});
   const a = (v: number) => (state.units === 'si' ? `${v.toFixed(1)} mm²` : `${(v / 645.16).toFixed(4)} in²`).replace('²', t.ascii ? '^2' : '²');
   const lines = [
@@ -129,104 +108,54 @@ function ThreadInfo({ev, state, width, height}: {ev: Evaluation; state: Workbenc
     `limits: ${g.limitsProvenance.method === 'table' ? 'table' : 'formulas'}, ${g.limitsProvenance.source}`,
     ...g.notes,
   ];
-  const wrapped = lines.flatMap((l, i) => wrap(l, width, 3, t.sym.ellipsis).map((w, j) => ({text: j ? `  ${w}` : w, first: i === 0})));
-  return (
-    <Box flexDirection="column" width={width}>
-      {wrapped.slice(0, height).map((l, i) => (
-        <Text key={i} color={l.first ? undefined : t.tone('dim')}>
-          {fit(l.text, width, t.sym.ellipsis)}
-        </Text>
-      ))}
-    </Box>
-  );
+  return lines
+    .flatMap((l, i) => wrap(l, width - 2, 3, t.sym.ellipsis).map((w, j): Line => ({text: j ? `  ${w}` : w, color: i === 0 ? undefined : t.tone('dim')})))
+    .slice(0, height);
 }
 
 function LeftColumn({state, ev, svc, width, height}: Props) {
   const t = useTheme();
-  const fields = currentFields(state);
+  const fields = fieldLines(state, ev, width, t);
   const sel = currentField(state);
   const rest = height - fields.length;
-  if (state.picker) {
-    return (
-      <Box flexDirection="column" width={width} height={height}>
-        <FieldRows state={state} ev={ev} width={width} />
-        <PickerList state={state} svc={svc} width={width} height={rest} />
-      </Box>
-    );
-  }
-  const helpLines = sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : [];
+  if (state.picker) return <Lines lines={[...fields, ...pickerLines(state, svc, width, rest, t)]} width={width} height={height} />;
+  const helpLines: Line[] = (sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : []).map(text => ({text, color: t.tone('dim')}));
   const below = rest - helpLines.length - 1;
   const shares = ev.result?.loadShare ?? [];
-  const isThreadStep = STEPS[state.step]?.id === 'thread';
-  return (
-    <Box flexDirection="column" width={width} height={height}>
-      <FieldRows state={state} ev={ev} width={width} />
-      {helpLines.map((l, i) => (
-        <Text key={`h${i}`} color={t.tone('dim')}>
-          {l}
-        </Text>
-      ))}
-      {isThreadStep ? (
-        <ThreadInfo ev={ev} state={state} width={width} height={below + 1} />
-      ) : below >= 2 && shares.length > 0 ? (
-        <Box flexDirection="column" marginTop={1}>
-          <Text bold>{fit('Load share/thread, 1 = loaded face', width, t.sym.ellipsis)}</Text>
-          {loadShareLines(shares, width, below - 1, t).map((l, i) => (
-            <Text key={`l${i}`}>{l}</Text>
-          ))}
-        </Box>
-      ) : null}
-    </Box>
-  );
+  let extra: Line[] = [];
+  if (STEPS[state.step]?.id === 'thread') extra = threadInfoLines(ev, state, width, below + 1, t);
+  else if (below >= 2 && shares.length > 0) {
+    extra = ['', {text: fit('Load share/thread, 1 = loaded face', width, t.sym.ellipsis), bold: true}, ...loadShareLines(shares, width, below - 1, t)];
+  }
+  return <Lines lines={[...fields, ...helpLines, ...extra]} width={width} height={height} />;
 }
+
+const levelTone = (t: Theme, level: Flag['level']) => (level === 'fail' ? t.tone('fail') : level === 'watch' ? t.tone('watch') : undefined);
 
 function FlagsPanel({flags, width, height}: {flags: Flag[]; width: number; height: number}) {
   const t = useTheme();
-  const lines: {text: string; tone?: Flag['level']}[] = [];
+  const lines: Line[] = [{text: `All flags (${flags.length}); f back to results`, bold: true}];
+  if (flags.length === 0) lines.push('No flags: nothing to watch in this joint.');
   for (const f of sortedFlags(flags)) {
-    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width - 2, 5, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, tone: f.level}));
+    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width - 2, 5, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, color: levelTone(t, f.level)}));
   }
-  return (
-    <Box flexDirection="column" width={width} height={height}>
-      <Text bold>{`All flags (${flags.length}); f back to results`}</Text>
-      {flags.length === 0 ? <Text>No flags: nothing to watch in this joint.</Text> : null}
-      {lines.slice(0, height - 1).map((l, i) => (
-        <Text key={i} color={l.tone === 'fail' ? t.tone('fail') : l.tone === 'watch' ? t.tone('watch') : undefined}>
-          {l.text}
-        </Text>
-      ))}
-    </Box>
-  );
+  return <Lines lines={lines} width={width} height={height} />;
 }
 
-function FlagSummary({ev, width, lines}: {ev: Evaluation; width: number; lines: number}) {
+function FlagSummary({ev, width, lines: rows}: {ev: Evaluation; width: number; lines: number}) {
   const t = useTheme();
   const flags = sortedFlags(ev.result?.flags ?? []);
-  if (!ev.result) return <Box height={lines} />;
-  if (flags.length === 0) {
-    return (
-      <Box height={lines} flexDirection="column">
-        <Text color={t.tone('ok')}>{fit('OK  no flags raised for this joint', width, t.sym.ellipsis)}</Text>
-      </Box>
-    );
-  }
-  const shown = flags.slice(0, lines);
+  if (!ev.result) return <Box height={rows} />;
+  if (flags.length === 0) return <Lines lines={[{text: fit('OK  no flags raised for this joint', width, t.sym.ellipsis), color: t.tone('ok')}]} width={width} height={rows} />;
+  const shown = flags.slice(0, rows);
   const more = flags.length - shown.length;
-  return (
-    <Box height={lines} flexDirection="column">
-      {shown.map((f, i) => {
-        const full = `${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`;
-        const last = i === shown.length - 1;
-        const suffix = last && more > 0 ? ` (+${more}, f: all)` : Array.from(full).length > width ? ' (f)' : '';
-        const text = fit(full, width - suffix.length, t.sym.ellipsis) + suffix;
-        return (
-          <Text key={f.code + i} color={f.level === 'fail' ? t.tone('fail') : f.level === 'watch' ? t.tone('watch') : undefined} bold={f.level === 'fail'}>
-            {text}
-          </Text>
-        );
-      })}
-    </Box>
-  );
+  const lines = shown.map((f, i): Line => {
+    const full = `${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`;
+    const last = i === shown.length - 1;
+    const suffix = last && more > 0 ? ` (+${more}, f: all)` : Array.from(full).length > width ? ' (f)' : '';
+    return {text: fit(full, width - suffix.length, t.sym.ellipsis) + suffix, color: levelTone(t, f.level), bold: f.level === 'fail'};
+  });
+  return <Lines lines={lines} width={width} height={rows} />;
 }
 
 export function JointScreen(props: Props) {

@@ -3,7 +3,7 @@
  * with its unit, plus the margin gauge and the engagement scale.
  */
 import React from 'react';
-import {Box, Text} from 'ink';
+import {Lines, type Line} from '../components/lines.js';
 import type {CheckResult} from '../../core/joint/result.js';
 import type {JointInput} from '../../core/joint/input.js';
 import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../core/units.js';
@@ -28,19 +28,11 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const n = (v: number) => formatNumber(v, 3);
   const ns = (v: number) => formatNumber(toDisplay(v, 'stress', units), 3);
   if (!result || !input) {
-    return (
-      <Box flexDirection="column" width={width} height={height}>
-        <Text bold>Results</Text>
-        {wrap(`! ${problem ?? 'No result yet.'}`, width, Math.max(1, height - 4), t.sym.ellipsis).map((l, i) => (
-          <Text key={i} color={t.tone('fail')}>
-            {l}
-          </Text>
-        ))}
-        {wrap('The results come back as soon as the inputs are valid.', width, 2, t.sym.ellipsis).map((l, i) => (
-          <Text key={`w${i}`}>{l}</Text>
-        ))}
-      </Box>
-    );
+    const lines: Line[] = [
+      ...wrap(`! ${problem ?? 'No result yet.'}`, width, Math.max(1, height - 3), t.sym.ellipsis).map(text => ({text, color: t.tone('fail')})),
+      ...wrap('The results come back as soon as the inputs are valid.', width, 2, t.sym.ellipsis),
+    ];
+    return <Lines lines={lines} width={width} height={height} />;
   }
   const {tightening: tg, stress, stripping: st, margin} = result;
   const ft = stress.firstThread;
@@ -59,17 +51,13 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     t,
   );
   const hole = input.internal === 'nut' ? 'nut' : 'hole';
-  const row = (key: string, label: string, text: string, color?: string) => (
-    <Text key={key} color={color}>
-      {fit(`${L(label)}${text}`, width, t.sym.ellipsis)}
-    </Text>
-  );
-  const lines: React.ReactNode[] = [
+  const row = (_key: string, label: string, text: string, color?: string): Line => ({text: fit(`${L(label)}${text}`, width, t.sym.ellipsis), color});
+  const lines: Line[] = [
     row('p', 'Preload', `${q(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')}, nom. ${q(tg.preload.nominal, 'force')}`),
     row('t', 'Torque', `${q(tg.torque, 'torque')} = ${n(tg.utilisation)} of Rp0.2`),
     row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')}`),
     row('y', '', `/yield: bolt ${n(margin.firstThreadYieldBolt)}, ${input.internal === 'nut' ? 'nut' : 'part'} ${n(margin.firstThreadYieldInternal)}`),
-    <Text key="c">{fit(` ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis)}</Text>,
+    fit(` ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
     row('w', '', `${weakerName} weaker; ${st.limitsUsed} limits`, stripFail ? t.tone('fail') : undefined),
@@ -80,9 +68,5 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('r', 'Needed', `F ${q(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${q(st.requiredEngagement.alexander, 'length')} Alex.`),
     row('sc', '', scale),
   ];
-  return (
-    <Box flexDirection="column" width={width} height={height}>
-      {lines.slice(0, height)}
-    </Box>
-  );
+  return <Lines lines={lines} width={width} height={height} />;
 }

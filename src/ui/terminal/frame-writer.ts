@@ -123,23 +123,42 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
       return x.ch === y.ch && x.style === y.style;
     };
     const width = Math.max(ca.length, cb.length);
+    const cost = (k: number) => Buffer.byteLength(cb[k]!.ch);
     let i = 0;
     while (i < cb.length) {
       if (same(i)) {
         i++;
         continue;
       }
-      // A run of changes; short stretches of equal cells inside it are rewritten
-      // rather than jumped over (a jump costs about as much as six cells).
+      // A run of changes; a stretch of equal cells inside it is rewritten when
+      // that is cheaper than a jump (a cursor position costs about 8 bytes).
       let end = i + 1;
+      let gapBytes = 0;
       for (let j = end; j < cb.length; j++) {
-        if (!same(j)) end = j + 1;
-        else if (j - end >= 6) break;
+        if (!same(j)) {
+          end = j + 1;
+          gapBytes = 0;
+        } else {
+          gapBytes += cost(j);
+          if (gapBytes > 8) break;
+        }
       }
       out += at(r + 1, i + 1);
-      for (let k = i; k < end; k++) {
+      let k = i;
+      while (k < end) {
+        // Blank stretches are erased (ECH) rather than written as spaces.
+        let blanks = 0;
+        while (k + blanks < end && cb[k + blanks]!.ch === ' ' && cb[k + blanks]!.style === '') blanks++;
+        if (blanks >= 8) {
+          setPen('');
+          out += `\u001B[${blanks}X`;
+          k += blanks;
+          if (k < end) out += `\u001B[${blanks}C`;
+          continue;
+        }
         setPen(cb[k]!.style);
         out += cb[k]!.ch;
+        k++;
       }
       i = end;
     }
@@ -181,6 +200,8 @@ export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
   let screen: string[] | undefined;
   const emitter = new EventEmitter() as FrameWriter;
   let done: (() => void) | undefined;
+  /** Where Ink believes the cursor is (the line below the frame), once we have moved it elsewhere. */
+  let park = '';
   const send = (s: string) => {
     const cb = done;
     done = undefined;
@@ -207,13 +228,18 @@ export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
     const body = data.replace(ERASE_PREFIX, '');
     if (!body.endsWith('\n') || !PLAIN_OR_SGR.test(body)) {
       screen = undefined;
-      return send(data);
+      // Ink's own sequences move relative to where it left the cursor: put it back there first.
+      const before = park;
+      park = '';
+      return send(before + data);
     }
     const lines = body.slice(0, -1).split('\n');
     const bytes = screen ? diffFrames(screen, lines) : paintFrame(lines);
     screen = lines;
-    // Leave the cursor where Ink believes it is: at the start of the line below the frame.
-    return send(bytes === '' ? '' : `${bytes}${at(lines.length + 1, 1)}`);
+    // The cursor is hidden, so it may stay where the last change left it; it is put back
+    // where Ink believes it is (the line below the frame) before any write of Ink's own.
+    park = at(lines.length + 1, 1);
+    return send(bytes);
   };
   out.on('resize', () => {
     // A resize may reflow or clear what is on screen: paint the next frame in full.
