@@ -10,75 +10,15 @@ import {storeFile} from './paths.js';
 import {StoreError} from './errors.js';
 import {describeFsError, removeOrphanTemps, withLock} from './file-ops.js';
 import {keyOf, readState, writeState, type Entry, type State} from './store-file.js';
-import {NAME_RULE, PresetNameSchema, SavablePresetSchema, describeZodError, type Preset, type QuarantineEntry, type SavablePreset} from './schema.js';
+import {NAME_RULE, PresetNameSchema, SavablePresetSchema, describeZodError, type Preset, type SavablePreset} from './schema.js';
 import {shippedPresets} from './shipped.js';
-import {exportDocument, importPresets, writeExport, type ImportOptions, type ImportReport} from './transfer.js';
-import {dropInsertTable, putInsertTable, readInsertTables, type SolidInsertTable, type SolidInsertTableDraft} from './inserts.js';
+import {exportDocument, importPresets, writeExport, type ImportReport} from './transfer.js';
+import {dropInsertTable, putInsertTable, readInsertTables, type SolidInsertTable} from './inserts.js';
+import type {PresetStore, PresetSummary, StoreOptions} from './store-types.js';
 
 export type {Preset, SavablePreset, QuarantineEntry} from './schema.js';
 export type {ImportOptions, ImportReport} from './transfer.js';
-
-export interface PresetSummary {
-  name: string;
-  kind: Preset['kind'];
-  /** Thread designation of the joint or the power screw. */
-  thread: string;
-  savedAt: string;
-  revision: number;
-  demo: boolean;
-  /** Shipped presets are read-only; "save as" copies them. */
-  readOnly: boolean;
-  source: 'saved' | 'shipped';
-  asset?: string;
-  location?: string;
-  workOrder?: string;
-}
-
-export interface QuarantinedItem {
-  name?: string;
-  reason: string;
-  /** When it was first quarantined, ISO time. */
-  at: string;
-  /** The item exactly as it was found. */
-  raw: unknown;
-}
-
-export interface SaveOptions {
-  /** Replace a saved preset of the same name (otherwise that is an error). */
-  overwrite?: boolean;
-  /** The revision the caller loaded: the save fails if another session saved since. */
-  expectedRevision?: number;
-}
-
-export interface PresetStore {
-  /** The folder and file in use. */
-  readonly dir: string;
-  readonly file: string;
-  list(): PresetSummary[];
-  get(name: string): Preset | undefined;
-  save(p: SavablePreset, opts?: SaveOptions): Preset;
-  rename(from: string, to: string): void;
-  duplicate(from: string, to: string): Preset;
-  remove(name: string): void;
-  importFile(file: string, opts?: ImportOptions): ImportReport;
-  exportTo(file: string, names?: string[], opts?: {force?: boolean}): void;
-  /** The export document as JSON text (for writing to stdout). */
-  exportJson(names?: string[]): string;
-  /** Presets, and solid insert tables, that could not be read; kept in the file. */
-  quarantined(): QuarantinedItem[];
-  /** The user's own solid key-locked insert tables (for the repair planner). */
-  insertTables(): SolidInsertTable[];
-  saveInsertTable(t: SolidInsertTableDraft, opts?: {overwrite?: boolean}): SolidInsertTable;
-  removeInsertTable(name: string): void;
-  /** One-line messages for the user about what happened to the files. */
-  warnings(): string[];
-}
-
-export interface StoreOptions {
-  now?: () => Date;
-  lockTimeoutMs?: number;
-  staleLockMs?: number;
-}
+export type {PresetStore, PresetSummary, QuarantinedItem, SaveOptions, StoreOptions} from './store-types.js';
 
 function summary(p: Preset, source: PresetSummary['source']): PresetSummary {
   const s: PresetSummary = {
@@ -281,6 +221,7 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
           if (!p) throw missing(n, s);
           return p;
         });
+        chosen = chosen.filter((p, i) => chosen.indexOf(p) === i); // a name given twice is exported once
       } else {
         chosen = s.entries.map(e => e.preset);
         if (chosen.length === 0) throw new StoreError(`there are no saved presets to export; name shipped ones to export them (${shipped.map(p => p.name).join(', ')})`);

@@ -26,7 +26,7 @@ describe('export', () => {
     expect(doc.schemaVersion).toBe(2);
     expect(doc.presets.map((p: {name: string}) => p.name)).toEqual(['mine', 'second']);
     const some = path.join(dir, 'some.json');
-    s.exportTo(some, ['second', DEFAULT_PRESET]);
+    s.exportTo(some, ['second', DEFAULT_PRESET, 'SECOND']);
     expect(JSON.parse(fs.readFileSync(some, 'utf8')).presets.map((p: {name: string}) => p.name)).toEqual(['second', DEFAULT_PRESET]);
 
     const other = openPresetStore(tempDir('other'));
