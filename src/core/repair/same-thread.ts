@@ -6,6 +6,7 @@
 import {applyResult, infeasible, mm, judge, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {blindHoleDepths, tapDrill} from './holes.js';
 import type {RepairOption} from './types.js';
+import {BLIND_HOLE_INCOMPLETE_PITCHES} from '../joint/flags.js';
 
 /** Longest effective engagement the planner tries, as a multiple of D (beyond it more length adds nothing useful). */
 export const MAX_ENGAGEMENT_FACTOR = 4;
@@ -117,6 +118,11 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
       }
     }
     if (repair.depthAvailable === undefined) o.notes.push(`depth available not given: check the part allows a ${depth.holeDepth.toFixed(1)} mm hole`);
+    // Full thread of the present hole as the mechanics core counts it (the last pitches incomplete).
+    const present = ctx.joint.holeDepth === undefined ? undefined : ctx.joint.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * p;
+    if (present !== undefined && present + 1e-9 >= newReach) {
+      o.notes.push(`the present hole (${mm(ctx.joint.holeDepth ?? 0)} mm) already has full thread to ${mm(present)} mm: a longer screw is all it takes`);
+    }
   }
   return judge(ctx, o);
 }
