@@ -47,6 +47,15 @@ describe('resolvePreset', () => {
     expect(resolvePreset(DEFAULT_PRESET, env).demo).toBe(true);
   });
 
+  it('passes the store warnings on (a damaged store is repaired while resolving)', () => {
+    const dir = tempDir('resolve');
+    openPresetStore(dir).save(jointPreset('kept'));
+    fs.writeFileSync(path.join(dir, 'presets.json'), '');
+    const seen: string[] = [];
+    expect(() => resolvePreset('kept', {TAPWRIGHT_CONFIG_DIR: dir}, 'joint', m => seen.push(m))).toThrow(/no saved or shipped preset/);
+    expect(seen).toEqual([expect.stringMatching(/^preset store was empty; moved aside to /)]);
+  });
+
   it('names --preset and the known presets when the name is unknown, or of the wrong kind', () => {
     const env = {TAPWRIGHT_CONFIG_DIR: tempDir('resolve')};
     let e: unknown;
