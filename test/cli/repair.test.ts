@@ -38,6 +38,17 @@ describe('tapwright repair: text', () => {
     expect(Math.max(...r.out.split('\n').map(l => l.length))).toBeLessThanOrEqual(80);
   });
 
+  it('writes the Markdown work-order report with the date, the preset name, sources and cautions', async () => {
+    const r = await run('--preset', 'demo-pump-casing-stud', '--format', 'markdown');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^# Thread repair plan: M12x1\.75/);
+    expect(r.out).toContain('Date: 2026-01-01');
+    expect(r.out).toContain('Preset: demo-pump-casing-stud');
+    expect(r.out).toMatch(/^\| 1 \| /m);
+    expect(r.out).toContain('## Sources');
+    expect(r.out).toMatch(/qualified person/);
+  });
+
   it('--help lists the hole options and exits 0', async () => {
     const r = await run('--help');
     expect(r.code).toBe(0);

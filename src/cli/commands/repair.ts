@@ -15,6 +15,7 @@ import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
 import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
 import {lengthText, planText} from './repair-text.js';
+import {planMarkdown} from './repair-markdown.js';
 
 const OPTIONS: OptionSpec = {
   ...JOINT_OPTIONS,
@@ -57,6 +58,7 @@ The hole and the repair:
                         maker's data)
   --preset NAME         joint and hole state from a saved or shipped preset
 Output:
+  --format text|markdown|json   markdown: the work-order report
   --json                the plan as JSON, always SI (same as --format json)
   --help                this text
 
@@ -130,7 +132,7 @@ export const command: Command = {
       return EXIT.ok;
     }
     const format = values.json ? 'json' : (str(values, 'format') ?? 'text');
-    if (format !== 'text' && format !== 'json') throw new UsageError(`--format is "${format}"; accepted: text, json`, '--format');
+    if (format !== 'text' && format !== 'json' && format !== 'markdown') throw new UsageError(`--format is "${format}"; accepted: text, markdown, json`, '--format');
     const units = (str(values, 'units') ?? 'si').toLowerCase();
     if (units !== 'si' && units !== 'us') throw new UsageError(`--units is "${units}"; accepted: si, us`, '--units');
     const presetName = str(values, 'preset');
@@ -188,6 +190,8 @@ export const command: Command = {
     const anyMeets = plan.options.some(o => o.meetsMargin);
     if (format === 'json') {
       io.out(`${JSON.stringify(plan, null, 2)}\n`);
+    } else if (format === 'markdown') {
+      io.out(planMarkdown(plan, joint, {date: io.now(), units: units as UnitSystem, ...(presetName !== undefined ? {presetName} : {})}));
     } else {
       const materials = joint.parent ?? `parent Rm ${joint.parentRm ?? '-'} MPa`;
       const heading = `tapwright repair - ${plan.thread}, bolt ${joint.boltGrade} in ${materials}, engaged ${lengthText(joint.engagement, units as UnitSystem)}`;

@@ -1,0 +1,68 @@
+/**
+ * The Markdown work-order report of `tapwright repair --format markdown`:
+ * inputs, the ranked options, reasons and notes, the ranking rule, sources,
+ * cautions, date and preset name.
+ */
+import type {JointInput} from '../../core/joint/input.js';
+import type {RepairOption, RepairPlan} from '../../core/repair/index.js';
+import {EFFORT_SCALE_TEXT} from '../../core/repair/index.js';
+import {CAUTION_LINES} from '../../core/cautions.js';
+import {formatQuantity, type UnitSystem} from '../../core/units.js';
+import {cell, isoDate} from '../../report/markdown.js';
+
+export interface RepairReportMeta {
+  date: Date;
+  presetName?: string;
+  units: UnitSystem;
+}
+
+function q(v: number | null | undefined, dim: 'length' | 'torque', units: UnitSystem): string {
+  return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatQuantity(v, dim, units, {significant: 3});
+}
+
+function ratio(x: number | null): string {
+  return x === null || !Number.isFinite(x) ? '-' : x.toFixed(2);
+}
+
+function state(o: RepairOption): string {
+  return !o.feasible ? 'no' : o.meetsMargin ? 'yes, meets the margin' : 'yes, short of the margin';
+}
+
+export function planMarkdown(plan: RepairPlan, joint: JointInput, meta: RepairReportMeta): string {
+  const u = meta.units;
+  const h = plan.hole;
+  const out: string[] = [];
+  out.push(`# Thread repair plan: ${cell(plan.thread)}`, '');
+  out.push(`Date: ${isoDate(meta.date)}${meta.presetName ? `  \nPreset: ${cell(meta.presetName)}` : ''}  \nUnits: ${u === 'us' ? 'US customary' : 'SI'}`, '');
+  out.push('## Joint and hole', '', '| Input | Value |', '|---|---|');
+  const rows: Array<[string, string]> = [
+    ['Thread', plan.thread],
+    ['Bolt grade', joint.boltGrade],
+    ['Parent material', joint.parent ?? `custom, Rm ${joint.parentRm ?? '-'} MPa`],
+    ['Engaged length (screw reach)', q(joint.engagement, 'length', u)],
+    ['Hole', `${h.state === 'stripped' ? `stripped to ${q(h.strippedDepth, 'length', u)}` : 'intact'}, ${h.through ? 'through' : 'blind'}`],
+    [h.through ? 'Part thickness' : 'Depth available', q(h.depthAvailable, 'length', u)],
+    ['Edge distance (centre line to edge)', q(h.wall, 'length', u)],
+    ['Required margin', String(plan.requiredMargin)],
+  ];
+  for (const [k, v] of rows) out.push(`| ${cell(k)} | ${cell(v)} |`);
+  if (plan.asIs) {
+    out.push('', `${h.state === 'stripped' ? 'As designed, before the damage' : 'As is'}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`);
+  }
+  out.push('', '## Ranked options', '');
+  out.push('| # | Option | Effort | Can be done | Stripping margin | Bolt breaks first | Drill | Tap | Hole depth | Torque |');
+  out.push('|---|---|---|---|---|---|---|---|---|---|');
+  for (const o of plan.options) {
+    out.push(`| ${o.rank} | ${cell(o.label)} | E${o.effort.grade} ${cell(o.effort.name)} | ${state(o)} | ${ratio(o.margin.stripping)} | ${ratio(o.margin.boltBreaksFirst)} | ${q(o.drill, 'length', u)} | ${cell(o.tapThread ?? '-')} | ${q(o.holeDepth, 'length', u)} | ${q(o.torque, 'torque', u)} |`);
+  }
+  out.push('', '## Reasons and notes', '');
+  for (const o of plan.options) {
+    const parts = [o.reason, o.strength ? `governs: ${o.strength.governs}` : null, ...(o.feasible ? o.notes : [])].filter(Boolean);
+    if (parts.length) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(parts.join('; '))}`);
+  }
+  for (const n of plan.notes) out.push(`- ${cell(n)}`);
+  out.push('', '## Ranking', '', cell(plan.rankingRule), '', ...EFFORT_SCALE_TEXT.split('\n').map(l => `- ${cell(l)}`));
+  out.push('', '## Sources', '', ...plan.sources.map(s => `- ${cell(s)}`));
+  out.push('', '## Cautions', '', ...CAUTION_LINES.map(c => `- ${cell(c)}`), '');
+  return out.join('\n');
+}
