@@ -44,7 +44,6 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
   const lock = `${file}.lock`;
   const now = opts.now ?? (() => new Date());
   const notes: string[] = [];
-  let backedUp = false;
   const warn = (m: string) => {
     if (!notes.includes(m)) notes.push(m);
   };
@@ -96,9 +95,8 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
           if (s.status === 'newer') throw new StoreError(`${file}: ${s.reason}; not changing it. Use that newer tapwright, or move the file away.`);
           const found = {...s, entries: [...s.entries]};
           fn(s);
-          // presets.json.bak: the store as this process (CLI run or workbench session) first found it.
-          const aside = writeState(file, s, now(), !backedUp);
-          backedUp = true;
+          // presets.json.bak: the store as it was before this change.
+          const aside = writeState(file, s, now());
           report(found, aside);
           return s;
         },

@@ -173,12 +173,12 @@ export function serialize(s: State): string {
 }
 
 /**
- * Write the state (caller holds the lock). With `backup`, a good previous
- * file becomes presets.json.bak; a damaged one is kept as presets.json.corrupt-<time>; a
+ * Write the state (caller holds the lock). A good previous file becomes
+ * presets.json.bak; a damaged one is kept as presets.json.corrupt-<time>; a
  * file of an older version is kept as presets.json.schema<N>-<time>.
  * Returns the path of the file kept aside, if any.
  */
-export function writeState(file: string, s: State, now: Date, backup = true): string | undefined {
+export function writeState(file: string, s: State, now: Date): string | undefined {
   let aside: string | undefined;
   if (s.status === 'damaged') {
     aside = `${file}.corrupt-${fileStamp(now)}`;
@@ -187,7 +187,7 @@ export function writeState(file: string, s: State, now: Date, backup = true): st
   } else if (s.status === 'migrated' && s.text !== undefined) {
     aside = `${file}.schema${s.fromVersion}-${fileStamp(now)}`;
     writeFileAtomic(aside, s.text);
-  } else if (s.status === 'ok' && s.text !== undefined && backup) {
+  } else if (s.status === 'ok' && s.text !== undefined) {
     writeFileAtomic(`${file}.bak`, s.text);
   }
   const out = serialize(s);

@@ -74,14 +74,15 @@ describe('save and get', () => {
     expect(doc.presets.find((p: {name: string}) => p.name === 'future').colour).toBe('blue');
   });
 
-  it('keeps the store as it was at the first write of a session in presets.json.bak', () => {
+  it('keeps the store as it was before the last change in presets.json.bak', () => {
     const dir = tempDir();
     openPresetStore(dir).save(jointPreset('one'));
+    expect(fs.existsSync(path.join(dir, 'presets.json.bak'))).toBe(false); // nothing before the first save
     const s = openPresetStore(dir);
     s.save(jointPreset('two'));
     s.save(jointPreset('three'));
     const bak = JSON.parse(fs.readFileSync(path.join(dir, 'presets.json.bak'), 'utf8'));
-    expect(bak.presets.map((p: {name: string}) => p.name)).toEqual(['one']);
+    expect(bak.presets.map((p: {name: string}) => p.name)).toEqual(['one', 'two']);
   });
 });
 

@@ -46,7 +46,7 @@ Notes:
 
 delete never asks a question, in a terminal or in a script: it needs --yes,
 so a preset is never removed by a mistyped command. The store as it was
-before the first change of each run is kept in presets.json.bak.
+before the last change is kept in presets.json.bak.
 
 import FILE takes an export file, a whole presets.json (any earlier version
 is migrated) or one preset object. The file is checked completely first: up
