@@ -51,6 +51,21 @@ function emptyState(status: State['status']): State {
   return {status, entries: [], quarantine: [], materials: [], inserts: []};
 }
 
+type Checked = {bad?: string; result?: ReturnType<typeof PresetSchema.safeParse>};
+/** Validation results by the item's JSON text: each read re-validates only what changed. */
+const checkedCache = new Map<string, Checked>();
+
+function check(raw: unknown): Checked {
+  const key = JSON.stringify(raw) ?? 'undefined';
+  const hit = checkedCache.get(key);
+  if (hit) return hit;
+  const bad = findForbiddenKey(raw);
+  const out: Checked = bad !== undefined ? {bad} : {result: PresetSchema.safeParse(raw)};
+  if (checkedCache.size >= 5000) checkedCache.clear();
+  checkedCache.set(key, out);
+  return out;
+}
+
 /**
  * Split raw items into valid entries and quarantine, never dropping anything.
  * A quarantined item that reads as a valid preset again (after an upgrade or a
@@ -60,9 +75,9 @@ function itemize(state: State, items: unknown[], quarantine: unknown[], now: Dat
   const at = now.toISOString();
   const seen = new Set<string>();
   const take = (raw: unknown, hold: (reason: string) => void, i: number): void => {
-    const bad = findForbiddenKey(raw);
-    if (bad !== undefined) return hold(`item ${i + 1} has the forbidden key ${bad}`);
-    const r = PresetSchema.safeParse(raw);
+    const checked = check(raw);
+    if (checked.bad !== undefined) return hold(`item ${i + 1} has the forbidden key ${checked.bad}`);
+    const r = checked.result!;
     if (!r.success) return hold(describeZodError(r.error));
     const key = keyOf(r.data.name);
     if (seen.has(key)) return hold(`a second preset named "${r.data.name}"`);
