@@ -113,12 +113,15 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: ReturnType<
 }
 
 function holeSummary(state: WorkbenchState, t: Theme): string {
-  const v = shownValues(state);
-  const parts = ['hole.holeState', 'hole.strippedDepth', 'hole.through', 'hole.depthAvailable', 'hole.wall'].map(id => {
-    const f = fieldById(id);
-    return `${f.label.toLowerCase()} ${formatField(f, id === 'hole.holeState' ? (v.hole.holeState ?? 'intact') : (v.hole as Record<string, unknown>)[id.slice(5)], state.units, t.ascii)}`;
-  });
-  return `${v.joint.thread ?? '?'}; ${parts.join(', ')}`;
+  const h = shownValues(state).hole;
+  const len = (id: string) => formatField(fieldById(id), (h as Record<string, unknown>)[id.slice(5)], state.units, t.ascii);
+  const parts = [
+    h.holeState === 'stripped' ? `stripped to ${len('hole.strippedDepth')}` : 'hole intact',
+    h.through ? 'through' : 'blind',
+    h.depthAvailable !== undefined ? `depth ${len('hole.depthAvailable')}` : 'depth not given',
+    h.wall !== undefined ? `wall ${len('hole.wall')}` : 'wall not given',
+  ];
+  return `${shownValues(state).joint.thread ?? '?'}; ${parts.join(', ')} (step 5 of the joint screen)`;
 }
 
 export {MIN_COLUMNS, MIN_ROWS};

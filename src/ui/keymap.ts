@@ -60,11 +60,11 @@ export const CONTEXT_TITLES: Record<Context, string> = {
 export const KEYMAP: readonly Binding[] = [
   {command: 'app.interrupt', keys: [c('c', {ctrl: true})], context: 'any', description: 'Quit at once; unsaved edits are kept as a draft'},
   {command: 'app.quit', keys: [c('q')], context: 'screens', hint: 'quit', description: 'Quit; unsaved edits are kept as a draft for the next start'},
-  {command: 'go.joint', keys: [c('j')], context: 'screens', hint: 'joint', description: 'Joint screen: inputs and live results'},
-  {command: 'go.repairs', keys: [c('r')], context: 'screens', hint: 'repairs', description: 'Repairs screen: ranked fixes for this hole'},
-  {command: 'go.presets', keys: [c('p')], context: 'screens', hint: 'presets', description: 'Presets screen: load, save, rename, import, export'},
-  {command: 'go.report', keys: [c('w')], context: 'screens', hint: 'report', description: 'Report screen: preview and write the work-order report'},
-  {command: 'go.help', keys: [c('?'), c('h')], context: 'screens', hint: 'help', description: 'This help'},
+  {command: 'go.joint', keys: [c('j')], context: 'screens', description: 'Joint screen: inputs and live results'},
+  {command: 'go.repairs', keys: [c('r')], context: 'screens', description: 'Repairs screen: ranked fixes for this hole'},
+  {command: 'go.presets', keys: [c('p')], context: 'screens', description: 'Presets screen: load, save, rename, import, export'},
+  {command: 'go.report', keys: [c('w')], context: 'screens', description: 'Report screen: preview and write the work-order report'},
+  {command: 'go.help', keys: [c('?'), c('h')], context: 'screens', description: 'This help'},
   {command: 'units.toggle', keys: [c('u')], context: 'screens', hint: 'SI/US', description: 'Switch units between SI and US customary'},
 
   {command: 'field.prev', keys: [k('up')], context: 'joint', hint: 'field', description: 'Previous field'},

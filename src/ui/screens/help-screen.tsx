@@ -17,6 +17,13 @@ export const SCREEN_GUIDE: readonly string[] = [
   'Field marks: > selected, ! a problem (the message line says what and the',
   '  accepted range). * beside the preset name = unsaved changes.',
   'Numbers may carry a unit: 12mm, 0.5in, 40Nm, 30ft-lbf, 20kN, 4500lbf.',
+  'Results: 1st thread = the first engaged thread at the loaded face; ax axial,',
+  '  bnd root bending, sh shear from the thread torque, tor body torsion,',
+  '  brg thread bearing. Margins: stripping = weaker thread strip force / largest',
+  '  load; bolt-first = weaker strip force / bolt break force (1 = even).',
+  '  The gauge shows bolt-first against the needed margin (the mark).',
+  '  Engagement scale: the bar is the full thread present; F and A mark the',
+  '  length each method needs (FED-STD-H28, Alexander).',
 ];
 
 export function helpLines(opts: {ascii: boolean; sources: readonly string[]; rankingRule?: string}): string[] {

@@ -37,7 +37,6 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const {tightening: tg, stress, stripping: st, margin} = result;
   const ft = stress.firstThread;
   const L = (label: string) => pad(label, 11);
-  const weakerName = st.weaker === 'external' ? 'bolt thread' : input.internal === 'nut' ? 'nut thread' : 'hole thread';
   const stripFail = result.flags.some(f => FAILING_STRIP.has(f.code) && f.level === 'fail');
   const need = input.requiredMargin;
   const gaugeWidth = Math.max(8, width - 23);
@@ -54,19 +53,19 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const row = (_key: string, label: string, text: string, color?: string): Line => ({text: fit(`${L(label)}${text}`, width, t.sym.ellipsis), color});
   const lines: Line[] = [
     row('p', 'Preload', `${q(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')}, nom. ${q(tg.preload.nominal, 'force')}`),
-    row('t', 'Torque', `${q(tg.torque, 'torque')} = ${n(tg.utilisation)} of Rp0.2`),
+    row('t', 'Torque', `${q(tg.torque, 'torque')}, stress ${formatNumber(tg.utilisation * 100, 2)}% of Rp0.2`),
     row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')}`),
-    row('y', '', `/yield: bolt ${n(margin.firstThreadYieldBolt)}, ${input.internal === 'nut' ? 'nut' : 'part'} ${n(margin.firstThreadYieldInternal)}`),
+    row('y', '', `= ${n(margin.firstThreadYieldBolt)}x bolt yield, ${n(margin.firstThreadYieldInternal)}x ${input.internal === 'nut' ? 'nut' : 'part'}`),
     fit(` ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
-    row('w', '', `${weakerName} weaker; ${st.limitsUsed} limits`, stripFail ? t.tone('fail') : undefined),
+    row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${st.limitsUsed} limits)`, stripFail ? t.tone('fail') : undefined),
     row('b', 'Bolt break', `${q(st.boltBreakForce, 'force')} (As x Rm)`),
     row('m', 'Margins', `stripping ${n(margin.stripping)}, bolt-first ${n(margin.boltBreaksFirst)}`),
-    row('g', '', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} need ${n(need)}`, stripFail ? t.tone('fail') : t.tone('ok')),
+    row('g', ' bolt-first', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark}=${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
     row('r', 'Needed', `F ${q(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${q(st.requiredEngagement.alexander, 'length')} Alex.`),
-    row('sc', '', scale),
+    row('sc', ` ${t.sym.barFull}=present`, scale),
   ];
   return <Lines lines={lines} width={width} height={height} />;
 }

@@ -33,9 +33,8 @@ export function rangeText(f: FieldDef, units: UnitSystem, ascii: boolean): strin
 /** Value shown in the field when not editing. */
 export function formatField(f: FieldDef, value: unknown, units: UnitSystem, ascii: boolean): string {
   if (value === undefined || value === null || value === '') {
-    if (!f.optional) return '(needed)';
     const d = fieldBounds(f.id).default;
-    if (d === undefined || d === null) return f.empty ?? '-';
+    if (d === undefined || d === null) return f.optional ? (f.empty ?? '-') : '(needed)';
     const shown = formatField(f, d, units, ascii);
     return shown.length <= 4 ? `${shown} (default)` : `${shown} (def.)`;
   }

@@ -7,7 +7,7 @@ import type {UnitSystem} from '../../core/units.js';
 import type {Draft, PickItem, PresetEntry, WorkbenchServices} from '../services.js';
 import type {KeyEvent} from '../keys.js';
 import {lookup, type Context} from '../keymap.js';
-import {STEPS, fieldById, getValue, setValue, visibleFields, type FieldDef, type FormValues} from './fields.js';
+import {STEPS, fieldBounds, fieldById, getValue, setValue, visibleFields, type FieldDef, type FormValues} from './fields.js';
 import {editText, parseField} from './field-text.js';
 import {evaluate, evaluateRepairs} from './evaluate.js';
 import {bodyHeight} from '../layout.js';
@@ -168,7 +168,7 @@ function withEditPreview(s: WorkbenchState): WorkbenchState {
 }
 
 function startEdit(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices, typed?: string): WorkbenchState {
-  const value = getValue(s.values, f.id);
+  const value = getValue(s.values, f.id) ?? fieldBounds(f.id).default;
   if (f.kind === 'choice') {
     const choices = f.choices ?? [];
     const next = choices[(choices.indexOf(String(value ?? choices[0])) + 1) % choices.length];
