@@ -53,7 +53,8 @@ export function screwText(r: ScrewResult, units: UnitSystem, preset?: string): s
   const b = r.stress.body;
   out.push(...field('Body', `axial ${q(b.axial, 'stress')}, torsion ${q(b.torsion, 'stress')}, von Mises ${q(b.vonMises, 'stress')}`));
   const t = r.stress.firstThread;
-  out.push(...field('First thread', `share ${formatNumber(t.share, 2)} of the load on 1 thread: bearing ${q(t.bearing, 'stress')}, bending ${q(t.bending, 'stress')}, shear ${q(t.shear, 'stress')}, von Mises ${q(t.vonMises, 'stress')} (screw yield ${q(r.screw.yield, 'stress')}), max shear ${q(t.maxShear, 'stress')}`));
+  out.push(...field('First thread', `share ${formatNumber(t.share, 2)} of the load and torque on 1 thread: bearing ${q(t.bearing, 'stress')}, root bending ${q(t.bending, 'stress')}, shear from the thread torque ${q(t.shear, 'stress')}, transverse shear at the root centre ${q(t.transverseShear, 'stress')} (not combined)`));
+  out.push(...field('', `von Mises ${q(t.vonMises, 'stress')} with the thread-torque shear (screw yield ${q(r.screw.yield, 'stress')}), max shear ${q(t.maxShear, 'stress')}; Shigley p. 419 state without it ${q(t.vonMisesTextbook, 'stress')}, max shear ${q(t.maxShearTextbook, 'stress')}`));
   const n = r.nut;
   out.push(...field('Nut', `${n.materialName}, ${formatNumber(n.engagedThreads, 3)} threads engaged`));
   const allow = n.allowablePressure;

@@ -1,69 +1,25 @@
 /**
- * Nominal stresses at the root of the first engaged thread and in the threaded body.
- * Textbook method: Shigley, Mechanical Engineering Design, 9th ed., section 8-2,
- * Eqs. 8-7 to 8-12 (pp. 418-419). Units: N, N·mm, mm, MPa.
+ * Stresses of the joint's threads. The first-thread root stresses and the body stresses at the
+ * first thread are the shared implementation in src/core/thread-stress.ts (Shigley, Mechanical
+ * Engineering Design, 9th ed., section 8-2, Eqs. 8-7 to 8-12, p. 419), the same one the power
+ * screws use; this module adds the nut-thread tooth and the shank. Units: N, N·mm, mm, MPa.
  */
-import {vonMises, vonMisesAxialShear, type StressState} from './von-mises.js';
+import {vonMisesAxialShear} from '../von-mises.js';
+import {firstThreadStresses, type FirstThreadInput, type FirstThreadStresses} from '../thread-stress.js';
 
-/** Share of the load and the torque carried by the first thread when 6 or more threads are engaged
- *  (Shigley 9th ed., section 8-2, p. 419: 0.38 of the load on the first thread). */
-export const FIRST_THREAD_SHARE_LONG = 0.38;
-/** Engaged threads from which the fixed 0.38 share is used (Shigley p. 419: the seventh carries nothing). */
-export const LONG_ENGAGEMENT_THREADS = 6;
+export {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS} from '../thread-stress.js';
 
-export interface RootStressInput {
-  /** Axial force in the bolt body at the first thread, N (tension +, compression - for a power screw). */
-  force: number;
-  /** Thread torque carried through the thread, N·mm. */
-  torque: number;
-  /** Root (minor) diameter dr, mm. */
-  dr: number;
-  /** Mean (pitch) diameter dm, mm. */
-  dm: number;
-  /** Pitch p, mm. */
-  pitch: number;
-  /** Share of force and torque on the thread considered (0..1). */
-  share: number;
-  /** Number of threads the shared load is spread over (1 for the first-thread worst case). */
-  nt: number;
-}
-
-export interface RootStresses {
-  axial: number;
-  bending: number;
-  shear: number;
-  torsion: number;
-  bearing: number;
-  vonMises: number;
-  /** The full stress tensor used for von Mises (Shigley's axes: x radial, y axial, z tangential). */
-  state: StressState;
-}
+/** Input of the first-thread stresses (force: tension + for a bolt). */
+export type RootStressInput = FirstThreadInput;
+/** First-thread stresses: axial, bending, shear (tangential, thread torque), torsion, bearing, von Mises. */
+export type RootStresses = FirstThreadStresses;
 
 /**
- * Stresses at the top of the root of the first engaged thread, MPa.
- * - axial (body)  4F/(pi dr^2)             Shigley Eq. 8-8 (sign: tension + for a bolt)
- * - torsion (body) 16T/(pi dr^3)           Shigley Eq. 8-7
- * - bearing       -2 F1/(pi dm nt p)       Shigley Eq. 8-10 (compressive, negative)
- * - root bending   6 F1/(pi dr nt p)       Shigley Eq. 8-11
- * - tangential shear from the thread torque 4 T1/(pi dr^2 nt p): the tangential thread force 2T1/dr
- *   on the root cylinder pi dr nt p with a peak factor 2 (common practice, no source).
- * F1 = share x F and T1 = share x T are the thread's part of the load; the body stresses carry
- * the full F and T, as in Shigley's Example 8-1. Combined by the full 3D von Mises expression
- * (Eq. 5-14) with sx = bending, sy = axial, sz = 0, txy = 0 (the transverse shear of Eq. 8-12 is zero
- * at the top of the root, p. 419), tyz = torsion, tzx = tangential shear. The flank bearing stress
- * acts on the flank, not at the root, and is reported but not combined (as in Shigley p. 419).
+ * Stresses at the top of the root of the first engaged thread, MPa: the shared
+ * `firstThreadStresses` (Shigley 9th ed. Eqs. 8-7, 8-8, 8-10, 8-11, p. 419 state, Eq. 5-14, plus the
+ * tangential shear from the thread torque 4T1/(pi dr^2 nt p), common practice, no source).
  */
-export function rootStresses(i: RootStressInput): RootStresses {
-  const f1 = i.force * i.share;
-  const t1 = i.torque * i.share;
-  const axial = (4 * i.force) / (Math.PI * i.dr * i.dr);
-  const torsion = (16 * i.torque) / (Math.PI * i.dr ** 3);
-  const bending = (6 * f1) / (Math.PI * i.dr * i.nt * i.pitch);
-  const shear = (4 * t1) / (Math.PI * i.dr * i.dr * i.nt * i.pitch);
-  const bearing = (-2 * f1) / (Math.PI * i.dm * i.nt * i.pitch);
-  const state: StressState = {sx: bending, sy: axial, sz: 0, txy: 0, tyz: torsion, tzx: shear};
-  return {axial, bending, shear, torsion, bearing, vonMises: vonMises(state), state};
-}
+export const rootStresses: (i: RootStressInput) => RootStresses = firstThreadStresses;
 
 /**
  * Root stress of the first internal-thread tooth, MPa: the same tooth formulas with the internal

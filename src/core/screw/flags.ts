@@ -5,12 +5,13 @@
  */
 import type {Flag} from '../types.js';
 import type {ScrewResult} from './result.js';
+import {LONG_ENGAGEMENT_THREADS} from '../thread-stress.js';
 
 export const WATCH_MARGIN = {stripping: 2, buckling: 2, yield: 1.5} as const;
 /** Self-locking with f sec(alpha) below this multiple of tan(lambda) is marked marginal (common practice, no source). */
 export const SELF_LOCKING_MARGIN = 1.5;
 /** Fewer engaged threads than this: the 0.38 first-thread share is not yet reached (Shigley 9th ed. p. 419). */
-export const SHARE_THREADS = 6;
+export const SHARE_THREADS = LONG_ENGAGEMENT_THREADS;
 
 const f0 = (x: number) => x.toFixed(0);
 const f1 = (x: number) => x.toFixed(1);

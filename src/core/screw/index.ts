@@ -12,6 +12,7 @@ import {parsePowerThread} from './designation.js';
 import {powerThreadGeometry} from './geometry.js';
 import {collarTorque, efficiency, isSelfLocking, leadAngle, lowerThreadTorque, raiseThreadTorque, raisingLocks, selfLockingFriction} from './mechanics.js';
 import {bodyStresses, threadRootStresses} from './stresses.js';
+import {FIRST_THREAD_SHARE_LONG} from '../thread-stress.js';
 import {allowablePressure, bearingPressure, stripping} from './nut.js';
 import {buckling, END_CONDITION_SOURCE} from './buckling.js';
 import {nutMaterial, nutMaterialIds, screwMaterial, screwMaterialIds} from './materials.js';
@@ -26,8 +27,8 @@ export {nutMaterialIds, screwMaterialIds} from './materials.js';
 export {parsePowerThread, THREAD_EXAMPLES} from './designation.js';
 export {powerThreadGeometry} from './geometry.js';
 
-/** First-thread share of the load (Shigley 9th ed., p. 419). */
-export const FIRST_THREAD_SHARE = 0.38;
+/** First-thread share of the load (Shigley 9th ed., p. 419); the joint's constant. */
+export const FIRST_THREAD_SHARE = FIRST_THREAD_SHARE_LONG;
 
 /** A bad input found while computing; `field` is the ScrewInput key at fault. */
 export class ScrewInputError extends Error {
@@ -91,7 +92,11 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     selfLockingFriction: selfLockingFriction(g.lead, g.meanDiameter, g.flankAngle),
     stress: {
       body: {axial: body.axial, torsion: body.torsion, vonMises: body.vonMises},
-      firstThread: {bearing: root.bearing, bending: root.bending, shear: root.shear, vonMises: root.vonMises, maxShear: root.maxShear, principal: root.principal, share},
+      firstThread: {
+        bearing: root.bearing, bending: root.bending, shear: root.shear, transverseShear: root.transverseShear,
+        axial: root.axial, torsion: root.torsion, vonMises: root.vonMises, maxShear: root.maxShear, principal: root.principal,
+        vonMisesTextbook: root.vonMisesTextbook, maxShearTextbook: root.maxShearTextbook, principalTextbook: root.principalTextbook, share,
+      },
     },
     nut: {
       material: nut.id, materialName: nut.name, materialSource: nut.source, engagedThreads: engaged,
@@ -116,13 +121,14 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     input: {loadDirection: input.loadDirection, load: F, nutLength: input.nutLength},
     sources: [
       g.source,
-      "Shigley's Mechanical Engineering Design, 9th ed.: Eqs. 8-1 to 8-6 (torque, efficiency, self-locking), Eqs. 8-7 to 8-12 and p. 419 (stresses, 0.38 first-thread share), Eq. 5-14 (von Mises), Eqs. 4-42/4-43 and 8-9 with Table 4-2 (columns)",
+      "Shigley's Mechanical Engineering Design, 9th ed.: Eqs. 8-1 to 8-6 (torque, efficiency, self-locking), Eqs. 8-7 to 8-12 and p. 419 (stresses, 0.38 first-thread share; first-thread stresses shared with tapwright check, plus the tangential shear from the thread torque: common practice, no source), Eq. 5-14 (von Mises), Eqs. 4-42/4-43 and 8-9 with Table 4-2 (columns)",
       allow?.source ?? '',
     ].filter(s => s !== ''),
     notes: [
       ...g.notes,
       `nut stripping: basic profile, threads sheared on the cylinders d and D1 over the nut length, every turn loaded; no tolerance allowance (a few per cent high)`,
-      `torsion in the stresses uses the full raising torque with collar (conservative)`,
+      `body torsion and the first thread's tangential shear use the full raising torque with collar (conservative)`,
+      `first thread: von Mises with the tangential shear from the thread torque (as tapwright check); the textbook value without it (Shigley p. 419 state) is vonMisesTextbook`,
       ...(column ? [] : [compression ? 'no column check: give --length' : 'screw in tension: no column check']),
     ],
   };

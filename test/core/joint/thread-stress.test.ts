@@ -95,9 +95,17 @@ describe('first-thread root stresses (Shigley, Mechanical Engineering Design, 9t
   it('tangential shear from the thread torque 4T/(pi dr^2 nt p) with 0.38T (peak factor 2: common practice, no source)', () => {
     expect(r.shear).toBeCloseTo((4 * 0.38 * T) / (Math.PI * dr * dr * p), 9);
   });
-  it('von Mises of the root state sx = bending, sy = axial, tyz = torsion, txy = 0 (Shigley p. 419) plus tzx = tangential shear', () => {
-    const expected = Math.sqrt(((r.bending - r.axial) ** 2 + r.axial ** 2 + r.bending ** 2 + 6 * (r.torsion ** 2 + r.shear ** 2)) / 2);
-    expect(r.vonMises).toBeCloseTo(expected, 9);
+  it('von Mises of the root state sx = bending, sy = axial, tyz = torsion, txy = 0 (Shigley p. 419) plus tzx = tangential shear, at the worse fillet', () => {
+    // Both fillets of the tooth root carry the body stresses, the bending with either sign; the worse
+    // one (bending opposite to the body tension) is kept (common practice, no source).
+    const at = (sx: number) => Math.sqrt(((sx - r.axial) ** 2 + r.axial ** 2 + sx ** 2 + 6 * (r.torsion ** 2 + r.shear ** 2)) / 2);
+    expect(r.vonMises).toBeCloseTo(at(-r.bending), 9);
+    expect(r.vonMises).toBeGreaterThan(at(r.bending));
+    expect(r.state).toEqual({sx: -r.bending, sy: r.axial, sz: 0, txy: 0, tyz: r.torsion, tzx: r.shear});
+  });
+  it('the textbook value is the same state without the tangential shear (Shigley p. 419)', () => {
+    expect(r.vonMisesTextbook).toBeCloseTo(Math.sqrt(((r.bending + r.axial) ** 2 + r.axial ** 2 + r.bending ** 2 + 6 * r.torsion ** 2) / 2), 9);
+    expect(r.transverseShear).toBeCloseTo((3 * 0.38 * F) / (Math.PI * dr * p), 9); // Eq. 8-12
   });
   it('nt spreads the thread stresses: nt = 2 halves bending, bearing and tangential shear (Eqs. 8-10, 8-11)', () => {
     const r2 = rootStresses({force: F, torque: T, dr, dm, pitch: p, share: 0.38, nt: 2});
@@ -110,6 +118,15 @@ describe('first-thread root stresses (Shigley, Mechanical Engineering Design, 9t
     const c = rootStresses({force: -F, torque: 0, dr, dm, pitch: p, share: 0, nt: 1});
     expect(c.axial).toBeLessThan(0);
     expect(c.vonMises).toBeCloseTo(Math.abs(c.axial), 9);
+  });
+  it('a power screw in compression: bearing stays compressive and bending keeps its size; sx = +bending as in Shigley p. 419', () => {
+    const c = rootStresses({force: -F, torque: T, dr, dm, pitch: p, share: 0.38, nt: 1});
+    expect(c.axial).toBeCloseTo(-r.axial, 9);
+    expect(c.bearing).toBeCloseTo(r.bearing, 9);
+    expect(c.bending).toBeCloseTo(r.bending, 9);
+    expect(c.state.sx).toBeCloseTo(r.bending, 9);
+    // reversing the load mirrors the state: same von Mises in tension and in compression
+    expect(c.vonMises).toBeCloseTo(r.vonMises, 9);
   });
   it('shank on the stress section: F/As and 16T/(pi d0^3), von Mises sqrt(s^2 + 3 t^2) (Shigley Eq. 5-15)', () => {
     const sh = shankStresses(F, T, 58, 8.593);

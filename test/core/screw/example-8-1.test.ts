@@ -80,23 +80,50 @@ describe('Shigley 9th ed. Example 8-1 (square thread with collar)', () => {
     expect(r.stress.firstThread.bearing).toBeCloseTo(-12.90216, 4);
     expect(r.stress.firstThread.bending).toBeCloseTo(41.47123, 4);
     // Eq. 8-12, transverse shear at the centre of the root: 3 (0.38 x 6400)/(pi 28 x 4) = 20.7356 MPa
-    expect(r.stress.firstThread.shear).toBeCloseTo(20.73562, 4);
+    expect(r.stress.firstThread.transverseShear).toBeCloseTo(20.73562, 4);
   });
 
-  it('(g) von Mises at the top of the root, Eq. 5-14 with sx = 41.471, sy = -10.394, tyz = 6.073', () => {
+  it('first-thread body components equal the body stresses of part (d) (full F and TR, as in the example)', () => {
+    expect(r.stress.firstThread.axial).toBeCloseTo(r.stress.body.axial, 12);
+    expect(r.stress.firstThread.torsion).toBeCloseTo(r.stress.body.torsion, 12);
+  });
+
+  it('tangential shear from the thread torque, 0.38 TR on one thread (common practice, no source; not in the example)', () => {
+    // 4 (0.38 x 26 176.95) / (pi 28^2 x 1 x 4) = 39 788.96 / 9852.035 = 4.03865 MPa
+    expect(r.stress.firstThread.shear).toBeCloseTo(4.03865, 4);
+  });
+
+  it('(g) von Mises at the top of the root, Eq. 5-14 with sx = 41.471, sy = -10.394, tyz = 6.073 (the book\'s state)', () => {
     // 1/sqrt2 [ (41.471 + 10.394)^2 + 10.394^2 + 41.471^2 + 6 x 6.073^2 ]^1/2
     // = 0.70711 x (2690.0 + 108.03 + 1719.9 + 221.30)^1/2 = 0.70711 x 68.842 = 48.678 MPa
-    expect(r.stress.firstThread.vonMises).toBeCloseTo(48.6784, 3);
+    expect(r.stress.firstThread.vonMisesTextbook).toBeCloseTo(48.6784, 3);
+  });
+
+  it('full von Mises, Eq. 5-14, the book\'s state plus tzx = tangential shear 4.0387 (as tapwright check)', () => {
+    // 1/sqrt2 [ 2690.0 + 108.03 + 1719.9 + 6 x (6.073^2 + 4.0387^2) ]^1/2
+    // = 0.70711 x (4517.9 + 6 x (36.883 + 16.311))^1/2 = 0.70711 x (4837.0)^1/2 = 0.70711 x 69.549 = 49.178 MPa
+    expect(r.stress.firstThread.vonMises).toBeCloseTo(49.1784, 3);
+    // the flags use the full value
+    expect(r.stress.firstThread.vonMises).toBeGreaterThan(r.stress.firstThread.vonMisesTextbook);
   });
 
   it('(h) principal stresses and maximum shear at the root', () => {
     // s1 = sx = 41.471; s2,3 = sy/2 +- sqrt((sy/2)^2 + tyz^2) = -5.197 +- 7.993 = 2.796, -13.190
     // tau_max = (41.471 + 13.190) / 2 = 27.331 MPa
-    const [s1, s2, s3] = r.stress.firstThread.principal;
+    const [s1, s2, s3] = r.stress.firstThread.principalTextbook;
     expect(s1).toBeCloseTo(41.47123, 4);
     expect(s2).toBeCloseTo(2.79629, 4);
     expect(s3).toBeCloseTo(-13.19009, 4);
-    expect(r.stress.firstThread.maxShear).toBeCloseTo(27.33066, 4);
+    expect(r.stress.firstThread.maxShearTextbook).toBeCloseTo(27.33066, 4);
+  });
+
+  it('principal stresses of the full state keep its trace and its von Mises (Shigley 9th ed. section 3-7, Eq. 5-14)', () => {
+    const [s1, s2, s3] = r.stress.firstThread.principal;
+    // trace: sx + sy = 41.471 - 10.394 = 31.077 MPa
+    expect(s1 + s2 + s3).toBeCloseTo(31.07744, 4);
+    expect(Math.sqrt(((s1 - s2) ** 2 + (s2 - s3) ** 2 + (s3 - s1) ** 2) / 2)).toBeCloseTo(49.1784, 3);
+    expect(r.stress.firstThread.maxShear).toBeCloseTo((s1 - s3) / 2, 12);
+    expect(r.stress.firstThread.maxShear).toBeGreaterThan(r.stress.firstThread.maxShearTextbook);
   });
 
   it('inclined plane (Shigley 9th ed. p. 416, eqs. (c), (d)) gives the same torques as Eqs. 8-1 and 8-2', () => {

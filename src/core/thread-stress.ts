@@ -1,0 +1,106 @@
+/**
+ * Nominal stresses at the root of the first engaged thread and in the threaded body at that
+ * thread: ONE implementation for the fastener joint (src/core/joint) and the power screw
+ * (src/core/screw), so both report the same components with the same meaning.
+ * Textbook method: Shigley, Mechanical Engineering Design, 9th ed. (Budynas & Nisbett),
+ * section 8-2, Eqs. 8-7 to 8-12 and the stress state of p. 419; von Mises by Eq. 5-14.
+ * Units: N, N·mm, mm, MPa.
+ */
+import {vonMises, type StressState} from './von-mises.js';
+
+/** Share of the load and the torque carried by the first thread when 6 or more threads are engaged
+ *  (Shigley 9th ed., section 8-2, p. 419: 0.38 of the load on the first thread). */
+export const FIRST_THREAD_SHARE_LONG = 0.38;
+/** Engaged threads from which the fixed 0.38 share is used (Shigley p. 419: the seventh carries nothing). */
+export const LONG_ENGAGEMENT_THREADS = 6;
+
+export interface FirstThreadInput {
+  /**
+   * Axial force in the body at the first thread, N. Its sign is the load direction: tension +
+   * (a bolt, a screw that pulls), compression - (a power screw that pushes, Shigley Eq. 8-8).
+   */
+  force: number;
+  /** Torque carried by the body at the first thread and passed through the thread, N·mm. */
+  torque: number;
+  /** Root (minor) diameter dr, mm. */
+  dr: number;
+  /** Mean (pitch) diameter dm, mm. */
+  dm: number;
+  /** Pitch p, mm. */
+  pitch: number;
+  /** Share of force and torque on the thread considered (0..1; 0.38 for the first thread). */
+  share: number;
+  /** Number of threads the shared load is spread over (1 for the first-thread worst case). */
+  nt: number;
+}
+
+export interface FirstThreadStresses {
+  /** Body axial stress 4F/(pi dr^2), MPa, signed as the force: tension +, compression -. */
+  axial: number;
+  /** Root bending 6 F1/(pi dr nt p), MPa, magnitude (the fillet's sign is in `state.sx`). */
+  bending: number;
+  /** Tangential shear at the root from the thread torque 4 T1/(pi dr^2 nt p), MPa (sign of the torque). */
+  shear: number;
+  /** Body torsion 16T/(pi dr^3), MPa (sign of the torque). */
+  torsion: number;
+  /** Flank bearing -2 F1/(pi dm nt p), MPa: always compressive, whatever the load direction. */
+  bearing: number;
+  /** Transverse shear at the centre of the root section 3 F1/(pi dr nt p), MPa (Eq. 8-12); zero at the
+   *  top of the root, so not combined. */
+  transverseShear: number;
+  /** Full 3D von Mises of `state`, MPa. */
+  vonMises: number;
+  /** Stress tensor combined (Shigley's axes: x radial, y axial, z tangential). */
+  state: StressState;
+  /** von Mises of Shigley's p. 419 state exactly (sx = bending, sy = axial, tyz = torsion; no tangential shear), MPa. */
+  vonMisesTextbook: number;
+  /** Shigley's p. 419 state, same fillet as `state`. */
+  textbookState: StressState;
+}
+
+/**
+ * Body stresses at the root diameter, MPa: axial 4F/(pi dr^2) signed as the force (tension +,
+ * compression -) and torsion 16T/(pi dr^3) (Shigley 9th ed. Eqs. 8-8 and 8-7). F in N, T in N·mm, dr in mm.
+ */
+export function bodyRootStresses(force: number, torque: number, dr: number): {axial: number; torsion: number} {
+  return {axial: (4 * force) / (Math.PI * dr * dr), torsion: (16 * torque) / (Math.PI * dr ** 3)};
+}
+
+/**
+ * Stresses at the top of the root of the first engaged thread, MPa (Shigley 9th ed. section 8-2):
+ * - axial (body)   4F/(pi dr^2)            Eq. 8-8 (tension + for a bolt, compression - for a power screw)
+ * - torsion (body) 16T/(pi dr^3)           Eq. 8-7
+ * - bearing        -2 F1/(pi dm nt p)      Eq. 8-10 (compressive, negative)
+ * - root bending    6 F1/(pi dr nt p)      Eq. 8-11
+ * - transverse shear 3 F1/(pi dr nt p)     Eq. 8-12 (centre of the root; reported, not combined)
+ * - tangential shear from the thread torque 4 T1/(pi dr^2 nt p): the tangential thread force 2T1/dr
+ *   on the root cylinder pi dr nt p with a peak factor 2 (common practice, no source).
+ * F1 = share x |F| and T1 = share x T are the thread's part of the load; the body stresses carry
+ * the full F and T, as in Shigley's Example 8-1 (p. 419: 0.38F with nt = 1 for the first thread).
+ *
+ * Combined by the full 3D von Mises expression (Eq. 5-14) with sy = axial, sz = 0, txy = 0 (the
+ * transverse shear is zero at the top of the root, p. 419), tyz = torsion, tzx = tangential shear,
+ * and sx = root bending. Both fillets of the tooth root see the same body stresses and the bending
+ * with opposite signs; sx takes the sign opposite to the body axial stress, the fillet with the larger
+ * von Mises (choosing the worse fillet: common practice, no source). For a power screw in compression
+ * this is Shigley's p. 419 state, sx = +bending. The flank bearing stress acts on the flank, not at
+ * the root, and is reported but not combined (as on p. 419).
+ */
+export function firstThreadStresses(i: FirstThreadInput): FirstThreadStresses {
+  const f1 = Math.abs(i.force) * i.share;
+  const t1 = i.torque * i.share;
+  const {axial, torsion} = bodyRootStresses(i.force, i.torque, i.dr);
+  const tooth = Math.PI * i.dr * i.nt * i.pitch;
+  const bending = (6 * f1) / tooth;
+  const transverseShear = (3 * f1) / tooth;
+  const shear = (4 * t1) / (tooth * i.dr);
+  const bearing = (-2 * f1) / (Math.PI * i.dm * i.nt * i.pitch);
+  const sx = axial > 0 ? -bending : bending;
+  const textbookState: StressState = {sx, sy: axial, sz: 0, txy: 0, tyz: torsion, tzx: 0};
+  const state: StressState = {...textbookState, tzx: shear};
+  return {
+    axial, bending, shear, torsion, bearing, transverseShear,
+    vonMises: vonMises(state), state,
+    vonMisesTextbook: vonMises(textbookState), textbookState,
+  };
+}
