@@ -7,13 +7,14 @@ import React, {useEffect, useMemo, useRef, useState} from 'react';
 import {Box, Text, useApp, useInput, useStdout} from 'ink';
 import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
 import {normaliseKey} from './keys.js';
-import {hintText} from './keymap.js';
+import {hintLines} from './keymap.js';
 import {contextsOf, handleKeys, isDirty, shownValues, type Screen, type WorkbenchState} from './state/workbench.js';
 import {evaluate, evaluateRepairs} from './state/evaluate.js';
 import {formatField} from './state/field-text.js';
 import {fieldById} from './state/fields.js';
 import type {WorkbenchServices} from './services.js';
 import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
+import {Lines} from './components/lines.js';
 import {JointScreen} from './screens/joint-screen.js';
 import {PresetsScreen} from './screens/presets-screen.js';
 import {ReportScreen} from './screens/report-screen.js';
@@ -141,8 +142,8 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
   const caution = cautionLines(columns);
   const height = rows - 1;
-  const bodyH = bodyHeight({columns, rows});
-  const hints = hintText(contextsOf(state), t.ascii, columns);
+  const hints = hintLines(contextsOf(state), t.ascii, columns);
+  const bodyH = bodyHeight({columns, rows}) - (hints.length - 1);
   let body: React.ReactNode;
   switch (state.screen) {
     case 'joint':
@@ -176,7 +177,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
           {l}
         </Text>
       ))}
-      <Text color={t.tone('dim')}>{hints}</Text>
+      <Lines lines={hints.map(text => ({text, color: t.tone('dim')}))} width={columns} />
     </Box>
   );
 }

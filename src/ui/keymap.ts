@@ -174,8 +174,8 @@ export function keyLabel(spec: KeySpec, ascii: boolean): string {
   return spec.ctrl ? `Ctrl-${(spec.char ?? '').toUpperCase()}` : (spec.char ?? '');
 }
 
-/** The hint line: the keys that work now, most specific context first. */
-export function hintText(contexts: readonly Context[], ascii: boolean, width: number): string {
+/** The hint lines (one, or two when the keys do not fit): the keys that work now, most specific context first. */
+export function hintLines(contexts: readonly Context[], ascii: boolean, width: number): string[] {
   const parts: string[] = [];
   const seen = new Set<string>();
   for (const ctx of contexts) {
@@ -187,13 +187,15 @@ export function hintText(contexts: readonly Context[], ascii: boolean, width: nu
       parts.push(`${keys.map(s => keyLabel(s, ascii)).join(ascii ? '/' : '')} ${b.hint}`);
     }
   }
-  let line = '';
+  const lines: string[] = [''];
   for (const p of parts) {
-    const next = line === '' ? p : `${line}  ${p}`;
-    if (next.length > width) break;
-    line = next;
+    const cur = lines[lines.length - 1]!;
+    const next = cur === '' ? p : `${cur}  ${p}`;
+    if (next.length <= width) lines[lines.length - 1] = next;
+    else if (lines.length < 2) lines.push(p);
+    else break;
   }
-  return line;
+  return lines;
 }
 
 /** Commands whose key is shown together with another's on the hint line (↑↓ field). */

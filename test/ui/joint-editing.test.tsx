@@ -1,7 +1,7 @@
 import {afterEach, describe, expect, it} from 'vitest';
 import {cleanup} from 'ink-testing-library';
 import {startApp} from '../support/start-app.js';
-import {fixtureServices} from '../support/fixture-services.js';
+import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {KEY} from '../support/keys.js';
 
 afterEach(() => cleanup());
@@ -86,6 +86,17 @@ describe('joint screen: steps and editing', () => {
     await app.press(KEY.enter, 'Internal thread: nut');
     expect(app.frame()).toContain('Nut class');
     expect(app.frame()).not.toContain('Parent material');
+    app.unmount();
+  });
+
+  it('shows the schema default of an unset hole-state field and switches from it', async () => {
+    const app = startApp({state: {values: {joint: structuredClone(FIXTURE_VALUES.joint), hole: {}}}});
+    await app.press(KEY.left, /Hole\s+intact \(def\.\)/);
+    expect(app.frame()).toMatch(/Longer bolt OK\s+yes \(default\)/);
+    await app.press([KEY.down, KEY.down, KEY.down, KEY.down], '> Longer bolt OK');
+    await app.press(KEY.enter, /Longer bolt OK\s+no/);
+    await app.press([KEY.up, KEY.up, KEY.up, KEY.up, KEY.enter], /Hole\s+stripped/);
+    expect(app.frame()).toContain('Stripped to depth');
     app.unmount();
   });
 

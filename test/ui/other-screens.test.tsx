@@ -14,8 +14,9 @@ describe('report screen', () => {
     const app = startApp();
     await app.press('w', 'Report preview (Markdown); Enter writes it to a file');
     expect(app.frame()).toContain('# Joint check report');
+    expect(app.frame()).toMatch(/line 1\nline 2/);
     expect(app.frame()).toContain('Preset: demo-fixture');
-    await app.press(KEY.pageDown, /lines \d+-\d+ of 44/);
+    await app.press(KEY.pageDown, /lines \d+-\d+ of 45/);
     await app.press('t', 'JOINT CHECK REPORT');
     await app.press(KEY.enter, 'Write the report to file: tapwright-demo-fixture-2026-03-04.txt_');
     await app.press(KEY.enter, 'Wrote the text report to tapwright-demo-fixture-2026-03-04.txt');

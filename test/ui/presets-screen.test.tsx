@@ -13,7 +13,8 @@ describe('presets screen', () => {
   it('lists presets; a shipped demo asks for a new name on save', async () => {
     const app = startApp();
     await app.press('p', 'Presets: 1');
-    expect(app.frame()).toContain('demo-fixture [demo, read-only]');
+    expect(app.frame()).toMatch(/demo-fixture \(open\)\s+joint, demo\s+M10x1\.5\s+shipped/);
+    expect(app.frame()).toContain('i import  e export');
     await app.press('s', '"demo-fixture" is a shipped demo; save as: demo-fixture copy_');
     await app.press(KEY.ctrlU);
     for (let i = 0; i < 20; i++) await app.press(KEY.backspace);

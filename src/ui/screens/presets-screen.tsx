@@ -21,18 +21,18 @@ export function PresetsScreen({state, svc, width, height}: Props) {
   const q = state.presetList.query;
   return (
     <Box flexDirection="column" width={width} height={height}>
-      <Text bold>{fit(`Presets: ${list.length}${q ? ` matching "${q}"` : ''}   Enter loads the marked one into the joint screen`, width, t.sym.ellipsis)}</Text>
-      <Text color={t.tone('dim')}>{pad(`  ${pad('Name', 34)} ${pad('Thread', 18)} Saved`, width)}</Text>
+      <Text bold>{fit(`Presets: ${list.length}${q ? ` matching "${q}"` : ''}   Enter loads the marked one; demos are read-only`, width, t.sym.ellipsis)}</Text>
+      <Text color={t.tone('dim')}>{pad(`  ${pad('Name', 32)} ${pad('Kind', 12)} ${pad('Thread', 16)} Saved`, width)}</Text>
       {list.length === 0 ? <Text>{q ? `Nothing matches "${q}"; / to search again.` : 'No presets yet: s or a saves the joint.'}</Text> : null}
       {list.slice(start, start + rows).map((p, i) => {
         const marked = start + i === idx;
         const current = p.name === state.preset.name;
-        const tag = p.readOnly ? ' [demo, read-only]' : current ? ' [open]' : '';
-        const name = pad(`${p.name}${tag}`, 34, t.sym.ellipsis);
-        const saved = p.savedAt ? p.savedAt.slice(0, 16).replace('T', ' ') : '';
+        const kind = `${p.kind === 'screw' ? 'screw' : 'joint'}${p.readOnly ? ', demo' : ''}`;
+        const name = pad(`${p.name}${current ? ' (open)' : ''}`, 32, t.sym.ellipsis);
+        const saved = p.savedAt ? p.savedAt.slice(0, 16).replace('T', ' ') : p.readOnly ? 'shipped' : '';
         return (
           <Text key={p.name} inverse={marked} bold={current}>
-            {pad(`${marked ? t.sym.select : ' '} ${name} ${pad(p.thread ?? '', 18)} ${saved}`, width)}
+            {pad(`${marked ? t.sym.select : ' '} ${name} ${pad(kind, 12)} ${pad(p.thread ?? '', 16, t.sym.ellipsis)} ${saved}`, width)}
           </Text>
         );
       })}

@@ -2,6 +2,7 @@
 import React from 'react';
 import {Box, Text} from 'ink';
 import {useTheme, fit, wrap} from '../theme.js';
+import {Lines} from '../components/lines.js';
 
 /** Hard-wrap lines to the width, keeping each line's indent. */
 export function wrapLines(lines: readonly string[], width: number): string[] {
@@ -33,9 +34,7 @@ export function ScrollView({lines: raw, scroll, width, height, title}: {lines: s
   return (
     <Box flexDirection="column" width={width} height={height}>
       <Text bold>{fit(`${title}${where}`, width, t.sym.ellipsis)}</Text>
-      {lines.slice(top, end).map((l, i) => (
-        <Text key={i}>{fit(l, width, t.sym.ellipsis)}</Text>
-      ))}
+      <Lines lines={lines.slice(top, end).map(l => fit(l, width, t.sym.ellipsis))} width={width} height={rows} />
     </Box>
   );
 }
