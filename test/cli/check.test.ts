@@ -108,6 +108,51 @@ describe('tapwright check: output', () => {
     }
   });
 
+  it('markdown with --preset: the preset\'s work-order notes fill the report (asset, location, work order, note)', async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'tw-check-'));
+    try {
+      const r = await check(['--preset', 'demo-gearbox-cover', '--format', 'markdown'], {TAPWRIGHT_CONFIG_DIR: dir});
+      expect(r.err).toBe('');
+      expect(r.out).toContain('| Asset | GB-DEMO-01 |');
+      expect(r.out).toContain('| Location | demo plant, line 2, conveyor drive |');
+      expect(r.out).toContain('| Work order | WO-DEMO-0001 |');
+      expect(r.out).toMatch(/Demo scenario, invented for tapwright/);
+    } finally {
+      rmSync(dir, {recursive: true, force: true});
+    }
+  });
+
+  it('markdown without a preset: --asset, --location, --work-order and --note fill the work-order fields', async () => {
+    const r = await check([...TAPPED, '--format', 'markdown', '--asset', 'PUMP-DEMO-7', '--location', 'demo hall | bay 3', '--work-order', 'WO-DEMO-0042', '--note', 'Demo: re-tapped after a stripped thread.']);
+    expect(r.err).toBe('');
+    expect(r.out).toContain('| Preset | (none: entered by hand) |');
+    expect(r.out).toContain('| Asset | PUMP-DEMO-7 |');
+    expect(r.out).toContain('| Location | demo hall \\| bay 3 |'); // the table cell escapes the bar
+    expect(r.out).toContain('| Work order | WO-DEMO-0042 |');
+    expect(r.out).toContain('Demo: re-tapped after a stripped thread.');
+  });
+
+  it('markdown: an option replaces the preset\'s entry, the others stay, an empty value clears one', async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'tw-check-'));
+    try {
+      const r = await check(['--preset', 'demo-gearbox-cover', '--format', 'markdown', '--work-order', 'WO-DEMO-0099', '--location', ''], {TAPWRIGHT_CONFIG_DIR: dir});
+      expect(r.err).toBe('');
+      expect(r.out).toContain('| Work order | WO-DEMO-0099 |');
+      expect(r.out).not.toContain('WO-DEMO-0001');
+      expect(r.out).toContain('| Asset | GB-DEMO-01 |');
+      expect(r.out).toContain('| Location |  |');
+      expect(r.out).toMatch(/Demo scenario, invented for tapwright/);
+    } finally {
+      rmSync(dir, {recursive: true, force: true});
+    }
+  });
+
+  it('--help lists the work-order options', async () => {
+    const io = memoryIo();
+    expect(await runCli(['check', '--help'], io)).toBe(0);
+    for (const o of ['--asset', '--location', '--work-order', '--note']) expect(io.stdout()).toContain(o);
+  });
+
   it('--help lists the options', async () => {
     const io = memoryIo();
     expect(await runCli(['check', '--help'], io)).toBe(0);
@@ -159,6 +204,10 @@ describe('tapwright check: bad input names the option (exit 2, no stack trace)',
     ['--units unknown', [...TAPPED, '--units', 'imperial'], /--units.*si, us/],
     ['--format unknown', [...TAPPED, '--format', 'pdf'], /--format.*text, markdown, json/],
     ['--json with --format text', [...TAPPED, '--json', '--format', 'text'], /--json/],
+    ['--asset with text output', [...TAPPED, '--asset', 'PUMP-DEMO-7'], /--asset.*--format markdown/],
+    ['--note with --json', [...TAPPED, '--json', '--note', 'x'], /--note.*--format markdown/],
+    ['--work-order too long', [...TAPPED, '--format', 'markdown', '--work-order', 'W'.repeat(61)], /--work-order.*at most 60 characters/],
+    ['--asset too long', [...TAPPED, '--format', 'markdown', '--asset', 'A'.repeat(81)], /--asset.*at most 80 characters/],
     ['unknown option', [...TAPPED, '--colour', 'red'], /unknown option --colour/],
     ['option without value', [...TAPPED, '--torque'], /--torque needs a value/],
   ];

@@ -13,7 +13,8 @@ import {JointInputSchema, type JointInput, type JointInputDraft} from '../../cor
 import {checkJoint, JointInputError} from '../../core/joint/index.js';
 import {resolveGeometry} from '../../core/joint/resolve.js';
 import {nutDimensions} from '../../core/materials/index.js';
-import {formatCheckMarkdown, formatCheckText} from '../../report/index.js';
+import {formatCheckMarkdown, formatCheckText, type WorkOrderNotes} from '../../report/index.js';
+import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
 
 /** Numeric options: the JointInput field, its dimension and the unit of a bare number (SI / US). */
 interface NumericOption {
@@ -77,6 +78,7 @@ const OPTIONS: OptionSpec = {
   json: {type: 'boolean'},
   ascii: {type: 'boolean'},
   preset: {type: 'string'},
+  ...NOTE_OPTION_SPEC,
 };
 
 const HELP = `tapwright check - one threaded joint: preload, stresses, load share, stripping, margins, flags
@@ -112,6 +114,12 @@ Output
                          or in, lbf, ft·lbf, ksi); JSON is always SI
   --format text|markdown|json   (--json is short for --format json)
   --ascii                plain ASCII text
+Work order, for --format markdown (default: the notes of the --preset)
+  --asset TEXT           asset tag of the machine
+  --location TEXT        where it is
+  --work-order TEXT      work-order number
+  --note TEXT            free text under the work-order fields
+                         each replaces the preset's entry; empty clears it
 
 Exit codes: 0 no failed check; 3 computed, but a check failed; 2 bad input or usage.
 Methods: VDI 2230 Part 1 tightening; Shigley, Mechanical Engineering Design 9th ed. section 8-2
@@ -228,11 +236,11 @@ function joinNegativeValues(args: string[]): string[] {
   return out;
 }
 
-async function loadPreset(name: string, io: CliIo): Promise<JointInputDraft> {
+async function loadPreset(name: string, io: CliIo): Promise<{joint: JointInputDraft; notes: WorkOrderNotes}> {
   const {resolvePreset} = await import('../../store/index.js');
   const p = resolvePreset(name, io.env, 'joint');
   if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
-  return p.joint;
+  return {joint: p.joint, notes: p.notes};
 }
 
 export const command: Command = {
@@ -243,9 +251,14 @@ export const command: Command = {
     const {values} = parseOptions(joinNegativeValues(args), OPTIONS, false);
     const units = unitsOf(values);
     const format = formatOf(values);
+    const noteOptions = noteOptionsGiven(values);
+    if (noteOptions.length > 0 && format !== 'markdown') {
+      throw new UsageError(`${noteOptions[0]} fills the work-order report; give --format markdown with it`, noteOptions[0]);
+    }
     const presetName = str(values, 'preset');
-    const base = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
-    const draft = buildDraft(values, units, base);
+    const preset = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
+    const notes = format === 'markdown' ? await workOrderNotes(values, preset?.notes) : {};
+    const draft = buildDraft(values, units, preset?.joint);
     let input: JointInput;
     let result;
     try {
@@ -260,7 +273,7 @@ export const command: Command = {
     if (format === 'json') {
       io.out(`${JSON.stringify({...result, input, units: 'si'}, null, 2)}\n`);
     } else if (format === 'markdown') {
-      io.out(formatCheckMarkdown(result, input, {date: io.now(), units, ...(presetName !== undefined ? {presetName} : {})}));
+      io.out(formatCheckMarkdown(result, input, {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {})}));
     } else {
       io.out(formatCheckText(result, input, {units, ascii: values.ascii === true}));
     }
