@@ -90,6 +90,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'pick.take', keys: [k('enter')], context: 'picker', hint: 'take', description: 'Take the marked entry (or, for a thread, the text as typed)'},
   {command: 'pick.cancel', keys: [k('escape')], context: 'picker', hint: 'undo', description: 'Close the list, keep the old value'},
   {command: 'pick.erase', keys: [k('backspace')], context: 'picker', description: 'Erase the last character of the filter'},
+  {command: 'pick.clear', keys: [c('u', {ctrl: true})], context: 'picker', description: 'Erase the whole filter or designation'},
   {command: 'pick.type', keys: [{name: 'char', printable: true}], context: 'picker', description: 'Type to narrow the list'},
 
   {command: 'list.up', keys: [k('up')], context: 'presets', hint: 'choose', description: 'Previous preset'},
@@ -127,6 +128,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'prompt.ok', keys: [k('enter')], context: 'prompt', hint: 'ok', description: 'Accept'},
   {command: 'prompt.cancel', keys: [k('escape')], context: 'prompt', hint: 'cancel', description: 'Cancel'},
   {command: 'prompt.erase', keys: [k('backspace')], context: 'prompt', description: 'Erase the last character'},
+  {command: 'prompt.clear', keys: [c('u', {ctrl: true})], context: 'prompt', description: 'Erase the whole text'},
   {command: 'prompt.type', keys: [{name: 'char', printable: true}], context: 'prompt', description: 'Type'},
 
   {command: 'confirm.yes', keys: [c('y')], context: 'confirm', hint: 'yes', description: 'Yes, do it'},

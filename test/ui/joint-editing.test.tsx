@@ -134,8 +134,7 @@ describe('joint screen: pickers', () => {
   it('offers designations as you type and takes the marked one', async () => {
     const app = startApp();
     await app.press(KEY.enter, 'M10x1.5_');
-    for (let i = 0; i < 7; i++) await app.press(KEY.backspace);
-    await app.see('Type a designation');
+    await app.press(KEY.ctrlU, 'Type a designation');
     await app.press('M', '  M10x1.25');
     await app.press('1', '  M12x1.5');
     await app.press(KEY.down, '> M10');

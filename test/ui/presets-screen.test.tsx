@@ -16,8 +16,7 @@ describe('presets screen', () => {
     expect(app.frame()).toMatch(/demo-fixture \(open\)\s+joint, demo\s+M10x1\.5\s+shipped/);
     expect(app.frame()).toContain('i import  e export');
     await app.press('s', '"demo-fixture" is a shipped demo; save as: demo-fixture copy_');
-    await app.press(KEY.ctrlU);
-    for (let i = 0; i < 20; i++) await app.press(KEY.backspace);
+    await app.press(KEY.ctrlU, 'save as: _');
     await type(app, 'pump 7');
     await app.press(KEY.enter, 'Saved preset "pump 7".');
     expect(app.frame()).toContain('Preset: pump 7  saved');

@@ -58,7 +58,7 @@ function fieldLines(state: WorkbenchState, ev: Evaluation, width: number, t: The
   return currentFields(state).map(f => {
     const isSel = f === sel;
     const err = ev.errors[f.id] ?? (state.edit?.fieldId === f.id ? state.edit.error : undefined);
-    const unit = f.kind === 'quantity' && state.edit?.fieldId === f.id ? ` ${fieldUnit(f, state.units, t.ascii)}` : '';
+    const unit = f.kind === 'quantity' && state.edit?.fieldId === f.id && !/[a-z"']/i.test(state.edit.buffer) ? ` ${fieldUnit(f, state.units, t.ascii)}` : '';
     const mark = err ? '!' : isSel ? t.sym.select : ' ';
     const value = fit(fieldValueText(state, f, t) + unit, width - labelW - 2, t.sym.ellipsis);
     return [
@@ -82,7 +82,7 @@ function pickerLines(state: WorkbenchState, svc: WorkbenchServices, width: numbe
       ? 'Type a designation; matches show here'
       : items.length === 0
         ? `No match for "${p.filter}": Enter takes it as typed`
-        : `Matches (${t.ascii ? 'Up/Down' : '↑↓'} mark, Enter takes)`
+        : `Matches: ${t.ascii ? 'Up/Down' : '↑↓'} mark, Enter takes`
     : `Filter: ${p.filter || '(type to narrow)'}  ${items.length} found`;
   return [
     {text: fit(header, width, t.sym.ellipsis), color: t.tone('dim')},

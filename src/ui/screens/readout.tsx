@@ -39,7 +39,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const L = (label: string) => pad(label, 11);
   const stripFail = result.flags.some(f => FAILING_STRIP.has(f.code) && f.level === 'fail');
   const need = input.requiredMargin;
-  const gaugeWidth = Math.max(8, width - 23);
+  const gaugeWidth = Math.max(8, width - 11 - 14);
   const {scale} = engagementScale(
     st.effectiveEngagement,
     [
@@ -62,7 +62,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${st.limitsUsed} limits)`, stripFail ? t.tone('fail') : undefined),
     row('b', 'Bolt break', `${q(st.boltBreakForce, 'force')} (As x Rm)`),
     row('m', 'Margins', `stripping ${n(margin.stripping)}, bolt-first ${n(margin.boltBreaksFirst)}`),
-    row('g', ' bolt-first', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark}=${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
+    row('g', ' bolt-1st', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} ${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
     row('r', 'Needed', `F ${q(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${q(st.requiredEngagement.alexander, 'length')} Alex.`),
     row('sc', ` ${t.sym.barFull}=present`, scale),

@@ -420,9 +420,10 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       return withPickerPreview({...s, picker: {...s.picker!, index}}, svc);
     }
     case 'pick.type':
-    case 'pick.erase': {
+    case 'pick.erase':
+    case 'pick.clear': {
       const p = s.picker!;
-      const filter = command === 'pick.type' ? p.filter + (ev.char ?? '') : Array.from(p.filter).slice(0, -1).join('');
+      const filter = command === 'pick.type' ? p.filter + (ev.char ?? '') : command === 'pick.clear' ? '' : Array.from(p.filter).slice(0, -1).join('');
       const isThread = fieldById(p.fieldId).kind === 'thread';
       return withPickerPreview({...s, picker: {...p, filter: filter.slice(0, 60), index: isThread ? -1 : 0}}, svc);
     }
@@ -498,6 +499,8 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       return {...s, prompt: undefined, message: info('Cancelled')};
     case 'prompt.erase':
       return {...s, prompt: {...s.prompt!, buffer: Array.from(s.prompt!.buffer).slice(0, -1).join('')}};
+    case 'prompt.clear':
+      return {...s, prompt: {...s.prompt!, buffer: ''}};
     case 'prompt.type':
       return s.prompt!.buffer.length >= 200 ? s : {...s, prompt: {...s.prompt!, buffer: s.prompt!.buffer + (ev.char ?? '')}};
 
