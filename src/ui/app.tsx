@@ -89,7 +89,7 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: ReturnType<
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
   } else if (state.draftOffer) {
-    text = `Unsaved edits of ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')} (preset ${state.draftOffer.presetName}) found. Restore them? y/n`;
+    text = `Restore the unsaved edits from ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')}? y/n (preset ${state.draftOffer.presetName})`;
   } else if (state.edit?.error) {
     text = state.edit.error;
     isError = true;

@@ -49,9 +49,9 @@ describe('quitting and the draft', () => {
     const draftValues = structuredClone(FIXTURE_VALUES);
     draftValues.joint.engagement = 21;
     const app = startApp({draft: {savedAt: '2026-02-03T04:05:06.000Z', presetName: 'demo-fixture', values: draftValues}});
-    await app.see('Unsaved edits of 2026-02-03 04:05 (preset demo-fixture) found. Restore them? y/n');
+    await app.see('Restore the unsaved edits from 2026-02-03 04:05? y/n (preset demo-fixture)');
     await app.press('j');
-    expect(app.frame()).toContain('Restore them? y/n');
+    expect(app.frame()).toContain('Restore the unsaved edits');
     await app.press('y', 'Restored the unsaved edits of 2026-02-03 04:05');
     expect(app.frame()).toContain('* unsaved changes');
     await app.press([KEY.right, KEY.right], /Engaged length\s+21\.0 mm/);

@@ -4,7 +4,7 @@
  * presses Ctrl-C and checks the terminal came back (main screen, cursor shown).
  */
 import {execFileSync, spawnSync} from 'node:child_process';
-import {mkdtempSync, rmSync, existsSync} from 'node:fs';
+import {mkdtempSync, rmSync, existsSync, readdirSync, readFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {afterAll, beforeAll, describe, expect, it} from 'vitest';
@@ -38,6 +38,17 @@ describe.skipIf(!hasTmux)('real terminal (tmux 80x24)', () => {
   afterAll(() => {
     spawnSync('tmux', ['-L', socket, 'kill-server']);
     rmSync(work, {recursive: true, force: true});
+  });
+
+  it('the split build loads Ink and React only in the workbench chunk, through a dynamic import', () => {
+    const lib = path.join(work, 'dist', 'lib');
+    const files = [path.join(lib, 'entry.js'), ...readdirSync(path.join(lib, 'chunks')).map(f => path.join(lib, 'chunks', f))];
+    const usesUi = files.filter(f => /from\s*"(ink|react)"|import\s*"(ink|react)"/.test(readFileSync(f, 'utf8'))).map(f => path.basename(f));
+    expect(usesUi.length).toBeGreaterThan(0);
+    expect(usesUi.every(f => f.startsWith('launch-'))).toBe(true);
+    const entry = readFileSync(path.join(lib, 'entry.js'), 'utf8');
+    expect(entry).toMatch(/import\("\.\/chunks\/launch-[^"]+\.js"\)/);
+    expect(entry).not.toMatch(/from\s*"\.\/chunks\/launch-/);
   });
 
   it('edits, follows a resize, and restores the terminal on Ctrl-C', async () => {
@@ -84,5 +95,46 @@ describe.skipIf(!hasTmux)('real terminal (tmux 80x24)', () => {
     expect(s).not.toContain('Preload');
     expect(show('#{alternate_on}')).toBe('0');
     expect(show('#{cursor_flag}')).toBe('1');
+  }, 60_000);
+
+  it('keeps unsaved edits as a draft on SIGTERM and SIGHUP, and offers it at the next start', async () => {
+    const app = path.join(work, 'dist', 'tapwright.mjs');
+    const cfg = path.join(work, 'cfg-signals');
+    const start = (name: string) =>
+      tmux('new-session', '-d', '-s', name, '-x', '80', '-y', '24', `env TAPWRIGHT_CONFIG_DIR=${cfg} LANG=C.UTF-8 TERM=xterm-256color node ${app}; echo "EXITED $?"; sleep 30`);
+    const nodePid = (name: string) => execFileSync('pgrep', ['-P', tmux('display-message', '-p', '-t', name, '#{pane_pid}').trim(), 'node'], {encoding: 'utf8'}).trim();
+    const shot = (name: string) => tmux('capture-pane', '-p', '-t', name);
+    const wait = async (name: string, what: string, test: (x: string) => boolean) => {
+      const t0 = Date.now();
+      while (!test(shot(name))) {
+        if (Date.now() - t0 > 8000) throw new Error(`timed out waiting for ${what}:\n${shot(name)}`);
+        await new Promise(r => setTimeout(r, 50));
+      }
+    };
+    for (const [signal, code] of [['TERM', 143], ['HUP', 129]] as const) {
+      const name = `sig${signal}`;
+      start(name);
+      await wait(name, 'the first frame', x => x.includes('Preload'));
+      if (shot(name).includes('Restore the unsaved edits')) {
+        tmux('send-keys', '-t', name, 'n');
+        await wait(name, 'the draft discarded', x => x.includes('Draft discarded'));
+      }
+      tmux('send-keys', '-t', name, 'Right', 'Right');
+      tmux('send-keys', '-t', name, '-l', '31');
+      tmux('send-keys', '-t', name, 'Enter');
+      await wait(name, 'the edit', x => /Engaged length\s+31\.0 mm/.test(x));
+      execFileSync('kill', [`-${signal}`, nodePid(name)]);
+      await wait(name, 'the exit', x => x.includes('EXITED'));
+      expect(shot(name)).toContain(`EXITED ${code}`);
+      expect(tmux('display-message', '-p', '-t', name, '#{alternate_on}').trim()).toBe('0');
+      expect(existsSync(path.join(cfg, 'draft.json'))).toBe(true);
+    }
+    start('again');
+    await wait('again', 'the draft offer', x => x.includes('Restore the unsaved edits from'));
+    tmux('send-keys', '-t', 'again', 'y');
+    tmux('send-keys', '-t', 'again', 'Right', 'Right');
+    await wait('again', 'the restored value', x => /Engaged length\s+31\.0 mm/.test(x) && x.includes('* unsaved changes'));
+    tmux('send-keys', '-t', 'again', 'q');
+    await wait('again', 'the exit', x => x.includes('EXITED 0'));
   }, 60_000);
 });

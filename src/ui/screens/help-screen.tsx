@@ -14,7 +14,7 @@ export const SCREEN_GUIDE: readonly string[] = [
   'Repairs: the fixes for a weak or stripped hole, best first.',
   'Presets: saved joints; shipped demos are read-only, "save as" copies them.',
   'Report: the work-order report, written to a Markdown or text file.',
-  'Field marks: > selected, ! a problem (the message line says what and the',
+  'Field marks: SELECT selected, ! a problem (the message line says what and the',
   '  accepted range). * beside the preset name = unsaved changes.',
   'Numbers may carry a unit: 12mm, 0.5in, 40Nm, 30ft-lbf, 20kN, 4500lbf.',
   'Results: 1st thread = the first engaged thread at the loaded face; ax axial,',
@@ -27,7 +27,7 @@ export const SCREEN_GUIDE: readonly string[] = [
 ];
 
 export function helpLines(opts: {ascii: boolean; sources: readonly string[]; rankingRule?: string}): string[] {
-  const lines: string[] = ['Screens', ...SCREEN_GUIDE.map(l => `  ${l}`), ''];
+  const lines: string[] = ['Screens', ...SCREEN_GUIDE.map(l => `  ${l.replace('SELECT', opts.ascii ? '>' : '▶')}`), ''];
   const contexts = [...new Set(KEYMAP.map(b => b.context))] as Context[];
   lines.push('Keys');
   for (const ctx of contexts) {
