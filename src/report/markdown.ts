@@ -9,7 +9,7 @@ import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {VERSION} from '../version.js';
-import {inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
+import {displayFlags, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
 
 export interface WorkOrderNotes {
   asset?: string;
@@ -58,7 +58,8 @@ const UNIT_WORDS: Record<UnitSystem, string> = {
  */
 export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta: MarkdownMeta): string {
   const f: Fmt = {units: meta.units, ascii: false};
-  const v = verdict(result.flags);
+  const flags = displayFlags(result, input, f);
+  const v = verdict(flags);
   const notes = meta.notes ?? {};
   const out: string[] = [];
 
@@ -93,7 +94,7 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
 
   out.push('## Outcome', '');
   out.push(`**${v.word}**: ${v.text}.`, '');
-  const fails = result.flags.filter(x => x.level === 'fail');
+  const fails = flags.filter(x => x.level === 'fail');
   for (const x of fails) out.push(`- **FAIL** ${cell(x.message)}`);
   if (fails.length) out.push('');
 
@@ -107,8 +108,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   }
 
   out.push('## Flags', '');
-  if (result.flags.length === 0) out.push('No flags were raised.', '');
-  else out.push(...table(['Level', 'Check', 'What it means'], result.flags.map(x => [levelWord(x.level), x.code, x.message])), '');
+  if (flags.length === 0) out.push('No flags were raised.', '');
+  else out.push(...table(['Level', 'Check', 'What it means'], flags.map(x => [levelWord(x.level), x.code, x.message])), '');
 
   out.push('## Limits and models used', '');
   for (const l of limitsLines(result, f)) out.push(`- ${l}`);

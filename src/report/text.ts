@@ -7,7 +7,7 @@ import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
-import {inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
+import {displayFlags, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
 
 export const TEXT_WIDTH = 80;
 const LABEL = 36;
@@ -41,6 +41,15 @@ export function wrapText(text: string, first: string, rest: string, width = TEXT
   }
   if (!fresh || lines.length === 0) lines.push(line);
   return lines.map(l => l.trimEnd());
+}
+
+/**
+ * A group title as a heading: the words before the first "(" in capitals, the
+ * bracket as written, so units keep their case ("38 % of 32.8 kN", not "KN").
+ */
+export function headingCase(title: string): string {
+  const i = title.indexOf('(');
+  return i < 0 ? title.toUpperCase() : `${title.slice(0, i).toUpperCase()}${title.slice(i)}`;
 }
 
 type Wrap = (text: string, first: string, rest: string) => string[];
@@ -86,7 +95,8 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
   const wrap: Wrap = (text, first, rest) => wrapText(f.ascii ? toAscii(text) : text, first, rest);
   const heavy = (f.ascii ? '=' : '═').repeat(TEXT_WIDTH);
   const light = (f.ascii ? '-' : '─').repeat(TEXT_WIDTH);
-  const v = verdict(result.flags);
+  const flags = displayFlags(result, input, f);
+  const v = verdict(flags);
   const out: string[] = [];
   out.push(...wrap(`Joint check: ${result.geometry.spec.designation}, bolt ${result.materials.bolt.id}, ${internalWords(result, input)}`, '', '  '));
   out.push(...wrap(`${v.word}: ${v.text}`, 'RESULT ', '       '));
@@ -96,13 +106,13 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
   for (const r of inputRows(result, input, f)) out.push(...rowLines(r, wrap));
 
   for (const g of resultGroups(result, input, f)) {
-    out.push('', ...wrap(g.title.toUpperCase(), '', ''));
+    out.push('', ...wrap(headingCase(g.title), '', ''));
     for (const r of g.rows) out.push(...rowLines(r, wrap));
   }
 
   out.push('', 'FLAGS');
-  if (result.flags.length === 0) out.push('  none');
-  for (const flag of result.flags) {
+  if (flags.length === 0) out.push('  none');
+  for (const flag of flags) {
     const word = levelWord(flag.level).padEnd(6);
     out.push(`  ${word} ${flag.code}`);
     out.push(...wrap(flag.message, '         ', '         '));

@@ -4,6 +4,7 @@
  * Thresholds are exported so the tests can check both sides of each.
  */
 import type {Flag} from '../types.js';
+import {toDisplay, type UnitSystem} from '../units.js';
 
 /** Threads from which the load is shared as in a long engagement (Shigley 9th ed. p. 419: the seventh thread carries nothing). */
 export const SHORT_ENGAGEMENT_THREADS = 6;
@@ -37,10 +38,27 @@ export interface FlagContext {
   modelRangeNotes: string[];
   bearingEstimated: boolean;
   bearingDiameter: number;
+  /**
+   * Units the message numbers are written in (default 'si': kN, mm). The values in the
+   * context stay in working units; only the wording changes. JSON keeps the SI messages.
+   */
+  units?: UnitSystem;
 }
 
-const kN = (n: number): string => `${(n / 1000).toFixed(n >= 100000 ? 0 : n >= 10000 ? 1 : 2)} kN`;
-const mm = (x: number): string => `${x.toFixed(x >= 100 ? 0 : 1)} mm`;
+/** A force (N) in the message's units: kN in SI, lbf in US. */
+function force(c: FlagContext, n: number): string {
+  if (c.units === 'us') {
+    const lbf = toDisplay(n, 'force', 'us');
+    return `${lbf >= 100 ? Math.round(lbf).toString() : lbf.toFixed(1)} lbf`;
+  }
+  return `${(n / 1000).toFixed(n >= 100000 ? 0 : n >= 10000 ? 1 : 2)} kN`;
+}
+
+/** A length (mm) in the message's units: mm in SI, inches (3 decimals) in US. */
+function len(c: FlagContext, x: number): string {
+  if (c.units === 'us') return `${toDisplay(x, 'length', 'us').toFixed(3)} in`;
+  return `${x.toFixed(x >= 100 ? 0 : 1)} mm`;
+}
 const pct = (x: number): string => `${Math.round(x * 100)} %`;
 
 function side(c: FlagContext): string {
@@ -51,12 +69,12 @@ export function stripsAtPreload(c: FlagContext): Flag | undefined {
   const load = c.maxPreload + c.serviceLoad;
   const allowed = c.weakerForce / c.requiredMargin;
   if (load < allowed) return undefined;
-  const service = c.serviceLoad > 0 ? ` plus ${kN(c.serviceLoad)} service load` : '';
-  const margin = c.requiredMargin !== 1 ? ` (${kN(allowed)} with the required margin ${c.requiredMargin})` : '';
+  const service = c.serviceLoad > 0 ? ` plus ${force(c, c.serviceLoad)} service load` : '';
+  const margin = c.requiredMargin !== 1 ? ` (${force(c, allowed)} with the required margin ${c.requiredMargin})` : '';
   return {
     code: 'strips-at-preload',
     level: 'fail',
-    message: `Strips while tightening: up to ${kN(c.maxPreload)} preload${service} against ${kN(c.weakerForce)} to strip ${side(c)}${margin}.`,
+    message: `Strips while tightening: up to ${force(c, c.maxPreload)} preload${service} against ${force(c, c.weakerForce)} to strip ${side(c)}${margin}.`,
   };
 }
 
@@ -75,14 +93,14 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
     return {
       code: 'strips-before-break',
       level: 'fail',
-      message: `Thread strips before the bolt breaks: ${side(c)} strips at ${kN(c.weakerForce)}, the bolt breaks at ${kN(c.boltBreakForce)} (ratio ${ratio.toFixed(2)}, required ${c.requiredMargin}).`,
+      message: `Thread strips before the bolt breaks: ${side(c)} strips at ${force(c, c.weakerForce)}, the bolt breaks at ${force(c, c.boltBreakForce)} (ratio ${ratio.toFixed(2)}, required ${c.requiredMargin}).`,
     };
   }
   if (c.effectiveEngagement < c.requiredAlexander) {
     return {
       code: 'strips-before-break',
       level: 'watch',
-      message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${mm(c.requiredAlexander)} of full thread; only ${mm(c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
+      message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
     };
   }
   return undefined;
@@ -112,7 +130,7 @@ export function engagementBeyondUseful(c: FlagContext): Flag | undefined {
   return {
     code: 'engagement-beyond-useful',
     level: 'info',
-    message: `${mm(c.effectiveEngagement)} of full thread engaged; ${mm(needed)} is enough by both methods. The extra ${mm(c.effectiveEngagement - needed)} adds nothing at the first thread.`,
+    message: `${len(c, c.effectiveEngagement)} of full thread engaged; ${len(c, needed)} is enough by both methods. The extra ${len(c, c.effectiveEngagement - needed)} adds nothing at the first thread.`,
   };
 }
 
@@ -123,14 +141,14 @@ export function blindHoleTooShallow(c: FlagContext): Flag | undefined {
     return {
       code: 'blind-hole-too-shallow',
       level: 'fail',
-      message: `Bolt bottoms out: ${mm(c.engagement)} of bolt goes into a ${mm(c.holeDepth)} deep tapped hole; the torque goes into the bottom, not into preload.`,
+      message: `Bolt bottoms out: ${len(c, c.engagement)} of bolt goes into a ${len(c, c.holeDepth)} deep tapped hole; the torque goes into the bottom, not into preload.`,
     };
   }
   if (c.engagement > full) {
     return {
       code: 'blind-hole-too-shallow',
       level: 'watch',
-      message: `Bolt end runs into the last ${BLIND_HOLE_INCOMPLETE_PITCHES} incomplete threads of the blind hole (full thread to ${mm(Math.max(full, 0))}); only full thread is counted.`,
+      message: `Bolt end runs into the last ${BLIND_HOLE_INCOMPLETE_PITCHES} incomplete threads of the blind hole (full thread to ${len(c, Math.max(full, 0))}); only full thread is counted.`,
     };
   }
   return undefined;
@@ -154,7 +172,7 @@ export function bearingDiameterEstimated(c: FlagContext): Flag | undefined {
   return {
     code: 'bearing-diameter-estimated',
     level: 'info',
-    message: `Bearing diameter under the head estimated at ${mm(c.bearingDiameter)}; measure it and give it for a better torque.`,
+    message: `Bearing diameter under the head estimated at ${len(c, c.bearingDiameter)}; measure it and give it for a better torque.`,
   };
 }
 

@@ -12,7 +12,9 @@ import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
-import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags} from './flags.js';
+import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
+import type {Flag} from '../types.js';
+import type {UnitSystem} from '../units.js';
 
 export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputDraft} from './input.js';
 export type {CheckResult} from './result.js';
@@ -111,32 +113,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const fed = fedStdEngagement(limits, g.stressArea, r.bolt.rm, r.internal.rm);
   const alex = alexander(limits, r.bolt.shear, r.internal.shear, boltBreakForce, r.nut ? r.nut.flats / g.nominal : undefined);
 
-  const flags = jointFlags({
-    internalKind: input.internal,
-    maxPreload: t.preload.max,
-    serviceLoad: input.serviceLoad,
-    weaker,
-    weakerForce,
-    boltBreakForce,
-    requiredMargin: input.requiredMargin,
-    engagedThreads,
-    firstShare,
-    effectiveEngagement: le,
-    requiredFedStd: fed.required,
-    requiredAlexander: alex.required,
-    utilisation: t.utilisation,
-    utilisationLimit: input.utilisation,
-    engagement: input.engagement,
-    pitch: P,
-    ...(input.internal === 'tapped' && input.holeDepth !== undefined ? {holeDepth: input.holeDepth} : {}),
-    isStandardPitch: g.spec.isStandardPitch,
-    designation: g.spec.designation,
-    modelRangeNotes: alex.outOfRange,
-    bearingEstimated: r.bearingSource === 'estimate' && t.method === 'friction',
-    bearingDiameter: r.bearingDiameter,
-  });
-
-  return {
+  const result: CheckResult = {
     geometry: g,
     materials: {
       bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance},
@@ -174,7 +151,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       limitsUsed: 'worst-case',
       limits: {knMax: limits.knMax, esMin: limits.esMin, dsMin: limits.dsMin, enMax: limits.enMax},
       fedStd: {le: fed.le, j: fed.j},
-      alexander: {rs: alex.rs, c1: alex.c1, c2: alex.c2, c3: alex.c3, externalForce: alex.externalPerMm * le, internalForce: alex.internalPerMm * le},
+      alexander: {rs: alex.rs, c1: alex.c1, c2: alex.c2, c3: alex.c3, externalForce: alex.externalPerMm * le, internalForce: alex.internalPerMm * le, outOfRange: alex.outOfRange},
     },
     margin: {
       stripping: weakerForce / boltLoad,
@@ -182,8 +159,53 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       firstThreadYieldBolt: root.vonMises / r.bolt.rp,
       firstThreadYieldInternal: internalVm / r.internal.yield,
     },
-    flags,
+    flags: [],
     notes: [...r.notes, ...g.notes],
     sources: [...SOURCES],
   };
+  result.flags = jointFlags(flagContext(result, input, 'si'));
+  return result;
+}
+
+/** The inputs of the flag rules, read from a result and its input (forces N, lengths mm). */
+function flagContext(result: CheckResult, input: JointInput, units: UnitSystem): FlagContext {
+  const st = result.stripping;
+  const t = result.tightening;
+  const g = result.geometry;
+  return {
+    internalKind: input.internal,
+    maxPreload: t.preload.max,
+    serviceLoad: input.serviceLoad,
+    weaker: st.weaker,
+    weakerForce: Math.min(st.external.force, st.internal.force),
+    boltBreakForce: st.boltBreakForce,
+    requiredMargin: input.requiredMargin,
+    engagedThreads: st.engagedThreads,
+    firstShare: result.firstThreadShare,
+    effectiveEngagement: st.effectiveEngagement,
+    requiredFedStd: st.requiredEngagement.fedStd,
+    requiredAlexander: st.requiredEngagement.alexander,
+    utilisation: t.utilisation,
+    utilisationLimit: input.utilisation,
+    engagement: input.engagement,
+    pitch: g.pitch,
+    ...(input.internal === 'tapped' && input.holeDepth !== undefined ? {holeDepth: input.holeDepth} : {}),
+    isStandardPitch: g.spec.isStandardPitch,
+    designation: g.spec.designation,
+    modelRangeNotes: st.alexander.outOfRange ?? [],
+    bearingEstimated: t.bearingSource === 'estimate' && t.method === 'friction',
+    bearingDiameter: t.bearingDiameter,
+    units,
+  };
+}
+
+/**
+ * The result's flags with their messages written in `units` (US: lbf, in), for the
+ * text and Markdown reports. Same codes, levels and order as result.flags, which
+ * (and so the JSON) stay in SI. A result without the model-range notes (built
+ * outside checkResolved) keeps its flags as they are.
+ */
+export function flagsInUnits(result: CheckResult, input: JointInput, units: UnitSystem): Flag[] {
+  if (units === 'si' || result.stripping.alexander.outOfRange === undefined) return result.flags;
+  return jointFlags(flagContext(result, input, units));
 }

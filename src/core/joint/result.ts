@@ -102,7 +102,16 @@ export interface CheckResult {
     /** FED-STD-H28/2B Formula 1 length Le (equal strengths) and the strength ratio J. */
     fedStd: {le: number; j: number};
     /** Alexander (1977) / VDI 2230 Part 1 factors and stripping forces at the effective engagement (from memory). */
-    alexander: {rs: number; c1: number; c2: number; c3: number; externalForce: number; internalForce: number};
+    alexander: {
+      rs: number;
+      c1: number;
+      c2: number;
+      c3: number;
+      externalForce: number;
+      internalForce: number;
+      /** Where a factor was held at the edge of its published range (the outside-model-range flags), plain words. */
+      outOfRange?: string[];
+    };
   };
   margin: {
     /** Weaker thread's stripping force / largest load it can see. */

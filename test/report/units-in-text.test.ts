@@ -1,0 +1,72 @@
+import {describe, expect, it} from 'vitest';
+import {checkJoint, flagsInUnits, JointInputSchema, type JointInputDraft} from '../../src/core/joint/index.js';
+import {blindHoleTooShallow, stripsAtPreload, type FlagContext} from '../../src/core/joint/flags.js';
+import {formatCheckMarkdown, formatCheckText} from '../../src/report/index.js';
+import {headingCase} from '../../src/report/text.js';
+
+// Unit conversions: 1 lbf = 4.4482216152605 N, 1 in = 25.4 mm, exact by definition (NIST SP 811 Appendix B).
+const LBF = 4.4482216152605;
+
+// Invented demo joint: a 3/8-16 SAE grade 8 screw in a 6061-T6 tapped hole, 0.5 in engaged, 30 ft-lbf.
+const DEMO: JointInputDraft = {
+  thread: '3/8-16 UNC-2A',
+  boltGrade: 'SAE-8',
+  internal: 'tapped',
+  parent: '6061-T6',
+  engagement: 12.7,
+  tightening: 'torque',
+  torque: 40.67,
+};
+const input = JointInputSchema.parse(DEMO);
+const result = checkJoint(input);
+
+describe('report headings keep the case of their units', () => {
+  it('upper-cases the words, not the bracket with the load (was "OF 32.8 KN")', () => {
+    expect(headingCase('First engaged thread (carries 38 % of 32.8 kN)')).toBe('FIRST ENGAGED THREAD (carries 38 % of 32.8 kN)');
+    expect(headingCase('Margins')).toBe('MARGINS');
+    const us = formatCheckText(result, input, {units: 'us'});
+    expect(us).toMatch(/^FIRST ENGAGED THREAD \(carries 38 % of \d+ lbf\)$/m);
+    expect(us).not.toMatch(/LBF|KN\b/);
+    const si = formatCheckText(result, input, {units: 'si'});
+    expect(si).toMatch(/^FIRST ENGAGED THREAD \(carries 38 % of [\d.]+ kN\)$/m);
+  });
+});
+
+describe('flag messages in the report units; JSON (result.flags) stays SI', () => {
+  it('strips-before-break quotes lbf in a US report, kN in the result', () => {
+    const weaker = Math.min(result.stripping.external.force, result.stripping.internal.force);
+    const si = result.flags.find(f => f.code === 'strips-before-break');
+    expect(si?.message).toContain(`${(weaker / 1000).toFixed(1)} kN`);
+    const us = flagsInUnits(result, input, 'us').find(f => f.code === 'strips-before-break');
+    expect(us?.message).toContain(`${Math.round(weaker / LBF)} lbf`);
+    expect(us?.message).not.toMatch(/kN|mm/);
+    // Same codes, levels and order in both unit systems.
+    expect(flagsInUnits(result, input, 'us').map(f => `${f.level}:${f.code}`)).toEqual(result.flags.map(f => `${f.level}:${f.code}`));
+    expect(flagsInUnits(result, input, 'si')).toBe(result.flags);
+  });
+
+  it('the text and Markdown reports in US units carry no kN or mm in their flags', () => {
+    const text = formatCheckText(result, input, {units: 'us'});
+    const flags = text.slice(text.indexOf('\nFLAGS\n'), text.indexOf('\nNOTES\n'));
+    expect(flags).toMatch(/lbf/);
+    expect(flags).not.toMatch(/ kN| mm\b/);
+    const md = formatCheckMarkdown(result, input, {date: new Date('2026-01-01T00:00:00Z'), units: 'us'});
+    const mdFlags = md.slice(md.indexOf('## Flags'), md.indexOf('## Limits'));
+    expect(mdFlags).toMatch(/lbf/);
+    expect(mdFlags).not.toMatch(/ kN| mm\b/);
+  });
+
+  it('the rules write forces and lengths in the context units', () => {
+    const c: FlagContext = {
+      internalKind: 'tapped', maxPreload: 50000, serviceLoad: 0, weaker: 'internal', weakerForce: 40000, boltBreakForce: 46400,
+      requiredMargin: 1, engagedThreads: 8, firstShare: 0.38, effectiveEngagement: 12, requiredFedStd: 11, requiredAlexander: 10,
+      utilisation: 0.9, utilisationLimit: 0.9, engagement: 12, pitch: 1.5, holeDepth: 10, isStandardPitch: true,
+      designation: 'M10x1.5-6H/6g', modelRangeNotes: [], bearingEstimated: false, bearingDiameter: 12.8,
+    };
+    expect(stripsAtPreload(c)?.message).toMatch(/50\.0 kN preload against 40\.0 kN/);
+    // 50 000 N / 4.4482216152605 = 11 240.4 lbf; 40 000 N = 8 992.4 lbf.
+    expect(stripsAtPreload({...c, units: 'us'})?.message).toMatch(/11240 lbf preload against 8992 lbf/);
+    // 12 mm = 0.472 in, 10 mm = 0.394 in.
+    expect(blindHoleTooShallow({...c, units: 'us'})?.message).toMatch(/0\.472 in of bolt goes into a 0\.394 in deep/);
+  });
+});
