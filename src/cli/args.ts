@@ -14,9 +14,28 @@ export interface ParsedOptions {
   positionals: string[];
 }
 
+/**
+ * "--load -5" -> "--load=-5" for an option that takes a value, so a negative
+ * number reaches the option's range check (and its message naming the range)
+ * instead of the parser's "argument is ambiguous".
+ */
+export function joinNegativeValues(args: string[], options: OptionSpec): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i] as string;
+    const next = args[i + 1];
+    const name = a.startsWith('--') && !a.includes('=') ? a.slice(2) : undefined;
+    if (name !== undefined && options[name]?.type === 'string' && next !== undefined && /^-[\d.]/.test(next)) {
+      out.push(`${a}=${next}`);
+      i++;
+    } else out.push(a);
+  }
+  return out;
+}
+
 export function parseOptions(args: string[], options: OptionSpec, allowPositionals = true): ParsedOptions {
   try {
-    const r = parseArgs({args, options, strict: true, allowPositionals});
+    const r = parseArgs({args: joinNegativeValues(args, options), options, strict: true, allowPositionals});
     return {values: r.values as ParsedOptions['values'], positionals: r.positionals};
   } catch (e) {
     const msg = e instanceof Error ? e.message : String(e);
@@ -27,9 +46,14 @@ export function parseOptions(args: string[], options: OptionSpec, allowPositiona
       const name = needsValue[1]?.split(',').pop()?.trim() ?? '';
       throw new UsageError(`${name} needs a value`, name);
     }
+    const ambiguous = /Option '([^']+?)(?: <value>)?' argument is ambiguous/.exec(msg);
+    if (ambiguous) {
+      const name = ambiguous[1]?.split(',').pop()?.trim() ?? '';
+      throw new UsageError(`${name} needs a value; a value starting with "-" is written ${name}=-VALUE`, name);
+    }
     const unexpected = /Unexpected argument '([^']+)'/.exec(msg);
     if (unexpected) throw new UsageError(`unexpected argument "${unexpected[1]}"; see --help`);
-    throw new UsageError(msg.replace(/\. To specify.*$/s, ''));
+    throw new UsageError(msg.replace(/\.?\s*(Did you forget|To specify).*$/s, ''));
   }
 }
 
@@ -60,8 +84,10 @@ export function quantity(option: string, text: string, dimension: Dimension, rul
   const p = parseQuantity(text, dimension, rule.defaultUnit);
   const range = rule.rangeText ? `; accepted: ${rule.rangeText}` : '';
   if (!p.ok) {
-    const units = dimension === 'ratio' ? '' : ` (units: ${acceptedUnits(dimension)})`;
-    throw new UsageError(`${option} ${p.error}${range}${units}`, option);
+    // The parser's message may list the units already ("... (accepted: mm, in, ...)"): say them once.
+    const error = p.error.replace('(accepted: ', '(units: ');
+    const units = dimension === 'ratio' || error.includes('(units: ') ? '' : ` (units: ${acceptedUnits(dimension)})`;
+    throw new UsageError(`${option} ${error}${range}${units}`, option);
   }
   const v = p.value;
   const belowMin = rule.min !== undefined && (rule.exclusiveMin ? v <= rule.min : v < rule.min);
