@@ -158,11 +158,13 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     bearingDiameter = input.bearingDiameter;
     bearingSource = 'input';
   } else {
-    const h = geometry.spec.family === 'metric' ? hexHeadBearing(d) : undefined;
+    const family = geometry.spec.family;
+    const h = family === 'metric' ? hexHeadBearing(d) : family === 'unified' ? hexHeadBearing(d, 'inch') : undefined;
     if (h) {
       bearingDiameter = (h.dwMin + h.clearanceHole) / 2;
       bearingSource = 'standard';
-      notes.push(`Bearing diameter ${round(bearingDiameter)} mm = (dw,min ${h.dwMin} + hole ${h.clearanceHole})/2 (${h.provenance.source}).`);
+      const face = family === 'metric' ? 'dw,min' : 'bearing face';
+      notes.push(`Bearing diameter ${round(bearingDiameter)} mm = (${face} ${round(h.dwMin)} + hole ${round(h.clearanceHole)})/2 (${h.provenance.source}).`);
     } else {
       bearingDiameter = BEARING_RATIO_ESTIMATE * d;
       bearingSource = 'estimate';

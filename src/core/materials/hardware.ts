@@ -9,7 +9,7 @@
  * - M3 to M6: ISO 273 medium clearance hole read from a stored page reproducing the
  *   ISO 273 table; dw,min from memory.
  * - M27 to M36 (M27 up: product grade B): from memory.
- * Unified (inch) hexagon heads: no source at hand, so no default is offered.
+ * Unified (inch) hex cap screw heads, 1/4 to 1 in: inch-hex-heads.ts.
  *
  * ISO 4032 regular (style 1) hexagon nuts: the preferred sizes (M3 to M12, M16, M20,
  * M24, M30, M36) read from a stored copy of BS EN ISO 4032:2001 Table 1 (m max, m min,

@@ -13,6 +13,7 @@ import {BOLT_GRADE_ROWS} from './bolt-grades.js';
 import {NUT_CLASS_ROWS} from './nut-classes.js';
 import {PARENT_MATERIAL_ROWS} from './parent-materials.js';
 import {HEX_HEAD_ROWS, NUT_DIMENSION_ROWS} from './hardware.js';
+import {INCH_HEX_HEAD_ROWS} from './inch-hex-heads.js';
 
 export type {BoltGrade, NutClass, ParentMaterial, MaterialData} from './schema.js';
 export {validateMaterialData, MEMORY_WORDING, MaterialDataSchema, BoltGradeSchema, NutClassSchema, ParentMaterialSchema} from './schema.js';
@@ -24,7 +25,11 @@ const DATA = validateMaterialData({
   parentMaterials: PARENT_MATERIAL_ROWS,
   hexHeads: HEX_HEAD_ROWS,
   nutDimensions: NUT_DIMENSION_ROWS,
+  inchHexHeads: INCH_HEX_HEAD_ROWS,
 });
+
+/** 1 in = 25.4 mm exactly (NIST SP 811). */
+const MM_PER_IN = 25.4;
 
 /** Sizes closer than this are the same size, mm (inch sizes convert to long decimals). */
 const SIZE_EPS = 1e-6;
@@ -100,14 +105,34 @@ export function listNutClasses(): NutClass[] {
 }
 
 /**
- * Hexagon-head bearing data for a metric nominal diameter (mm): dw,min of
- * ISO 4014/4017 and the ISO 273 medium clearance hole, both mm. The VDI 2230
+ * Hexagon-head bearing data for a nominal diameter (mm), both results in mm; the VDI 2230
  * default bearing diameter is DKm = (dwMin + clearanceHole) / 2.
- * Undefined for sizes not tabulated (including every inch size: no source at hand).
+ * - metric: dw,min of ISO 4014/4017 and the ISO 273 medium clearance hole;
+ * - inch (1/4 to 1 in): ASME B18.2.1 hex cap screw, bearing face taken as the minimum width
+ *   across flats (from memory, see inch-hex-heads.ts), and the ASME B18.2.8 normal-fit hole.
+ * Undefined for sizes not tabulated.
  */
-export function hexHeadBearing(nominalMm: number): {dwMin: number; clearanceHole: number; provenance: Provenance} | undefined {
+export function hexHeadBearing(
+  nominalMm: number,
+  system: 'metric' | 'inch' = 'metric',
+): {dwMin: number; clearanceHole: number; provenance: Provenance} | undefined {
+  if (system === 'inch') {
+    const h = inchHexHead(nominalMm);
+    return h ? {dwMin: h.flatsMin, clearanceHole: h.clearanceHole, provenance: h.provenance} : undefined;
+  }
   const r = DATA.hexHeads.find(h => Math.abs(h.d - nominalMm) < 1e-3);
   return r ? {dwMin: r.dwMin, clearanceHole: r.clearanceHole, provenance: r.provenance} : undefined;
+}
+
+/**
+ * ASME B18.2.1 hex cap screw width across flats (max, min) and the ASME B18.2.8 normal-fit
+ * clearance hole for an inch nominal diameter given in mm (1/4 to 1 in); all results in mm.
+ * Undefined for sizes not tabulated.
+ */
+export function inchHexHead(nominalMm: number): {size: string; flatsMax: number; flatsMin: number; clearanceHole: number; provenance: Provenance} | undefined {
+  const r = DATA.inchHexHeads.find(h => Math.abs(h.dIn * MM_PER_IN - nominalMm) < 1e-3);
+  if (!r) return undefined;
+  return {size: r.size, flatsMax: r.flatsMaxIn * MM_PER_IN, flatsMin: r.flatsMinIn * MM_PER_IN, clearanceHole: r.clearanceHoleIn * MM_PER_IN, provenance: r.provenance};
 }
 
 /**

@@ -102,6 +102,25 @@ export const HexHeadRowSchema = z
   .strict()
   .refine(r => r.clearanceHole > r.d && r.dwMin > r.clearanceHole, {message: 'need d < clearance hole < dw,min'});
 
+/** Inch hex cap screw head and clearance hole, in inches as the tables print them. */
+export const InchHexHeadRowSchema = z
+  .object({
+    /** Size as written in the trade, e.g. "1/2". */
+    size: z.string().min(1),
+    /** Nominal diameter, in. */
+    dIn: size,
+    /** Width across flats F, max and min, in. */
+    flatsMaxIn: size,
+    flatsMinIn: size,
+    /** Clearance hole, normal fit, in. */
+    clearanceHoleIn: size,
+    provenance: ProvenanceSchema,
+  })
+  .strict()
+  .refine(r => r.clearanceHoleIn > r.dIn && r.flatsMinIn > r.clearanceHoleIn && r.flatsMinIn < r.flatsMaxIn, {
+    message: 'need d < clearance hole < flats min < flats max',
+  });
+
 export const NutDimensionRowSchema = z
   .object({
     d: size,
@@ -118,6 +137,7 @@ export type ParentMaterial = z.output<typeof ParentMaterialSchema>;
 export type NutClass = z.output<typeof NutClassSchema>;
 export type HexHeadRow = z.output<typeof HexHeadRowSchema>;
 export type NutDimensionRow = z.output<typeof NutDimensionRowSchema>;
+export type InchHexHeadRow = z.output<typeof InchHexHeadRowSchema>;
 
 /** Rows of one id must not overlap in size; a row's range is sizeMinMm (exclusive) to sizeMaxMm (inclusive). */
 function noOverlap<T extends {id: string; sizeMinMm?: number | undefined; sizeMaxMm?: number | undefined}>(rows: T[], ctx: z.RefinementCtx): void {
@@ -161,6 +181,10 @@ export const MaterialDataSchema = z.object({
     .superRefine((rows, ctx) => uniqueIds(rows, ctx, 'parent material')),
   hexHeads: z.array(HexHeadRowSchema).superRefine(uniqueSizes),
   nutDimensions: z.array(NutDimensionRowSchema).superRefine(uniqueSizes),
+  inchHexHeads: z
+    .array(InchHexHeadRowSchema)
+    .default([])
+    .superRefine((rows, ctx) => uniqueSizes(rows.map(r => ({d: r.dIn})), ctx)),
 });
 
 export type MaterialData = z.output<typeof MaterialDataSchema>;

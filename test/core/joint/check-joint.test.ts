@@ -125,9 +125,18 @@ describe('checkJoint', () => {
   it('special pitch is flagged; an inch size without a head table gets an estimated bearing diameter and says so', () => {
     const special = run({thread: 'M10x1.1', parent: 'S355', engagement: 15});
     expect(special.flags.map(f => f.code)).toContain('nonstandard-pitch');
-    const inch = run({thread: '1/4-20 UNC', boltGrade: 'SAE-5', parent: 'S355', engagement: 8});
+    const inch = run({thread: '1-1/4-7 UNC', boltGrade: 'SAE-5', parent: 'S355', engagement: 40});
     expect(inch.tightening.bearingSource).toBe('estimate');
     expect(inch.flags.map(f => f.code)).toContain('bearing-diameter-estimated');
+  });
+
+  it('1/2-13 UNC: bearing diameter from the inch hex cap screw table, (F min + normal hole)/2 (ASME B18.2.1, ASME B18.2.8; bearing face from memory)', () => {
+    const r = run({thread: '1/2-13 UNC', boltGrade: 'SAE-5', parent: 'S355', engagement: 12});
+    // (0.736 + 0.562) / 2 = 0.649 in = 16.4846 mm
+    expect(r.tightening.bearingSource).toBe('standard');
+    expect(r.tightening.bearingDiameter).toBeCloseTo(16.4846, 4);
+    expect(r.flags.map(f => f.code)).not.toContain('bearing-diameter-estimated');
+    expect(r.notes.join(' ')).toMatch(/from memory/);
   });
 
   it('service load adds to the largest bolt load in full (conservative: no joint stiffness factor)', () => {

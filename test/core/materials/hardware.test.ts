@@ -1,5 +1,5 @@
 import {describe, expect, it} from 'vitest';
-import {boltGrade, hexHeadBearing, nutDimensions} from '../../../src/core/materials/index.js';
+import {boltGrade, hexHeadBearing, inchHexHead, nutDimensions} from '../../../src/core/materials/index.js';
 
 describe('hexagon head bearing face and clearance hole', () => {
   // dw,min of ISO 4014/4017 product grade A and the ISO 273 medium-series clearance hole, mm,
@@ -29,7 +29,7 @@ describe('hexagon head bearing face and clearance hole', () => {
     expect(hexHeadBearing(6)?.provenance.source).toContain('from memory');
   });
 
-  it('offers no default for inch sizes or untabulated metric sizes (no source at hand)', () => {
+  it('the metric table has no inch sizes and no untabulated metric sizes', () => {
     expect(hexHeadBearing(12.7)).toBeUndefined();
     expect(hexHeadBearing(7)).toBeUndefined();
   });
@@ -58,6 +58,50 @@ describe('hexagon head bearing face and clearance hole', () => {
       expect(Math.abs(t - ma)).toBeLessThan(0.5);
     });
   }
+});
+
+describe('inch hex cap screw heads (ASME B18.2.1) and normal-fit clearance holes (ASME B18.2.8)', () => {
+  // Width across flats F max/min, in: ASME B18.2.1 hex cap screw table (as reproduced by distributors).
+  // Normal-fit clearance hole, in: ASME B18.2.8-1999 (a distributor table citing it; the 1/4 to 7/16
+  // drills 9/32, 11/32, 13/32, 15/32 also in Machinery's Handbook 31st ed. Table 1a).
+  const IN = 25.4;
+  const rows: [size: string, d: number, fMax: number, fMin: number, hole: number][] = [
+    ['1/4', 0.25, 0.438, 0.428, 0.281],
+    ['5/16', 0.3125, 0.5, 0.489, 0.344],
+    ['3/8', 0.375, 0.562, 0.551, 0.406],
+    ['7/16', 0.4375, 0.625, 0.612, 0.469],
+    ['1/2', 0.5, 0.75, 0.736, 0.562],
+    ['5/8', 0.625, 0.938, 0.922, 0.688],
+    ['3/4', 0.75, 1.125, 1.1, 0.812],
+    ['7/8', 0.875, 1.312, 1.285, 0.938],
+    ['1', 1, 1.5, 1.469, 1.094],
+  ];
+  for (const [size, d, fMax, fMin, hole] of rows) {
+    it(`${size} in: F ${fMin} to ${fMax} in (ASME B18.2.1), normal hole ${hole} in (ASME B18.2.8)`, () => {
+      const h = inchHexHead(d * IN);
+      expect(h?.size).toBe(size);
+      expect(h?.flatsMax).toBeCloseTo(fMax * IN, 9);
+      expect(h?.flatsMin).toBeCloseTo(fMin * IN, 9);
+      expect(h?.clearanceHole).toBeCloseTo(hole * IN, 9);
+      const b = hexHeadBearing(d * IN, 'inch');
+      expect(b?.clearanceHole).toBeCloseTo(hole * IN, 9);
+      expect(b?.dwMin).toBeCloseTo(fMin * IN, 9);
+    });
+  }
+
+  it('labels the bearing face (taken as F min) as from memory: the B18.2.1 washer-face minimum was not read', () => {
+    const b = hexHeadBearing(0.5 * IN, 'inch');
+    expect(b?.provenance.kind).toBe('memory');
+    expect(b?.provenance.source).toContain('from memory');
+    expect(b?.provenance.source).toContain('ASME B18.2.1');
+    expect(b?.provenance.source).toContain('ASME B18.2.8');
+  });
+
+  it('no inch row below 1/4 or above 1 in, and no metric size in the inch table', () => {
+    expect(inchHexHead(0.19 * IN)).toBeUndefined(); // #10
+    expect(inchHexHead(1.125 * IN)).toBeUndefined();
+    expect(hexHeadBearing(10, 'inch')).toBeUndefined();
+  });
 });
 
 describe('ISO 4032 style 1 hexagon nuts', () => {
