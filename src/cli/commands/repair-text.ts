@@ -52,7 +52,8 @@ function torque(nm: number | null, units: UnitSystem): string {
 
 function drill(mm: number | null, units: UnitSystem): string {
   if (mm === null) return '-';
-  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(3) : Number(mm.toFixed(2)).toString();
+  // One decimal at least, two when the size has them: 9.0, 8.5, 8.75 (a bare "9" read as a count).
+  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(3) : mm.toFixed(2).replace(/(\.\d)0$/, '$1');
 }
 
 function status(o: RepairOption): string {
@@ -77,7 +78,7 @@ function detail(o: RepairOption, units: UnitSystem): string {
   }
   if (o.boltThread !== undefined && o.kind === 'oversize') parts.push(`Screw ${o.boltThread}.`);
   if (o.screwLengthChange !== null && o.screwLengthChange > 1e-9) parts.push(`Screw ${length(o.screwLengthChange, units)} ${L} longer.`);
-  if (o.tappedDepth !== null && o.drilledDepth !== null) parts.push(`Tap ${length(o.tappedDepth, units)}, drill ${length(o.drilledDepth, units)} ${L} full diameter.`);
+  if (o.tappedDepth !== null && o.drilledDepth !== null) parts.push(`Tap ${length(o.tappedDepth, units)} ${L} deep (full thread), drill ${length(o.drilledDepth, units)} ${L} deep at full diameter.`);
   if (o.feasible) for (const n of o.notes) parts.push(`${n[0]?.toUpperCase() ?? ''}${n.slice(1)}.`);
   return parts.join(' ');
 }
@@ -100,7 +101,7 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string): 
     h.depthAvailable !== null ? `${h.through ? 'thickness' : 'depth available'} ${length(h.depthAvailable, units)} ${L}` : null,
     h.wall !== null ? `edge distance ${length(h.wall, units)} ${L}` : null,
   ].filter(Boolean);
-  out.push(...wrap(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin}.`, '', '  '));
+  out.push(...wrap(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin.toFixed(2)}.`, '', '  '));
   if (plan.asIs) {
     const label = h.state === 'stripped' ? 'As designed, before the damage' : 'As is';
     out.push(...wrap(`${label}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`, '', '  '));

@@ -9,8 +9,11 @@ import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {parseOptions, quantity, str, type OptionSpec} from '../args.js';
 import {JointInputError} from '../../core/joint/index.js';
+import {resolveGeometry} from '../../core/joint/resolve.js';
+import {nutClassProblem} from '../../core/materials/index.js';
+import {formatQuantity} from '../../core/units.js';
 import {parseSolidInsertTable, planRepairs, RepairInputSchema, REPAIR_RANKING_RULE, EFFORT_SCALE_TEXT, type RepairInputDraft, type SolidInsertTable} from '../../core/repair/index.js';
-import type {JointInputDraft} from '../../core/joint/input.js';
+import type {JointInput, JointInputDraft} from '../../core/joint/input.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
 import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
@@ -109,6 +112,22 @@ function joinNegativeValues(args: string[]): string[] {
   return out;
 }
 
+/** Nominal diameter of the joint's thread, mm (the joint is already validated, so it parses). */
+function throughNominal(thread: string): number {
+  return resolveGeometry(thread).nominal;
+}
+
+/** "bolt 8.8 in AlSi7Mg-T6", "bolt Rm 900 MPa given in parent Rm 230 MPa", "bolt 8.8 with a class 8 nut", in the display units. */
+export function headingParts(joint: JointInput, units: UnitSystem): string {
+  const stress = (v: number | undefined) => (v === undefined ? '-' : formatQuantity(v, 'stress', units));
+  const custom = joint.boltRm !== undefined || joint.boltRp !== undefined;
+  const given = [joint.boltRm !== undefined ? `Rm ${stress(joint.boltRm)}` : '', joint.boltRp !== undefined ? `Rp0.2 ${stress(joint.boltRp)}` : ''].filter(Boolean).join(', ');
+  const bolt = custom ? `bolt ${given} given` : `bolt ${joint.boltGrade}`;
+  if (joint.internal === 'nut') return `${bolt} with a class ${joint.nutClass ?? '-'} nut`;
+  const parent = joint.parent ?? `parent Rm ${stress(joint.parentRm)}${joint.parentShear !== undefined ? `, shear ${stress(joint.parentShear)}` : ''}`;
+  return `${bolt} in ${parent}`;
+}
+
 const REPAIR_FIELD_OPTION: Record<string, string> = {
   holeState: '--stripped-depth', strippedDepth: '--stripped-depth', depthAvailable: '--depth-available', wall: '--wall',
   margin: '--margin', nutClass: '--through-nut', nutHeight: '--through-nut-height', nutFlats: '--through-nut-flats',
@@ -116,7 +135,7 @@ const REPAIR_FIELD_OPTION: Record<string, string> = {
 
 async function loadPreset(name: string, io: CliIo): Promise<{joint?: JointInputDraft; repair?: RepairInputDraft}> {
   const {resolvePreset} = await import('../../store/index.js');
-  const p = resolvePreset(name, io.env, 'joint');
+  const p = resolvePreset(name, io.env, 'joint', m => io.err(`tapwright: ${m}\n`));
   if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
   return {joint: p.joint, ...(p.repair ? {repair: p.repair} : {})};
 }
@@ -163,7 +182,13 @@ export const command: Command = {
     const nutFlats = len('through-nut-flats', 1, 1000);
     if (nutFlats !== undefined) draft.nutFlats = nutFlats;
     const nut = str(values, 'through-nut');
-    if (nut !== undefined) draft.nutClass = nut.trim();
+    if (nut !== undefined) {
+      if (nut.trim() === '') throw new UsageError('--through-nut needs a value, e.g. --through-nut 8', '--through-nut');
+      draft.nutClass = nut.trim();
+      // An unknown class is bad input (exit 2), not a through-bolt option that "cannot be done".
+      const problem = nutClassProblem(draft.nutClass, throughNominal(joint.thread));
+      if (problem !== undefined) throw new UsageError(`--through-nut: ${problem}`, '--through-nut');
+    }
     if (str(values, 'margin') !== undefined) draft.margin = joint.requiredMargin;
     const tableFile = str(values, 'solid-table');
     const table = tableFile === undefined ? undefined : await loadTable(tableFile, io);
@@ -174,7 +199,11 @@ export const command: Command = {
       throw new UsageError(`${option}: ${issue?.message ?? 'invalid'}`, option);
     }
     if (repair.data.holeState === 'stripped' && repair.data.strippedDepth !== undefined && repair.data.strippedDepth > joint.engagement + 1e-9) {
-      throw new UsageError(`--stripped-depth ${repair.data.strippedDepth} mm is beyond the engaged length (--engage ${joint.engagement} mm); use "all"`, '--stripped-depth');
+      const u = units as UnitSystem;
+      throw new UsageError(
+        `--stripped-depth ${lengthText(repair.data.strippedDepth, u)} is beyond the engaged length (--engage ${lengthText(joint.engagement, u)}); use "all"`,
+        '--stripped-depth',
+      );
     }
 
     let plan;
@@ -193,8 +222,7 @@ export const command: Command = {
     } else if (format === 'markdown') {
       io.out(planMarkdown(plan, joint, {date: io.now(), units: units as UnitSystem, ...(presetName !== undefined ? {presetName} : {})}));
     } else {
-      const materials = joint.parent ?? `parent Rm ${joint.parentRm ?? '-'} MPa`;
-      const heading = `tapwright repair - ${plan.thread}, bolt ${joint.boltGrade} in ${materials}, engaged ${lengthText(joint.engagement, units as UnitSystem)}`;
+      const heading = `tapwright repair - ${plan.thread}, ${headingParts(joint, units as UnitSystem)}, engaged ${lengthText(joint.engagement, units as UnitSystem)}`;
       io.out(planText(plan, units as UnitSystem, heading));
     }
     return anyMeets ? EXIT.ok : EXIT.fail;
