@@ -203,7 +203,7 @@ export const command: Command = {
     let base: Record<string, unknown> | undefined;
     if (presetName !== undefined) {
       const {resolvePreset} = await import('../../store/index.js');
-      const p = resolvePreset(presetName, io.env, 'screw');
+      const p = resolvePreset(presetName, io.env, 'screw', m => io.err(`tapwright: ${m}\n`));
       if (!p.screw) throw new UsageError(`--preset "${presetName}" has no power-screw inputs`, '--preset');
       base = {...p.screw};
     }
