@@ -9,7 +9,7 @@ import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
 import {normaliseKey} from './keys.js';
 import {hintLines} from './keymap.js';
 import {contextsOf, handleKeys, isDirty, shownValues, type Screen, type WorkbenchState} from './state/workbench.js';
-import {evaluate, evaluateRepairs} from './state/evaluate.js';
+import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
 import {formatField} from './state/field-text.js';
 import {fieldById} from './state/fields.js';
 import type {WorkbenchServices} from './services.js';
@@ -80,7 +80,7 @@ function PresetLine({state, width}: {state: WorkbenchState; width: number}) {
   );
 }
 
-function MessageLine({state, ev, width}: {state: WorkbenchState; ev: ReturnType<typeof evaluate>; width: number}) {
+function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Record<string, string>; error?: string}; width: number}) {
   const t = useTheme();
   let text = '';
   let isError = false;
@@ -140,6 +140,7 @@ export interface AppProps {
 function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: WorkbenchServices; columns: number; rows: number}) {
   const t = useTheme();
   const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
+  const sev = state.mode === 'screw' ? evaluateScrew(shownValues(state), svc, state.units, state.ascii) : undefined;
   const caution = cautionLines(columns);
   const height = rows - 1;
   const hints = hintLines(contextsOf(state), t.ascii, columns);
@@ -147,7 +148,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   let body: React.ReactNode;
   switch (state.screen) {
     case 'joint':
-      body = <JointScreen state={state} ev={ev} svc={svc} width={columns} height={bodyH} />;
+      body = <JointScreen state={state} ev={ev} sev={sev} svc={svc} width={columns} height={bodyH} />;
       break;
     case 'presets':
       body = <PresetsScreen state={state} svc={svc} width={columns} height={bodyH} />;
@@ -160,7 +161,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       break;
     case 'help': {
       const plan = evaluateRepairs(shownValues(state), svc, ev).plan;
-      body = <HelpScreen ascii={t.ascii} sources={ev.result?.sources ?? []} rankingRule={plan?.rankingRule} scroll={state.helpScroll} width={columns} height={bodyH} />;
+      body = <HelpScreen ascii={t.ascii} sources={[...(ev.result?.sources ?? []), ...(sev?.result?.sources ?? [])]} rankingRule={plan?.rankingRule} scroll={state.helpScroll} width={columns} height={bodyH} />;
       break;
     }
   }
@@ -171,7 +172,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       <Box height={bodyH} width={columns}>
         {body}
       </Box>
-      <MessageLine state={state} ev={ev} width={columns} />
+      <MessageLine state={state} ev={state.screen === 'joint' && sev ? sev : ev} width={columns} />
       {caution.map((l, i) => (
         <Text key={`c${i}`} color={t.tone('watch')}>
           {l}

@@ -77,9 +77,11 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   let name = presetName;
   let readOnly = true;
   let values: FormValues;
+  let mode: 'joint' | 'screw' = 'joint';
   try {
     const p = svc.presets.load(presetName);
     ({name, readOnly, values} = p);
+    if (p.kind === 'screw') mode = 'screw';
   } catch (e) {
     if (opts.preset !== undefined) {
       io.err(`tapwright: --preset "${opts.preset}": ${e instanceof Error ? e.message : String(e)}; see tapwright presets list\n`);
@@ -105,7 +107,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     stdout.rows = Number(io.env.LINES) || 24;
   }
   const units = opts.units ?? saved?.units ?? 'si';
-  const initial = initialState({name, readOnly, values, units, ascii, draft, message, size: {columns: stdout.columns, rows: stdout.rows}});
+  const initial = initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}});
   const theme = makeTheme(wantsColor(tenv, opts.color), ascii);
 
   let latest: WorkbenchState = initial;
@@ -114,7 +116,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   const keepDraft = (s: WorkbenchState) => {
     try {
       if (isDirty(s) && !s.draftOffer) {
-        svc.draft.save({savedAt: io.now().toISOString(), presetName: s.preset.name, values: s.values});
+        svc.draft.save({savedAt: io.now().toISOString(), presetName: s.preset.name, values: s.values, mode: s.mode});
         draftKept = true;
       } else if (!s.draftOffer) svc.draft.clear();
     } catch {

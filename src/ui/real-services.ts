@@ -8,6 +8,8 @@ import path from 'node:path';
 import {checkJoint} from '../core/joint/index.js';
 import type {JointInput} from '../core/joint/input.js';
 import {planRepairs} from '../core/repair/index.js';
+import {checkScrew} from '../core/screw/index.js';
+import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
@@ -17,7 +19,9 @@ import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
 
 export function presetValues(p: Preset): FormValues {
-  return {joint: structuredClone(p.joint ?? {thread: '', engagement: 0}), hole: structuredClone(p.repair ?? {})} as FormValues;
+  const v = {joint: structuredClone(p.joint ?? {thread: 'M10', engagement: 10}), hole: structuredClone(p.repair ?? {})} as FormValues;
+  if (p.screw) v.screw = structuredClone(p.screw);
+  return v;
 }
 
 const sizeText = (r: {sizeMinMm?: number; sizeMaxMm?: number}) =>
@@ -60,6 +64,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
   return {
     store,
     check: (input: JointInput) => checkJoint(input),
+    checkScrew: (input: ScrewInput) => checkScrew(input),
     designations,
     picks: (source, units) => picks(source, units),
     repairs: (joint, hole) => planRepairs(joint, hole),
@@ -75,16 +80,21 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
         })),
       load(name) {
         const p = getPreset(name);
-        if (p.kind !== 'joint') throw new Error(`"${p.name}" is a power-screw preset: the workbench's power-screw mode is not in this build; use tapwright screw --preset "${p.name}"`);
         const readOnly = store.list().find(s => s.name === p.name)?.readOnly ?? false;
         loaded.set(p.name, {revision: p.revision, notes: p.notes});
-        return {name: p.name, readOnly, values: presetValues(p), notes: p.notes.text};
+        return {name: p.name, readOnly, kind: p.kind, values: presetValues(p), notes: p.notes.text};
       },
-      save(name, values, {overwrite}) {
+      save(name, values, {overwrite, kind = 'joint'}) {
         const before = loaded.get(name);
         const existing = overwrite ? store.get(name) : undefined;
         const saved = store.save(
-          {name, kind: 'joint', joint: values.joint as JointInput, repair: values.hole, notes: existing?.notes ?? before?.notes ?? {}},
+          {
+            name,
+            kind,
+            ...(kind === 'joint' || values.joint.thread ? {joint: values.joint as JointInput, repair: values.hole} : {}),
+            ...(values.screw ? {screw: values.screw as ScrewInput} : {}),
+            notes: existing?.notes ?? before?.notes ?? {},
+          },
           {overwrite, ...(before && overwrite ? {expectedRevision: before.revision} : {})},
         );
         loaded.set(saved.name, {revision: saved.revision, notes: saved.notes});

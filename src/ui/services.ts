@@ -8,6 +8,8 @@ import type {JointInput} from '../core/joint/input.js';
 import type {RepairInput} from '../core/repair/input.js';
 import type {RepairPlan} from '../core/repair/types.js';
 import type {Provenance} from '../core/types.js';
+import type {ScrewInput} from '../core/screw/input.js';
+import type {ScrewResult} from '../core/screw/result.js';
 import type {FormValues, PickSource} from './state/fields.js';
 
 /** One entry of a picker (grade, material, nut class) with where its numbers come from. */
@@ -34,6 +36,7 @@ export interface PresetEntry {
 export interface LoadedPreset {
   name: string;
   readOnly: boolean;
+  kind?: 'joint' | 'screw';
   values: FormValues;
   notes?: string;
 }
@@ -42,6 +45,7 @@ export interface Draft {
   savedAt: string;
   presetName: string;
   values: FormValues;
+  mode?: 'joint' | 'screw';
 }
 
 export interface ReportMeta {
@@ -54,7 +58,7 @@ export interface PresetPort {
   list(): PresetEntry[];
   load(name: string): LoadedPreset;
   /** Save under a name; throws when it exists and overwrite is false, or is read-only. */
-  save(name: string, values: FormValues, options: {overwrite: boolean; notes?: string}): void;
+  save(name: string, values: FormValues, options: {overwrite: boolean; kind?: 'joint' | 'screw'}): void;
   rename(from: string, to: string): void;
   duplicate(from: string, to: string): void;
   remove(name: string): void;
@@ -77,6 +81,8 @@ export interface WorkbenchServices {
   designations(query: string, limit: number): string[];
   /** Picker entries, their numbers formatted in the display units. */
   picks(source: PickSource, units: 'si' | 'us'): PickItem[];
+  /** The power-screw check; throws on input it cannot compute. Undefined: no power-screw mode in this build. */
+  checkScrew?: (input: ScrewInput) => ScrewResult;
   /** The ranked repair list; undefined while the repair planner is not in this build. */
   repairs?: (joint: JointInput, hole: RepairInput) => RepairPlan;
   presets: PresetPort;

@@ -7,6 +7,8 @@ import type {CheckResult} from '../../src/core/joint/result.js';
 import type {JointInput} from '../../src/core/joint/input.js';
 import type {Draft, LoadedPreset, PresetEntry, WorkbenchServices} from '../../src/ui/services.js';
 import type {RepairOption, RepairPlan} from '../../src/core/repair/types.js';
+import type {ScrewInput} from '../../src/core/screw/input.js';
+import type {ScrewResult} from '../../src/core/screw/result.js';
 import type {FormValues} from '../../src/ui/state/fields.js';
 
 export const FIXTURE_VALUES: FormValues = {
@@ -60,14 +62,32 @@ export function fixtureResult(input: JointInput): CheckResult {
   };
 }
 
+/** A stand-in power-screw result (invented numbers for tests); torque follows the load. */
+export function fixtureScrew(input: ScrewInput): ScrewResult {
+  const raise = input.load * 0.002;
+  return {
+    lead: 5, leadAngle: 4.2,
+    torque: {raise, lower: raise / 4, collar: 0, raiseThread: raise, lowerThread: raise / 4},
+    efficiency: 0.37, threadEfficiency: 0.37, selfLocking: input.load < 50000, selfLockingFriction: 0.074,
+    stress: {body: {axial: -22, torsion: 10, vonMises: 28}, firstThread: {bearing: -13, bending: 47, shear: 3.6, transverseShear: 20, axial: -22, torsion: 10, vonMises: 64, maxShear: 33, principal: [1, 2, 3], vonMisesTextbook: 60, maxShearTextbook: 30, principalTextbook: [1, 2, 3], share: 0.38}},
+    nut: {material: 'bronze', materialName: 'fixture bronze', materialSource: 'fixture', engagedThreads: 7.2, bearingPressure: 4.9, allowablePressure: null,
+      stripping: {nutForce: 268000, screwForce: 507000, nutArea: 1, screwArea: 1, weaker: 'nut', margin: 268000 / Math.max(1, input.load), wearToStrip: 1}},
+    buckling: {checked: false, criticalLoad: null, method: null, slenderness: null, transitionSlenderness: null, ends: 'pinned-pinned', endConstant: 1, margin: null, source: 'fixture'},
+    flags: input.load >= 50000 ? [{code: 'back-drives', level: 'fail', message: 'fixture: the load can back-drive'}] : [],
+    sources: ['fixture screw source (test only)'],
+    notes: [],
+  } as unknown as ScrewResult;
+}
+
 export interface FixtureStore {
   saved: Map<string, {values: FormValues; savedAt: string}>;
+  kinds: Map<string, string>;
   files: Map<string, string>;
   draft?: Draft;
 }
 
-export function fixtureServices(overrides: Partial<WorkbenchServices> = {}): WorkbenchServices & {store: FixtureStore} {
-  const store: FixtureStore = {saved: new Map(), files: new Map()};
+export function fixtureServices(overrides: Partial<WorkbenchServices> = {}, withScrewPreset = false): WorkbenchServices & {store: FixtureStore} {
+  const store: FixtureStore = {saved: new Map(), files: new Map(), kinds: new Map()};
   const shipped: Record<string, FormValues> = {'demo-fixture': FIXTURE_VALUES};
   const entry = (name: string): PresetEntry =>
     shipped[name]
@@ -79,6 +99,7 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}): Wor
       if (/^nope/i.test(input.thread)) throw Object.assign(new Error(`unknown thread "${input.thread}"; try M10 or 1/4-20 UNC`), {field: 'thread'});
       return fixtureResult(input);
     },
+    checkScrew: fixtureScrew,
     designations: (q, limit) => ['M10', 'M10x1.25', 'M10x1', 'M12', 'M12x1.5', 'M8', '1/4-20 UNC', '3/8-16 UNC'].filter(d => d.toLowerCase().startsWith(q.toLowerCase())).slice(0, limit),
     picks: source =>
       source === 'boltGrade'
@@ -90,14 +111,16 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}): Wor
           ? [{id: 'fixture-alloy', name: 'fixture alloy', detail: 'Rm 300 MPa, shear 180 MPa', provenance: {source: 'typical value, from memory: fixture', kind: 'memory'}}]
           : [{id: '8', name: 'nut class 8', detail: 'Rm 800 MPa', provenance: {source: 'fixture nut table', kind: 'demo'}}],
     presets: {
-      list: () => [...Object.keys(shipped), ...store.saved.keys()].sort().map(entry),
+      list: () => [...[...Object.keys(shipped), ...store.saved.keys()].sort().map(entry), ...(withScrewPreset ? [{name: 'demo-screw', readOnly: true, kind: 'screw' as const, thread: 'Tr24x5'}] : [])],
       load(name): LoadedPreset {
+        if (name === 'demo-screw') return {name, readOnly: true, kind: 'screw', values: {...structuredClone(FIXTURE_VALUES), screw: {thread: 'Tr24x5', load: 6000, nutLength: 36}}};
         if (shipped[name]) return {name, readOnly: true, values: structuredClone(shipped[name]!)};
         const p = store.saved.get(name);
         if (!p) throw new Error(`no preset named "${name}"`);
         return {name, readOnly: false, values: structuredClone(p.values)};
       },
-      save(name, values, {overwrite}) {
+      save(name, values, {overwrite, kind}) {
+        store.kinds.set(name, kind ?? 'joint');
         if (shipped[name]) throw new Error(`"${name}" is a shipped demo preset (read-only)`);
         if (store.saved.has(name) && !overwrite) throw new Error(`preset "${name}" exists`);
         store.saved.set(name, {values: structuredClone(values), savedAt: '2026-01-01T10:00:00.000Z'});

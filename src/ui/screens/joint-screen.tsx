@@ -6,10 +6,11 @@ import React from 'react';
 import {Box, Text} from 'ink';
 import type {Flag} from '../../core/types.js';
 import {formatQuantity} from '../../core/units.js';
-import {STEPS, getValue, type FieldDef} from '../state/fields.js';
+import {STEPS, getValue, stepsFor, type FieldDef} from '../state/fields.js';
 import {fieldUnit, formatField} from '../state/field-text.js';
 import {currentField, currentFields, pickerItems, shownValues, type WorkbenchState} from '../state/workbench.js';
-import type {Evaluation} from '../state/evaluate.js';
+import type {Evaluation, ScrewEvaluation} from '../state/evaluate.js';
+import {ScrewReadout} from './screw-readout.js';
 import type {WorkbenchServices} from '../services.js';
 import {useTheme, fit, pad, wrap, type Theme} from '../theme.js';
 import {loadShareLines} from '../components/pictures.js';
@@ -19,6 +20,8 @@ import {Readout} from './readout.js';
 interface Props {
   state: WorkbenchState;
   ev: Evaluation;
+  /** The power screw, in power-screw mode. */
+  sev?: ScrewEvaluation;
   svc: WorkbenchServices;
   width: number;
   height: number;
@@ -35,12 +38,13 @@ function StepTabs({state, width}: {state: WorkbenchState; width: number}) {
   const t = useTheme();
   return (
     <Box width={width}>
-      {STEPS.map((s, i) => (
+      {stepsFor(state.mode).map((s, i) => (
         <Text key={s.id} inverse={i === state.step} bold={i === state.step}>
           {` ${i + 1} ${s.title} `}
         </Text>
       ))}
       <Text color={t.tone('dim')}>{fit(`  ${t.ascii ? '<- ->' : '← →'} steps`, Math.max(0, width - 62), '')}</Text>
+      {state.mode === 'screw' ? <Text bold>{'  POWER SCREW (m: joint)'}</Text> : null}
     </Box>
   );
 }
@@ -52,7 +56,7 @@ function fieldValueText(state: WorkbenchState, f: FieldDef, t: Theme): string {
   return formatField(f, v, state.units, t.ascii);
 }
 
-function fieldLines(state: WorkbenchState, ev: Evaluation, width: number, t: Theme): Line[] {
+function fieldLines(state: WorkbenchState, ev: {errors: Record<string, string>}, width: number, t: Theme): Line[] {
   const sel = currentField(state);
   const labelW = 18;
   return currentFields(state).map(f => {
@@ -113,17 +117,17 @@ function threadInfoLines(ev: Evaluation, state: WorkbenchState, width: number, h
     .slice(0, height);
 }
 
-function LeftColumn({state, ev, svc, width, height}: Props) {
+function LeftColumn({state, ev, sev, svc, width, height}: Props) {
   const t = useTheme();
-  const fields = fieldLines(state, ev, width, t);
+  const fields = fieldLines(state, state.mode === 'screw' && sev ? sev : ev, width, t);
   const sel = currentField(state);
   const rest = height - fields.length;
   if (state.picker) return <Lines lines={[...fields, ...pickerLines(state, svc, width, rest, t)]} width={width} height={height} />;
   const helpLines: Line[] = (sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : []).map(text => ({text, color: t.tone('dim')}));
   const below = rest - helpLines.length - 1;
-  const shares = ev.result?.loadShare ?? [];
+  const shares = state.mode === 'joint' ? (ev.result?.loadShare ?? []) : [];
   let extra: Line[] = [];
-  if (STEPS[state.step]?.id === 'thread') extra = threadInfoLines(ev, state, width, below + 1, t);
+  if (state.mode === 'joint' && STEPS[state.step]?.id === 'thread') extra = threadInfoLines(ev, state, width, below + 1, t);
   else if (below >= 2 && shares.length > 0) {
     extra = ['', {text: fit('Load share/thread, 1 = loaded face', width, t.sym.ellipsis), bold: true}, ...loadShareLines(shares, width, below - 1, t)];
   }
@@ -142,11 +146,11 @@ function FlagsPanel({flags, width, height}: {flags: Flag[]; width: number; heigh
   return <Lines lines={lines} width={width} height={height} />;
 }
 
-function FlagSummary({ev, width, lines: rows}: {ev: Evaluation; width: number; lines: number}) {
+function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag[]}}; width: number; lines: number; what: string}) {
   const t = useTheme();
   const flags = sortedFlags(ev.result?.flags ?? []);
   if (!ev.result) return <Box height={rows} />;
-  if (flags.length === 0) return <Lines lines={[{text: fit('OK  no flags raised for this joint', width, t.sym.ellipsis), color: t.tone('ok')}]} width={width} height={rows} />;
+  if (flags.length === 0) return <Lines lines={[{text: fit(`OK  no flags raised for this ${what}`, width, t.sym.ellipsis), color: t.tone('ok')}]} width={width} height={rows} />;
   const shown = flags.slice(0, rows);
   const more = flags.length - shown.length;
   const lines = shown.map((f, i): Line => {
@@ -159,7 +163,8 @@ function FlagSummary({ev, width, lines: rows}: {ev: Evaluation; width: number; l
 }
 
 export function JointScreen(props: Props) {
-  const {state, ev, width, height} = props;
+  const {state, width, height} = props;
+  const ev = state.mode === 'screw' && props.sev ? props.sev : props.ev;
   const flagLines = height >= 20 ? 4 : 2;
   const bodyH = height - 1 - flagLines;
   const leftW = Math.max(34, Math.floor(width * 0.42));
@@ -173,11 +178,13 @@ export function JointScreen(props: Props) {
         <Box width={1} />
         {state.showFlags ? (
           <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
+        ) : state.mode === 'screw' ? (
+          <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
         ) : (
-          <Readout result={ev.result} input={ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
+          <Readout result={props.ev.result} input={props.ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
         )}
       </Box>
-      <FlagSummary ev={ev} width={width} lines={flagLines} />
+      <FlagSummary ev={ev} width={width} lines={flagLines} what={state.mode === 'screw' ? 'power screw' : 'joint'} />
     </Box>
   );
 }

@@ -8,7 +8,9 @@ import {RepairInputSchema, type RepairInput} from '../../core/repair/input.js';
 import type {CheckResult} from '../../core/joint/result.js';
 import type {UnitSystem} from '../../core/units.js';
 import type {RepairPlan, WorkbenchServices} from '../services.js';
-import {FIELDS, STEPS, fieldById, getValue, visibleFields, type FormValues} from './fields.js';
+import {FIELDS, SCREW_STEPS, STEPS, fieldBounds, fieldById, getValue, visibleFields, type FormValues} from './fields.js';
+import {ScrewInputSchema, type ScrewInput} from '../../core/screw/input.js';
+import type {ScrewResult} from '../../core/screw/result.js';
 import {rangeText} from './field-text.js';
 
 export interface Evaluation {
@@ -130,4 +132,58 @@ export function evaluateRepairs(values: FormValues, svc: WorkbenchServices, ev: 
   }
   repairCache.set(values, out);
   return out;
+}
+
+export interface ScrewEvaluation {
+  input?: ScrewInput;
+  result?: ScrewResult;
+  errors: Record<string, string>;
+  error?: string;
+}
+
+const screwCache = new WeakMap<FormValues, Map<string, ScrewEvaluation>>();
+
+/** The power screw: validate with the zod schema, call the core's checkScrew, errors on their fields. */
+export function evaluateScrew(values: FormValues, svc: WorkbenchServices, units: UnitSystem, ascii: boolean): ScrewEvaluation {
+  const key = `${units}${ascii ? 'a' : ''}`;
+  const hit = screwCache.get(values)?.get(key);
+  if (hit) return hit;
+  const out = computeScrew(values, svc, units, ascii);
+  const m = screwCache.get(values) ?? new Map<string, ScrewEvaluation>();
+  m.set(key, out);
+  screwCache.set(values, m);
+  return out;
+}
+
+function computeScrew(values: FormValues, svc: WorkbenchServices, units: UnitSystem, ascii: boolean): ScrewEvaluation {
+  if (!svc.checkScrew) return {errors: {}, error: 'The power-screw mode is not in this build.'};
+  const errors: Record<string, string> = {};
+  for (const step of SCREW_STEPS) {
+    for (const f of visibleFields(step.id, values)) {
+      const v = getValue(values, f.id);
+      if (!f.optional && (v === undefined || v === '') && fieldBounds(f.id).default === undefined) {
+        const r = rangeText(f, units, ascii);
+        errors[f.id] = `${f.label} is needed${r ? `; accepted ${r}` : ''}`;
+      }
+    }
+  }
+  if (Object.keys(errors).length > 0) return {errors};
+  const parsed = ScrewInputSchema.safeParse(values.screw ?? {});
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const id = `screw.${String(issue.path[0] ?? '')}`;
+      const f = FIELDS.find(x => x.id === id);
+      const r = f ? rangeText(f, units, ascii) : '';
+      errors[id] = `${f ? f.label : id}: ${issue.message.toLowerCase()}${r ? `; accepted ${r}` : ''}`;
+    }
+    return {errors};
+  }
+  try {
+    return {input: parsed.data, result: svc.checkScrew(parsed.data), errors};
+  } catch (e) {
+    const msg = e instanceof Error ? e.message : String(e);
+    const field = e && typeof e === 'object' && typeof (e as {field?: unknown}).field === 'string' ? `screw.${(e as {field: string}).field}` : undefined;
+    if (field && FIELDS.some(f => f.id === field)) return {input: parsed.data, errors: {[field]: `${fieldById(field).label}: ${msg}`}};
+    return {input: parsed.data, errors, error: `Cannot compute this power screw: ${msg}`};
+  }
 }

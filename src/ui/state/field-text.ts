@@ -42,9 +42,9 @@ export function formatField(f: FieldDef, value: unknown, units: UnitSystem, asci
     case 'quantity':
       return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: 3}) : String(value);
     case 'ratio':
-      return typeof value === 'number' ? formatNumber(value, 3) : String(value);
+      return typeof value === 'number' ? (f.integer ? String(Math.round(value)) : formatNumber(value, 3)) : String(value);
     case 'range': {
-      const r = value as {min: number; max: number};
+      const r = typeof value === 'number' ? {min: value, max: value} : (value as {min: number; max: number});
       return r.min === r.max ? formatNumber(r.min, 2) : `${formatNumber(r.min, 2)}..${formatNumber(r.max, 2)}`;
     }
     case 'bool':

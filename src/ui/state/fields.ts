@@ -6,6 +6,7 @@
 import {z} from 'zod';
 import {JointInputSchema, type JointInputDraft} from '../../core/joint/input.js';
 import {RepairInputSchema, type RepairInput} from '../../core/repair/input.js';
+import {ScrewInputSchema, END_CONDITION_IDS, type ScrewInputDraft} from '../../core/screw/input.js';
 import type {Dimension} from '../../core/units.js';
 
 export type RepairDraft = Partial<z.input<typeof RepairInputSchema>>;
@@ -13,9 +14,14 @@ export type RepairDraft = Partial<z.input<typeof RepairInputSchema>>;
 export interface FormValues {
   joint: Partial<JointInputDraft>;
   hole: RepairDraft;
+  /** Power-screw inputs (the workbench's power-screw mode). */
+  screw?: Partial<ScrewInputDraft>;
 }
 
-export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole';
+/** What the workbench works on: a threaded joint, or a power screw (lead screw and nut). */
+export type Mode = 'joint' | 'screw';
+
+export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'screw-thread' | 'screw-nut' | 'screw-friction';
 
 export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'thread', title: 'Thread'},
@@ -25,7 +31,15 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'hole', title: 'Hole state'},
 ];
 
-export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool';
+export const SCREW_STEPS: readonly {id: StepId; title: string}[] = [
+  {id: 'screw-thread', title: 'Screw'},
+  {id: 'screw-nut', title: 'Nut and load'},
+  {id: 'screw-friction', title: 'Friction'},
+];
+
+export const stepsFor = (mode: Mode) => (mode === 'screw' ? SCREW_STEPS : STEPS);
+
+export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
 export type PickSource = 'boltGrade' | 'parent' | 'nutClass';
 
 export interface FieldDef {
@@ -39,6 +53,8 @@ export interface FieldDef {
   pick?: PickSource;
   /** May be left empty (the core then uses its default or leaves it out). */
   optional: boolean;
+  /** Whole numbers only (shown without decimals). */
+  integer?: boolean;
   /** What applies when the field is empty, shown in its place ("from grade"). */
   empty?: string;
   /** One line shown under the fields when this one is selected. */
@@ -114,6 +130,36 @@ export const FIELDS: readonly FieldDef[] = [
     help: 'From the hole centre line to the nearest edge; limits oversize repairs.'},
   {id: 'hole.boltLengthMayChange', label: 'Longer bolt OK', step: 'hole', kind: 'bool', optional: false,
     help: 'yes = a longer screw may be fitted. Enter switches.'},
+  {id: 'screw.thread', label: 'Designation', step: 'screw-thread', kind: 'text', optional: false,
+    help: 'Power thread: Tr24x5, Tr40x14(P7) (multi-start), 1-5 ACME-2G, or square 32x4.'},
+  {id: 'screw.starts', label: 'Starts', step: 'screw-thread', kind: 'ratio', integer: true, optional: true,
+    help: 'Number of thread starts; a multi-start designation sets it too.'},
+  {id: 'screw.screwMaterial', label: 'Screw material', step: 'screw-thread', kind: 'text', optional: true, empty: 'steel',
+    help: 'steel, alloy-steel, or a steel id of the material library; tapwright materials lists them.'},
+  {id: 'screw.screwYield', label: 'Screw yield', step: 'screw-thread', kind: 'quantity', dimension: 'stress', optional: true, empty: 'from material',
+    help: 'Yield strength of the screw from a certificate; empty = the material value.'},
+  {id: 'screw.length', label: 'Free length', step: 'screw-thread', kind: 'quantity', dimension: 'length', optional: true,
+    help: 'Unsupported length of screw in compression, for buckling; 0 = no column check.'},
+  {id: 'screw.ends', label: 'End conditions', step: 'screw-thread', kind: 'choice', choices: END_CONDITION_IDS, optional: false,
+    help: 'How the screw ends are held, for buckling. Enter switches.'},
+  {id: 'screw.load', label: 'Axial load', step: 'screw-nut', kind: 'quantity', dimension: 'force', optional: false,
+    help: 'Load the screw lifts or pushes; 20kN or 4500lbf accepted.'},
+  {id: 'screw.loadDirection', label: 'Screw is in', step: 'screw-nut', kind: 'choice', choices: ['compression', 'tension'], optional: false,
+    help: 'Whether the loaded length of the screw is pushed (compression) or pulled. Enter switches.'},
+  {id: 'screw.nutLength', label: 'Nut length', step: 'screw-nut', kind: 'quantity', dimension: 'length', optional: false,
+    help: 'Engaged length of the nut thread.'},
+  {id: 'screw.nutMaterial', label: 'Nut material', step: 'screw-nut', kind: 'text', optional: true,
+    help: 'bronze, cast-iron, steel, plastic, or a material id; tapwright screw --help lists them.'},
+  {id: 'screw.nutWear', label: 'Nut wear', step: 'screw-nut', kind: 'quantity', dimension: 'length', optional: true,
+    help: 'Loss of nut-thread thickness by wear; 0 for a new nut.'},
+  {id: 'screw.speed', label: 'Sliding speed', step: 'screw-nut', kind: 'quantity', dimension: 'speed', optional: true, empty: 'not given',
+    help: 'Sliding speed at the thread, for the allowable bearing pressure; 3m/min accepted.'},
+  {id: 'screw.muThread', label: 'Thread friction', step: 'screw-friction', kind: 'range', optional: true,
+    help: 'Thread friction f as one value or min..max, e.g. 0.10..0.15.'},
+  {id: 'screw.muCollar', label: 'Collar friction', step: 'screw-friction', kind: 'ratio', optional: true,
+    help: 'Thrust-collar friction fc; 0 with a rolling thrust bearing.'},
+  {id: 'screw.collarDiameter', label: 'Collar mean dia', step: 'screw-friction', kind: 'quantity', dimension: 'length', optional: true,
+    help: 'Mean diameter of the thrust collar; 0 = no collar friction.'},
 ];
 
 /** Fields of a step that apply to the current values (nut fields only for a nut, ...). */
@@ -129,10 +175,17 @@ export function fieldById(id: string): FieldDef {
 
 export function getValue(v: FormValues, id: string): unknown {
   if (id.startsWith('hole.')) return (v.hole as Record<string, unknown>)[id.slice(5)];
+  if (id.startsWith('screw.')) return ((v.screw ?? {}) as Record<string, unknown>)[id.slice(6)];
   return (v.joint as Record<string, unknown>)[id];
 }
 
 export function setValue(v: FormValues, id: string, value: unknown): FormValues {
+  if (id.startsWith('screw.')) {
+    const screw = {...(v.screw ?? {})} as Record<string, unknown>;
+    if (value === undefined) delete screw[id.slice(6)];
+    else screw[id.slice(6)] = value;
+    return {...v, screw: screw as Partial<ScrewInputDraft>};
+  }
   if (id.startsWith('hole.')) {
     const hole = {...v.hole} as Record<string, unknown>;
     if (value === undefined) delete hole[id.slice(5)];
@@ -158,6 +211,7 @@ interface ZodDefLike {
   defaultValue?: unknown;
   shape?: Record<string, z.ZodType>;
   in?: z.ZodType;
+  options?: z.ZodType[];
 }
 
 /** Read min, max and default off a zod field, through optional/default wrappers. */
@@ -174,7 +228,7 @@ function readBounds(schema: z.ZodType): Bounds {
       return out;
     }
     if (def.type === 'object' && def.shape?.min) return {...readBounds(def.shape.min), default: out.default};
-    cur = def.innerType ?? def.in;
+    cur = def.innerType ?? def.in ?? def.options?.[0];
   }
   return out;
 }
@@ -187,6 +241,7 @@ export function fieldBounds(id: string): Bounds {
     boundsCache = new Map();
     for (const [k, v] of Object.entries(JointInputSchema.shape)) boundsCache.set(k, readBounds(v as z.ZodType));
     for (const [k, v] of Object.entries(RepairInputSchema.shape)) boundsCache.set(`hole.${k}`, readBounds(v as z.ZodType));
+    for (const [k, v] of Object.entries(ScrewInputSchema.shape)) boundsCache.set(`screw.${k}`, readBounds(v as z.ZodType));
   }
   return boundsCache.get(id) ?? {};
 }

@@ -7,7 +7,7 @@ import type {UnitSystem} from '../../core/units.js';
 import type {Draft, PickItem, PresetEntry, WorkbenchServices} from '../services.js';
 import type {KeyEvent} from '../keys.js';
 import {lookup, type Context} from '../keymap.js';
-import {STEPS, fieldBounds, fieldById, getValue, setValue, visibleFields, type FieldDef, type FormValues} from './fields.js';
+import {STEPS, fieldBounds, fieldById, getValue, setValue, stepsFor, visibleFields, type FieldDef, type FormValues, type Mode} from './fields.js';
 import {editText, parseField} from './field-text.js';
 import {evaluate, evaluateRepairs} from './evaluate.js';
 import {bodyHeight} from '../layout.js';
@@ -55,6 +55,8 @@ export interface Message {
 }
 
 export interface WorkbenchState {
+  /** Threaded joint or power screw. */
+  mode: Mode;
   screen: Screen;
   backTo: Screen;
   step: number;
@@ -93,8 +95,10 @@ export function initialState(opts: {
   draft?: Draft;
   message?: Message;
   size?: {columns: number; rows: number};
+  mode?: Mode;
 }): WorkbenchState {
   return {
+    mode: opts.mode ?? 'joint',
     screen: 'joint',
     backTo: 'joint',
     step: 0,
@@ -125,7 +129,8 @@ export function contextsOf(s: WorkbenchState): Context[] {
 }
 
 export function currentFields(s: WorkbenchState): FieldDef[] {
-  const step = STEPS[s.step] ?? STEPS[0]!;
+  const steps = stepsFor(s.mode);
+  const step = steps[s.step] ?? steps[0]!;
   return visibleFields(step.id, s.values);
 }
 
@@ -203,7 +208,8 @@ function moveField(s: WorkbenchState, delta: number): WorkbenchState {
 }
 
 function moveStep(s: WorkbenchState, delta: number): WorkbenchState {
-  const step = (s.step + delta + STEPS.length) % STEPS.length;
+  const n = stepsFor(s.mode).length;
+  const step = (s.step + delta + n) % n;
   return {...s, step, field: 0};
 }
 
@@ -229,7 +235,7 @@ export function filteredPresets(s: WorkbenchState, svc: WorkbenchServices) {
 
 function savePreset(s: WorkbenchState, svc: WorkbenchServices, name: string, overwrite: boolean): WorkbenchState {
   try {
-    svc.presets.save(name, s.values, {overwrite});
+    svc.presets.save(name, s.values, {overwrite, kind: s.mode});
     svc.draft.clear();
     return {...s, preset: {name, readOnly: false, saved: snapshot(s.values)}, message: info(`Saved preset "${name}".`)};
   } catch (e) {
@@ -240,8 +246,11 @@ function savePreset(s: WorkbenchState, svc: WorkbenchServices, name: string, ove
 function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: string): WorkbenchState {
   try {
     const p = svc.presets.load(name);
+    const mode: Mode = p.kind === 'screw' ? 'screw' : 'joint';
+    if (mode === 'screw' && !svc.checkScrew) return {...s, message: fail(`"${p.name}" is a power-screw preset; the power-screw mode is not in this build (use tapwright screw --preset)`)};
     return {
       ...s,
+      mode,
       values: p.values,
       preset: {name: p.name, readOnly: p.readOnly, saved: snapshot(p.values)},
       screen: 'joint',
@@ -311,6 +320,7 @@ function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
 /** The report text for the current joint, or a reason it cannot be made. */
 export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input?: unknown; result?: unknown}): {text?: string; why?: string} {
   if (!svc.report) return {why: 'The report writer is not in this build yet.'};
+  if (s.mode === 'screw') return {why: 'The work-order report covers threaded joints; for this power screw save the preset and run tapwright screw --preset NAME.'};
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
     return {
@@ -387,6 +397,19 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       if (!f) return s;
       if (!f.optional) return {...s, message: fail(`${f.label} cannot be empty; Enter to edit it`)};
       return {...s, values: setValue(s.values, f.id, undefined), message: info(`${f.label}: emptied, the default applies`)};
+    case 'mode.toggle': {
+      if (!svc.checkScrew) return {...s, message: fail('The power-screw mode is not in this build; use tapwright screw')};
+      const mode: Mode = s.mode === 'joint' ? 'screw' : 'joint';
+      const values = mode === 'screw' && !s.values.screw ? {...s.values, screw: {thread: 'Tr24x5', load: 10000, nutLength: 24}} : s.values;
+      return {
+        ...s,
+        mode,
+        values,
+        step: 0,
+        field: 0,
+        message: info(mode === 'screw' ? 'Power-screw mode: lead screw and nut (m: back to the joint)' : 'Joint mode: bolt or screw in a tapped hole or nut'),
+      };
+    }
     case 'panel.flags':
       return {...s, showFlags: !s.showFlags};
     case 'preset.save':
@@ -491,7 +514,7 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'report.write':
       return {...s, prompt: {kind: 'reportPath', title: 'Write the report to file', buffer: defaultReportPath(s, svc)}};
     case 'repair.hole':
-      return {...s, screen: 'joint', step: STEPS.findIndex(x => x.id === 'hole'), field: 0};
+      return {...s, screen: 'joint', mode: 'joint', step: STEPS.findIndex(x => x.id === 'hole'), field: 0};
 
     case 'prompt.ok':
       return runPrompt(s, svc);
@@ -527,7 +550,7 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
 
     case 'draft.restore': {
       const d = s.draftOffer!;
-      return {...s, draftOffer: undefined, values: d.values, message: info(`Restored the unsaved edits of ${d.savedAt.slice(0, 16).replace('T', ' ')}`)};
+      return {...s, draftOffer: undefined, values: d.values, mode: d.mode === 'screw' && svc.checkScrew ? 'screw' : s.mode, step: 0, field: 0, message: info(`Restored the unsaved edits of ${d.savedAt.slice(0, 16).replace('T', ' ')}`)};
     }
     case 'draft.discard':
       try {
