@@ -30,8 +30,16 @@ await build({
   entryPoints: {entry: at('src/cli/entry.ts')},
   outdir: out('lib'),
   splitting: true,
-  packages: 'external',
+  minify: true,
+  legalComments: 'none',
+  // Everything is bundled, so a command opens a handful of files instead of
+  // hundreds of package modules; Ink and React sit in the workbench's own
+  // chunks and load only when the workbench starts.
   chunkNames: 'chunks/[name]-[hash]',
+  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
+  banner: {
+    js: "import {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);",
+  },
 });
 
 await build({
