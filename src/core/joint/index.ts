@@ -49,7 +49,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const g = r.geometry;
   const P = g.pitch;
   if (input.chamfer >= input.engagement) {
-    throw new JointInputError('chamfer', `the chamfer (${input.chamfer} mm) must be shorter than the engaged length (${input.engagement} mm)`);
+    const mm = (x: number): string => String(Number(x.toPrecision(4)));
+    throw new JointInputError('chamfer', `the chamfer (${mm(input.chamfer)} mm) must be shorter than the engaged length (${mm(input.engagement)} mm)`);
   }
   if (input.tightening === 'torque' && input.torque === undefined) throw new JointInputError('torque', 'tightening by torque needs the torque');
   if (input.tightening === 'preload' && input.preload === undefined) throw new JointInputError('preload', 'tightening to a preload needs the preload');

@@ -5,7 +5,7 @@
  */
 import type {Provenance, ThreadGeometry} from '../types.js';
 import {parseThread, threadGeometry} from '../threads/index.js';
-import {boltGrade, boltGradeProblem, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, parentMaterial, listParentMaterials} from '../materials/index.js';
+import {boltGrade, boltGradeProblem, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, parentMaterial, parentMaterialProblem} from '../materials/index.js';
 import type {JointInput} from './input.js';
 import {JointInputError} from './errors.js';
 
@@ -85,15 +85,20 @@ function resolveBolt(input: JointInput, d: number): ResolvedBolt {
     provenance = {source: `Rp0.2 given by the user; Rm of grade ${g.id}`, kind: 'user'};
   }
   if (rp >= rm) {
-    throw new JointInputError('boltRp', `bolt yield Rp0.2 ${rp} MPa must be below the tensile strength Rm ${rm} MPa; give both --bolt-rm and --bolt-rp, or a grade`);
+    throw new JointInputError('boltRp', `bolt yield Rp0.2 ${mpa(rp)} MPa must be below the tensile strength Rm ${mpa(rm)} MPa; give both --bolt-rm and --bolt-rp, or a grade`);
   }
-  return {id: g.id, name: g.name, rm, rp, shear: g.shearRatio * rm, shearRatio: g.shearRatio, elasticModulus: g.elasticModulus, provenance};
+  // Strengths given by the user: the bolt is no longer the grade, only its shear ratio and modulus (and a missing strength) are.
+  const custom = input.boltRm !== undefined || input.boltRp !== undefined;
+  const given = [input.boltRm !== undefined ? 'Rm' : '', input.boltRp !== undefined ? 'Rp0.2' : ''].filter(Boolean).join(' and ');
+  const id = custom ? 'custom' : g.id;
+  const name = custom ? `custom bolt (${given} given; otherwise as grade ${g.id})` : g.name;
+  return {id, name, rm, rp, shear: g.shearRatio * rm, shearRatio: g.shearRatio, elasticModulus: g.elasticModulus, provenance};
 }
 
 function resolveParent(input: JointInput, bolt: ResolvedBolt): ResolvedInternal {
   const m = input.parent !== undefined ? parentMaterial(input.parent) : undefined;
   if (input.parent !== undefined && !m) {
-    throw new JointInputError('parent', `unknown parent material "${input.parent}"; accepted: ${listParentMaterials().map(p => p.id).join(', ')}`);
+    throw new JointInputError('parent', parentMaterialProblem(input.parent) ?? `unknown parent material "${input.parent}"`);
   }
   if (!m && input.parentRm === undefined && input.parentShear === undefined) {
     throw new JointInputError('parent', 'a tapped hole needs its material: give a parent material id, or its tensile strength Rm (and shear strength)');
@@ -155,6 +160,10 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
   let bearingDiameter: number;
   let bearingSource: ResolvedJoint['bearingSource'];
   if (input.bearingDiameter !== undefined) {
+    // DKm is the mean of the head's bearing face and the clearance hole, both larger than d (VDI 2230 Part 1 definition of DKm).
+    if (input.bearingDiameter <= d) {
+      throw new JointInputError('bearingDiameter', `bearing diameter ${round(input.bearingDiameter)} mm must be larger than the thread diameter ${round(d)} mm: it is the mean of the head's bearing face and the clearance hole`);
+    }
     bearingDiameter = input.bearingDiameter;
     bearingSource = 'input';
   } else {
@@ -172,6 +181,11 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     }
   }
   return {geometry, bolt, internal, ...(nut ? {nut} : {}), bearingDiameter, bearingSource, notes};
+}
+
+/** A stress for a message, MPa: 4 significant figures, no float noise. */
+function mpa(x: number): string {
+  return String(Number(x.toPrecision(4)));
 }
 
 function round(x: number): string {

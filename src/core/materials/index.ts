@@ -14,6 +14,7 @@ import {NUT_CLASS_ROWS} from './nut-classes.js';
 import {PARENT_MATERIAL_ROWS} from './parent-materials.js';
 import {HEX_HEAD_ROWS, NUT_DIMENSION_ROWS} from './hardware.js';
 import {INCH_HEX_HEAD_ROWS} from './inch-hex-heads.js';
+import {didYouMean} from './suggest.js';
 
 export type {BoltGrade, NutClass, ParentMaterial, MaterialData} from './schema.js';
 export {validateMaterialData, MEMORY_WORDING, MaterialDataSchema, BoltGradeSchema, NutClassSchema, ParentMaterialSchema} from './schema.js';
@@ -144,11 +145,18 @@ export function nutDimensions(nominalMm: number): {heightMin: number; heightMax:
   return r ? {heightMin: r.heightMin, heightMax: r.heightMax, flats: r.flats, provenance: r.provenance} : undefined;
 }
 
+/** An unknown parent material, with the nearest ids and the accepted list. */
+export function parentMaterialProblem(id: string): string | undefined {
+  if (parentMaterial(id)) return undefined;
+  const ids = listParentMaterials().map(p => p.id);
+  return `unknown parent material "${id}"; accepted: ${ids.join(', ')}${didYouMean(id, ids)}`;
+}
+
 /** A plain-language reason why a bolt grade lookup failed, naming the accepted ids or sizes. */
 export function boltGradeProblem(id: string, nominalMm: number): string | undefined {
   if (boltGrade(id, nominalMm)) return undefined;
   const rows = boltGradeRows(id);
-  if (rows.length === 0) return `unknown bolt grade "${id}"; accepted: ${boltGradeIds().join(', ')}`;
+  if (rows.length === 0) return `unknown bolt grade "${id}"; accepted: ${boltGradeIds().join(', ')}${didYouMean(id, boltGradeIds())}`;
   return `bolt grade ${rows[0]?.id} is not defined for ${fmtMm(nominalMm)} mm; it covers ${describeRange(rows)}`;
 }
 
@@ -156,7 +164,8 @@ export function boltGradeProblem(id: string, nominalMm: number): string | undefi
 export function nutClassProblem(id: string, nominalMm: number): string | undefined {
   if (nutClass(id, nominalMm)) return undefined;
   const rows = nutClassRows(id);
-  if (rows.length === 0) return `unknown nut class "${id}"; accepted: ${[...new Set(DATA.nutClasses.map(n => n.id))].join(', ')}`;
+  const ids = [...new Set(DATA.nutClasses.map(n => n.id))];
+  if (rows.length === 0) return `unknown nut class "${id}"; accepted: ${ids.join(', ')}${didYouMean(id, ids)}`;
   return `nut class ${rows[0]?.id} is not defined for ${fmtMm(nominalMm)} mm; it covers ${describeRange(rows)}`;
 }
 

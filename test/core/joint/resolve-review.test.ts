@@ -1,0 +1,49 @@
+import {describe, expect, it} from 'vitest';
+import {checkJoint, JointInputError, JointInputSchema, type JointInputDraft} from '../../../src/core/joint/index.js';
+
+// Findings of a CLI review, checked in the core. Invented demo joint: M10 in S355, 15 mm engaged.
+const BASE: JointInputDraft = {thread: 'M10', boltGrade: '8.8', internal: 'tapped', parent: 'S355', engagement: 15};
+const run = (d: Partial<JointInputDraft>) => checkJoint(JointInputSchema.parse({...BASE, ...d}));
+
+function inputError(f: () => unknown): JointInputError {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof JointInputError) return e;
+    throw e;
+  }
+  throw new Error('no JointInputError');
+}
+
+describe('custom bolt strengths are not shown as the grade', () => {
+  it('--bolt-rm/--bolt-rp: id "custom", the name says what was given (was "property class 8.8" with Rm 900)', () => {
+    const r = run({boltRm: 900, boltRp: 700});
+    expect(r.materials.bolt.id).toBe('custom');
+    expect(r.materials.bolt.name).toBe('custom bolt (Rm and Rp0.2 given; otherwise as grade 8.8)');
+    expect(r.materials.bolt.rm).toBe(900);
+    // Bolt break force As x Rm = 58.0 mm² x 900 MPa (ISO 898-1 stress area of M10, 58.0 mm²).
+    expect(Math.abs(r.stripping.boltBreakForce - 58.0 * 900)).toBeLessThan(60);
+    expect(run({boltRm: 900}).materials.bolt.name).toBe('custom bolt (Rm given; otherwise as grade 8.8)');
+    expect(run({}).materials.bolt.id).toBe('8.8');
+  });
+
+  it('Rp0.2 above Rm: the message rounds the converted numbers (was 896.3184481118869 MPa)', () => {
+    const e = inputError(() => run({boltRm: 827.3708751802033, boltRp: 896.3184481118869}));
+    expect(e.field).toBe('boltRp');
+    expect(e.message).toMatch(/Rp0\.2 896\.3 MPa must be below the tensile strength Rm 827\.4 MPa/);
+  });
+});
+
+describe('other input checks', () => {
+  it('a bearing diameter at or below the thread diameter is rejected (DKm = mean of head face and clearance hole, VDI 2230 Part 1)', () => {
+    const e = inputError(() => run({bearingDiameter: 5}));
+    expect(e.field).toBe('bearingDiameter');
+    expect(e.message).toMatch(/bearing diameter 5 mm must be larger than the thread diameter 10 mm/);
+    expect(run({bearingDiameter: 15}).tightening.bearingSource).toBe('input');
+  });
+
+  it('the chamfer message has no float noise (was 15.239999999999998 mm)', () => {
+    const e = inputError(() => run({engagement: 12.7, chamfer: 0.6 * 25.4}));
+    expect(e.message).toBe('the chamfer (15.24 mm) must be shorter than the engaged length (12.7 mm)');
+  });
+});
