@@ -40,13 +40,13 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const stripFail = result.flags.some(f => FAILING_STRIP.has(f.code) && f.level === 'fail');
   const need = input.requiredMargin;
   const gaugeWidth = Math.max(8, width - 11 - 14);
-  const {scale} = engagementScale(
+  const {scale, end} = engagementScale(
     st.effectiveEngagement,
     [
       {letter: 'F', at: st.requiredEngagement.fedStd},
       {letter: 'A', at: st.requiredEngagement.alexander},
     ],
-    Math.max(8, width - 11),
+    Math.max(8, width - 11 - 6),
     t,
   );
   const hole = input.internal === 'nut' ? 'nut' : 'hole';
@@ -65,7 +65,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('g', ' bolt-1st', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} ${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
     row('r', 'Needed', `F ${q(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${q(st.requiredEngagement.alexander, 'length')} Alex.`),
-    row('sc', ` ${t.sym.barFull}=present`, scale),
+    row('sc', ` ${t.sym.barFull}=present`, `${scale} ${formatNumber(toDisplay(end, 'length', units), 2)}`),
   ];
   return <Lines lines={lines} width={width} height={height} />;
 }
