@@ -20,6 +20,12 @@ const io: CliIo = {
 };
 
 async function launchWorkbench(args: string[], cliIo: CliIo): Promise<number> {
+  // Ink renders only the last frame when it believes it runs under CI (CI or
+  // CONTINUOUS_INTEGRATION set). In a real terminal the workbench must draw
+  // every frame, so the variables are neutralised before Ink is loaded.
+  if (cliIo.stdinIsTTY && cliIo.stdoutIsTTY) {
+    for (const key of ['CI', 'CONTINUOUS_INTEGRATION']) if (key in process.env) process.env[key] = 'false';
+  }
   const {launch} = await import('../ui/launch.js');
   return launch(args, cliIo);
 }
