@@ -163,7 +163,12 @@ export function tighten(t: TighteningInput): TighteningResult {
   const minPreload = torqueNmm / kOf(t.muThread.max, t.muHead.max) / root;
   const nominal = t.mode === 'preload' ? (t.preload ?? 0) : torqueNmm / kMid;
   const assemblyVonMises = torqueNmm * worstPerTorque;
-  const fmZul = permissiblePreload(s, t.rp, t.utilisation, t.muThread.min);
+  // Friction form: the permissible preload is VDI's FM,zul at the lowest thread friction (the
+  // highest-preload corner). Nut-factor form: the preload does not depend on friction, so the
+  // highest stress comes with the governing (highest) thread friction; FM,zul and the thread torque
+  // use it, so the permissible preload and torque agree with the utilisation shown.
+  const muPermissible = useK ? governingMu : t.muThread.min;
+  const fmZul = permissiblePreload(s, t.rp, t.utilisation, muPermissible);
   return {
     preload: {min: minPreload, nominal, max: maxPreload},
     torque: torqueNmm / 1000,
@@ -171,7 +176,7 @@ export function tighten(t: TighteningInput): TighteningResult {
     assemblyVonMises,
     permissiblePreload: fmZul,
     permissibleTorque: (fmZul * kOf(t.muThread.min, t.muHead.min)) / 1000,
-    threadTorque: (maxPreload * threadTorquePerPreload(s, t.muThread.min)) / 1000,
+    threadTorque: (maxPreload * threadTorquePerPreload(s, muPermissible)) / 1000,
     governingMuThread: governingMu,
     method: useK ? 'nut-factor' : 'friction',
   };
