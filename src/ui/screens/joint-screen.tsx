@@ -151,6 +151,9 @@ function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag
   const flags = sortedFlags(ev.result?.flags ?? []);
   if (!ev.result) return <Box height={rows} />;
   if (flags.length === 0) return <Lines lines={[{text: fit(`OK  no flags raised for this ${what}`, width, t.sym.ellipsis), color: t.tone('ok')}]} width={width} height={rows} />;
+  // With room to spare (a taller terminal), every flag in full.
+  const full = flags.flatMap(f => wrap(f.message, width - 6, 6, t.sym.ellipsis).map((l, i): Line => ({text: `${i ? '' : LEVEL_WORD[f.level]}`.padEnd(6) + l, color: levelTone(t, f.level), bold: f.level === 'fail'})));
+  if (full.length <= rows) return <Lines lines={full} width={width} height={rows} />;
   const shown = flags.slice(0, rows);
   const more = flags.length - shown.length;
   const lines = shown.map((f, i): Line => {
@@ -165,7 +168,8 @@ function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag
 export function JointScreen(props: Props) {
   const {state, width, height} = props;
   const ev = state.mode === 'screw' && props.sev ? props.sev : props.ev;
-  const flagLines = height >= 20 ? 4 : 2;
+  // The readout needs 14 lines; a taller terminal gives the rest to the flags.
+  const flagLines = Math.max(2, height - 1 - 14);
   const bodyH = height - 1 - flagLines;
   const leftW = Math.max(34, Math.floor(width * 0.42));
   const rightW = width - leftW - 1;
