@@ -45,6 +45,18 @@ function pct(x: number): string {
   return `${formatNumber(x * 100, 2)} %`;
 }
 
+/** Threads listed one by one in the load-share row; the rest are summed (a long engagement has hundreds). */
+export const SHARE_LIST_MAX = 12;
+
+/** "38 %, 25 %, ..." for the first SHARE_LIST_MAX threads, then "and N more threads, x % together". */
+export function shareList(shares: readonly number[]): string {
+  const shown = shares.slice(0, SHARE_LIST_MAX).map(x => pct(x));
+  const rest = shares.slice(SHARE_LIST_MAX);
+  if (rest.length === 0) return shown.join(', ');
+  const together = rest.reduce((a, b) => a + b, 0);
+  return `${shown.join(', ')}, and ${rest.length} more threads, ${pct(together)} together`;
+}
+
 function friction(r: Range): string {
   return r.min === r.max ? ratio(r.min) : `${ratio(r.min)} to ${ratio(r.max)}`;
 }
@@ -148,7 +160,7 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
         {label: 'Thread bearing stress', value: q(s.bearing, 'stress', f)},
         {label: 'von Mises equivalent', value: q(s.vonMises, 'stress', f)},
         {label: 'Shank von Mises', value: q(result.stress.shank.vonMises, 'stress', f)},
-        {label: 'Load share per thread', value: result.loadShare.map(x => pct(x)).join(', '), note: 'loaded face first'},
+        {label: 'Load share per thread', value: shareList(result.loadShare), note: 'loaded face first'},
       ],
     },
     {

@@ -17,7 +17,8 @@ export function wrapText(text: string, first: string, rest: string, width = TEXT
   const lines: string[] = [];
   let line = first;
   let fresh = true;
-  const words = text.split(/\s+/).filter(Boolean);
+  // "38 %" stays on one line: the space before a per-cent sign does not break (NBSP while wrapping).
+  const words = text.replace(/ %/g, '\u00a0%').split(/[ \t\n\r]+/).filter(Boolean);
   for (let word of words) {
     while (word.length > width - rest.length) {
       if (!fresh) {
@@ -40,7 +41,7 @@ export function wrapText(text: string, first: string, rest: string, width = TEXT
     fresh = false;
   }
   if (!fresh || lines.length === 0) lines.push(line);
-  return lines.map(l => l.trimEnd());
+  return lines.map(l => l.replace(/\u00a0/g, ' ').trimEnd());
 }
 
 /**

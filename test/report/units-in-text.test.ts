@@ -70,3 +70,25 @@ describe('flag messages in the report units; JSON (result.flags) stays SI', () =
     expect(blindHoleTooShallow({...c, units: 'us'})?.message).toMatch(/0\.472 in of bolt goes into a 0\.394 in deep/);
   });
 });
+
+describe('load share row', () => {
+  it('a long engagement lists 12 threads and sums the rest (was hundreds of "0.000000 %")', async () => {
+    const {shareList, SHARE_LIST_MAX} = await import('../../src/report/sections.js');
+    const shares = Array.from({length: 40}, (_, i) => 0.5 ** (i + 1));
+    const text = shareList(shares);
+    expect(SHARE_LIST_MAX).toBe(12);
+    expect(text.split(', ').length).toBe(14); // 12 shares, then "and 28 more threads", "x % together"
+    expect(text).toMatch(/^50 %, 25 %, 13 %, /);
+    expect(text).toMatch(/, and 28 more threads, 0\.024 % together$/);
+    expect(shareList([0.38, 0.25])).toBe('38 %, 25 %');
+  });
+
+  it('the text report never breaks a line between a number and its "%"', () => {
+    const long = checkJoint(JointInputSchema.parse({...DEMO, thread: 'M8', boltGrade: '8.8', parent: 'AlSi7Mg-T6', engagement: 300}));
+    const text = formatCheckText(long, JointInputSchema.parse({...DEMO, thread: 'M8', boltGrade: '8.8', parent: 'AlSi7Mg-T6', engagement: 300}), {units: 'si'});
+    expect(text).not.toMatch(/\n +%/);
+    expect(text).not.toMatch(/0\.000000 %/);
+    expect(text).toMatch(/more threads, [\d.]+ % together/);
+    for (const line of text.split('\n')) expect([...line].length, line).toBeLessThanOrEqual(80);
+  });
+});
