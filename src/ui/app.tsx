@@ -82,6 +82,8 @@ function PresetLine({state, width}: {state: WorkbenchState; width: number}) {
 
 function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Record<string, string>; error?: string}; width: number}) {
   const t = useTheme();
+  // A prompt or question keeps its line; an error about it goes on the line above.
+  const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? state.message.text : undefined;
   let text = '';
   let isError = false;
   if (state.prompt) {
@@ -106,10 +108,17 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
       isError = true;
     }
   }
-  return (
+  const line = (
     <Text color={isError ? t.tone('fail') : state.prompt || state.confirm || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.draftOffer)}>
       {fit(`${isError ? '! ' : ''}${text}`, width, t.sym.ellipsis) || ' '}
     </Text>
+  );
+  if (!promptError) return line;
+  return (
+    <Box flexDirection="column">
+      <Text color={t.tone('fail')}>{fit(`! ${promptError}`, width, t.sym.ellipsis)}</Text>
+      {line}
+    </Box>
   );
 }
 
@@ -144,7 +153,8 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const caution = cautionLines(columns);
   const height = rows - 1;
   const hints = hintLines(contextsOf(state), t.ascii, columns);
-  const bodyH = bodyHeight({columns, rows}) - (hints.length - 1);
+  const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
+  const bodyH = bodyHeight({columns, rows}) - (hints.length - 1) - promptError;
   let body: React.ReactNode;
   switch (state.screen) {
     case 'joint':

@@ -121,6 +121,7 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}, with
       },
       save(name, values, {overwrite, kind}) {
         store.kinds.set(name, kind ?? 'joint');
+        if (/\//.test(name)) throw new Error('preset name must be 1 to 64 characters: letters, digits, space and . _ - + ( ) #');
         if (shipped[name]) throw new Error(`"${name}" is a shipped demo preset (read-only)`);
         if (store.saved.has(name) && !overwrite) throw new Error(`preset "${name}" exists`);
         store.saved.set(name, {values: structuredClone(values), savedAt: '2026-01-01T10:00:00.000Z'});

@@ -35,6 +35,11 @@ describe('presets screen', () => {
   it('saves as, searches, renames, duplicates, deletes with confirmation', async () => {
     const app = startApp();
     await app.press(['p', 'a'], 'Save the joint as: _');
+    await type(app, 'a/b');
+    await app.press(KEY.enter, '! Could not save "a/b": preset name must be 1 to 64 characters');
+    expect(app.frame()).toContain('Save the joint as: a/b_');
+    await app.press(KEY.ctrlU, 'Save the joint as: _');
+    expect(app.frame()).not.toContain('Could not save');
     await type(app, 'alpha');
     await app.press(KEY.enter, 'Saved preset "alpha".');
     await app.press('a');
@@ -65,7 +70,9 @@ describe('presets screen', () => {
     const app = startApp();
     await app.press(['p', 'i'], 'Import presets from file: _');
     await type(app, 'missing.json');
-    await app.press(KEY.enter, 'Import presets from file: cannot read missing.json: no such file');
+    await app.press(KEY.enter, '! cannot read missing.json: no such file');
+    expect(app.frame()).toContain('Import presets from file: missing.json');
+    await app.press(KEY.escape, 'Cancelled');
     app.svc.store.files.set('in.json', '{}');
     await app.press('i');
     await type(app, 'in.json');

@@ -22,13 +22,13 @@ export function PresetsScreen({state, svc, width, height}: Props) {
   return (
     <Box flexDirection="column" width={width} height={height}>
       <Text bold>{fit(`Presets: ${list.length}${q ? ` matching "${q}"` : ''}   Enter loads the marked one; demos are read-only`, width, t.sym.ellipsis)}</Text>
-      <Text color={t.tone('dim')}>{pad(`  ${pad('Name', 32)} ${pad('Kind', 12)} ${pad('Thread', 16)} Saved`, width)}</Text>
+      <Text color={t.tone('dim')}>{pad(`  ${pad('Name', 31)} ${pad('Kind', 12)} ${pad('Thread', 16)} Saved`, width)}</Text>
       {list.length === 0 ? <Text>{q ? `Nothing matches "${q}"; / to search again.` : 'No presets yet: s or a saves the joint.'}</Text> : null}
       {list.slice(start, start + rows).map((p, i) => {
         const marked = start + i === idx;
         const current = p.name === state.preset.name;
         const kind = `${p.kind === 'screw' ? 'screw' : 'joint'}${p.readOnly ? ', demo' : ''}`;
-        const name = pad(`${p.name}${current ? ' (open)' : ''}`, 32, t.sym.ellipsis);
+        const name = pad(`${p.name}${current ? ' (open)' : ''}`, 31, t.sym.ellipsis);
         const saved = p.savedAt ? p.savedAt.slice(0, 16).replace('T', ' ') : p.readOnly ? 'shipped' : '';
         return (
           <Text key={p.name} inverse={marked} bold={current}>

@@ -263,7 +263,6 @@ function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: string): Wo
   }
 }
 
-const PRESET_NAME = /^[^\u0000-\u001f/\\]{1,60}$/;
 
 function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   const p = s.prompt!;
@@ -271,18 +270,16 @@ function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   const base = {...s, prompt: undefined};
   if (p.kind === 'search') return {...base, presetList: {query: text, index: 0}};
   if (text === '') return {...s, message: fail(`${p.title}: type a value, or Esc to cancel`)};
-  const nameOk = PRESET_NAME.test(text);
-  const badName = `Preset name "${text}": accepted 1 to 60 characters, no / or \\`;
   try {
     switch (p.kind) {
       case 'saveAs': {
-        if (!nameOk) return {...s, message: fail(badName)};
         const exists = svc.presets.list().some(x => x.name === text);
         if (exists) return {...base, confirm: {kind: 'overwritePreset', question: `Preset "${text}" exists. Replace it?`, target: text}};
-        return savePreset(base, svc, text, false);
+        const saved = savePreset(base, svc, text, false);
+        // On a refused name the prompt stays open with the typed text.
+        return saved.message?.level === 'error' ? {...s, message: saved.message} : saved;
       }
       case 'rename':
-        if (!nameOk) return {...s, message: fail(badName)};
         svc.presets.rename(p.target!, text);
         return {
           ...base,
@@ -290,7 +287,6 @@ function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
           message: info(`Renamed "${p.target}" to "${text}".`),
         };
       case 'duplicate':
-        if (!nameOk) return {...s, message: fail(badName)};
         svc.presets.duplicate(p.target!, text);
         return {...base, message: info(`Copied "${p.target}" to "${text}".`)};
       case 'import': {
@@ -312,7 +308,7 @@ function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
         return writeReport(base, svc, text, false);
     }
   } catch (e) {
-    return {...base, message: fail(`${p.title}: ${errText(e)}`)};
+    return {...s, message: fail(errText(e))};
   }
   return base;
 }
@@ -521,11 +517,11 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'prompt.cancel':
       return {...s, prompt: undefined, message: info('Cancelled')};
     case 'prompt.erase':
-      return {...s, prompt: {...s.prompt!, buffer: Array.from(s.prompt!.buffer).slice(0, -1).join('')}};
+      return {...s, message: undefined, prompt: {...s.prompt!, buffer: Array.from(s.prompt!.buffer).slice(0, -1).join('')}};
     case 'prompt.clear':
-      return {...s, prompt: {...s.prompt!, buffer: ''}};
+      return {...s, message: undefined, prompt: {...s.prompt!, buffer: ''}};
     case 'prompt.type':
-      return s.prompt!.buffer.length >= 200 ? s : {...s, prompt: {...s.prompt!, buffer: s.prompt!.buffer + (ev.char ?? '')}};
+      return s.prompt!.buffer.length >= 200 ? s : {...s, message: undefined, prompt: {...s.prompt!, buffer: s.prompt!.buffer + (ev.char ?? '')}};
 
     case 'confirm.yes': {
       const c = s.confirm!;
