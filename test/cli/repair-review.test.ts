@@ -54,3 +54,28 @@ describe('tapwright repair: review findings', () => {
     expect(r.out).toMatch(/Required margin 1\.00\./);
   });
 });
+
+describe('tapwright repair --units us: reasons and notes in inches, JSON in mm', () => {
+  const job = ['--thread', '3/8-16 UNC', '--parent', '6061-T6', '--bolt', 'SAE-8', '--engage', '0.4in', '--stripped-depth', '0.2in', '--wall', '0.4in', '--depth-available', '0.8in', '--units', 'us'];
+  it('text carries no mm figure', async () => {
+    const r = await run(...job);
+    expect(r.out).toMatch(/Note: stripped from the surface to 0\.200 in/);
+    expect(r.out).not.toMatch(/\d mm\b/);
+  });
+  it('JSON keeps SI', async () => {
+    const r = await run(...job, '--json');
+    expect(r.out).toMatch(/stripped from the surface to 5\.08 mm/);
+  });
+});
+
+describe('tapwright repair --format markdown: inputs in the report units', () => {
+  it('custom strengths in ksi with --units us; a nut joint names its class', async () => {
+    const r = await run('--thread', '3/8-16 UNC', '--parent-rm', '40ksi', '--bolt-rm', '150ksi', '--engage', '0.5', '--units', 'us', '--format', 'markdown');
+    expect(r.out).toMatch(/\| Bolt \| custom: Rm 150 ksi given \(otherwise as grade 8\.8\) \|/);
+    expect(r.out).toMatch(/\| Parent material \| custom, Rm 40\.0 ksi \|/);
+    expect(r.out).toMatch(/\| Required margin \| 1\.00 \|/);
+    const nut = await run('--thread', 'M10', '--nut', '8', '--engage', '8', '--format', 'markdown');
+    expect(nut.out).toMatch(/\| Nut class \| 8 \|/);
+    expect(nut.out).toMatch(/\| Bolt \| grade 8\.8 \|/);
+  });
+});

@@ -20,6 +20,17 @@ function q(v: number | null | undefined, dim: 'length' | 'torque', units: UnitSy
   return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatQuantity(v, dim, units, {significant: 3});
 }
 
+function stress(v: number | undefined, units: UnitSystem): string {
+  return v === undefined ? '-' : formatQuantity(v, 'stress', units, {significant: 3});
+}
+
+/** "grade 8.8", or the strengths given for a custom bolt, in the report's units. */
+function boltWords(joint: JointInput, units: UnitSystem): string {
+  if (joint.boltRm === undefined && joint.boltRp === undefined) return `grade ${joint.boltGrade}`;
+  const given = [joint.boltRm !== undefined ? `Rm ${stress(joint.boltRm, units)}` : '', joint.boltRp !== undefined ? `Rp0.2 ${stress(joint.boltRp, units)}` : ''].filter(Boolean);
+  return `custom: ${given.join(', ')} given (otherwise as grade ${joint.boltGrade})`;
+}
+
 function ratio(x: number | null): string {
   return x === null || !Number.isFinite(x) ? '-' : x.toFixed(2);
 }
@@ -37,13 +48,13 @@ export function planMarkdown(plan: RepairPlan, joint: JointInput, meta: RepairRe
   out.push('## Joint and hole', '', '| Input | Value |', '|---|---|');
   const rows: Array<[string, string]> = [
     ['Thread', plan.thread],
-    ['Bolt grade', joint.boltGrade],
-    ['Parent material', joint.parent ?? `custom, Rm ${joint.parentRm ?? '-'} MPa`],
+    ['Bolt', boltWords(joint, u)],
+    [joint.internal === 'nut' ? 'Nut class' : 'Parent material', joint.internal === 'nut' ? (joint.nutClass ?? '-') : (joint.parent ?? `custom, Rm ${stress(joint.parentRm, u)}`)],
     ['Engaged length (screw reach)', q(joint.engagement, 'length', u)],
     ['Hole', `${h.state === 'stripped' ? `stripped to ${q(h.strippedDepth, 'length', u)}` : 'intact'}, ${h.through ? 'through' : 'blind'}`],
     [h.through ? 'Part thickness' : 'Depth available', q(h.depthAvailable, 'length', u)],
     ['Edge distance (centre line to edge)', q(h.wall, 'length', u)],
-    ['Required margin', String(plan.requiredMargin)],
+    ['Required margin', plan.requiredMargin.toFixed(2)],
   ];
   for (const [k, v] of rows) out.push(`| ${cell(k)} | ${cell(v)} |`);
   if (plan.asIs) {

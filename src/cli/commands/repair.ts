@@ -134,7 +134,7 @@ const REPAIR_FIELD_OPTION: Record<string, string> = {
 };
 
 async function loadPreset(name: string, io: CliIo): Promise<{joint?: JointInputDraft; repair?: RepairInputDraft}> {
-  const {resolvePreset} = await import('../../store/index.js');
+  const {resolvePreset} = await import('../../store/resolve.js');
   const p = resolvePreset(name, io.env, 'joint', m => io.err(`tapwright: ${m}\n`));
   if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
   return {joint: p.joint, ...(p.repair ? {repair: p.repair} : {})};
@@ -208,7 +208,8 @@ export const command: Command = {
 
     let plan;
     try {
-      plan = planRepairs(joint, repair.data, table);
+      // Reasons and notes in the display units; the JSON stays SI throughout.
+      plan = planRepairs(joint, repair.data, table, format === 'json' ? 'si' : (units as UnitSystem));
     } catch (e) {
       if (e instanceof JointInputError) {
         const option = optionFor(e.field);

@@ -9,6 +9,7 @@ import type {RepairInput} from './input.js';
 import type {ThreadBasics} from './helical.js';
 import {EFFORT_SCALE} from './rank.js';
 import type {RepairKind, RepairOption} from './types.js';
+import {toDisplay, type UnitSystem} from '../units.js';
 
 export interface PlanContext {
   deps: RepairDeps;
@@ -25,6 +26,8 @@ export interface PlanContext {
   /** Depth below which the thread is good (after clean-up), mm; the chamfer for an intact hole. */
   goodStart: number;
   stripped: boolean;
+  /** Units the reasons and notes are written in (values stay mm); default SI. */
+  units?: UnitSystem;
 }
 
 export type Checked = {ok: true; result: CheckResult} | {ok: false; error: string};
@@ -118,6 +121,20 @@ export function judge(ctx: PlanContext, o: RepairOption): RepairOption {
 /** A length for a message, mm: at most 2 decimals, no trailing zeros. */
 export function mm(x: number): string {
   return Number(x.toFixed(2)).toString();
+}
+
+/**
+ * A length with its unit for a reason or note: SI "12 mm" (`decimals` given:
+ * fixed, else at most 2 and no trailing zeros), US "0.472 in" (3 decimals).
+ */
+export function lengthIn(units: UnitSystem | undefined, x: number, decimals?: number): string {
+  if (units === 'us') return `${toDisplay(x, 'length', 'us').toFixed(3)} in`;
+  return `${decimals === undefined ? mm(x) : x.toFixed(decimals)} mm`;
+}
+
+/** lengthIn in the context's units. */
+export function len(ctx: PlanContext, x: number, decimals?: number): string {
+  return lengthIn(ctx.units, x, decimals);
 }
 
 /** Round a length up to the next 0.5 mm (a length a technician can set). */

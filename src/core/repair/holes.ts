@@ -4,6 +4,8 @@
  * ligament rule for the wall around the hole. Working units: mm.
  */
 import {drillPointLength, type ThreadBasics} from './helical.js';
+import {lengthIn} from './common.js';
+import type {UnitSystem} from '../units.js';
 
 /**
  * Common tap drills for ISO coarse threads, mm (the values of the ISO 2306 /
@@ -92,10 +94,11 @@ export function minimumLigament(newMajor: number): number {
  * leaves enough ligament around a thread or hole of diameter `newMajor`, else
  * the reason in shop words.
  */
-export function wallProblem(wall: number | undefined, newMajor: number, what: string): string | null {
+export function wallProblem(wall: number | undefined, newMajor: number, what: string, units?: UnitSystem): string | null {
   if (wall === undefined) return null;
   const ligament = wall - newMajor / 2;
   const needed = minimumLigament(newMajor);
   if (ligament + 1e-9 >= needed) return null;
-  return `${what} (${newMajor.toFixed(2)} mm) leaves ${Math.max(0, ligament).toFixed(2)} mm of wall to the edge; needs ${needed.toFixed(2)} mm (edge distance ${Number(wall.toFixed(2))} mm)`;
+  const l = (x: number, d?: number) => lengthIn(units, x, d);
+  return `${what} (${l(newMajor, 2)}) leaves ${l(Math.max(0, ligament), 2)} of wall to the edge; needs ${l(needed, 2)} (edge distance ${l(wall)})`;
 }

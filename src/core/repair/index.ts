@@ -12,6 +12,7 @@ import type {CheckResult} from '../joint/result.js';
 import {listDesignations, parseThread} from '../threads/index.js';
 import {nutClass, nutDimensions} from '../materials/index.js';
 import type {ThreadFamily, ThreadGeometry, ThreadSpec} from '../types.js';
+import type {UnitSystem} from '../units.js';
 import demoTable from '../../../presets/solid-inserts-demo.json' with {type: 'json'};
 import type {RepairDeps, SeriesThread} from './context.js';
 import {RepairInputSchema, type RepairInput, type RepairInputDraft} from './input.js';
@@ -108,10 +109,17 @@ export function defaultDeps(solidTable: SolidInsertTable = DEMO_SOLID_INSERTS): 
 /**
  * Ranked repair options for a joint and the state of its hole (mm, N, N·m).
  * `repair` may be a draft (defaults applied); `solidTable` is the user's solid
- * key-locked insert table (default: the shipped demo table). Throws the
+ * key-locked insert table (default: the shipped demo table); `units` is the
+ * unit system of the reasons and notes only (numbers stay mm, N, N·m; JSON
+ * output keeps 'si'). Throws the
  * mechanics core's JointInputError when the joint itself cannot be computed.
  */
-export function planRepairs(joint: JointInput, repair: RepairInput | RepairInputDraft = {}, solidTable: SolidInsertTable = DEMO_SOLID_INSERTS): RepairPlan {
+export function planRepairs(
+  joint: JointInput,
+  repair: RepairInput | RepairInputDraft = {},
+  solidTable: SolidInsertTable = DEMO_SOLID_INSERTS,
+  units: UnitSystem = 'si',
+): RepairPlan {
   const r = RepairInputSchema.parse(repair);
-  return planRepairsWith(defaultDeps(solidTable), joint, r);
+  return planRepairsWith(defaultDeps(solidTable), joint, r, units);
 }

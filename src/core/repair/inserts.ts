@@ -10,7 +10,7 @@
  * stripping forces themselves are the core's).
  */
 import type {CheckResult} from '../joint/result.js';
-import {applyResult, infeasible, mm, judge, newBoltVariant, roundUpHalf, safeCheck, safeCheckThread, skeleton, variant, type Checked, type PlanContext} from './common.js';
+import {applyResult, infeasible, len, judge, newBoltVariant, roundUpHalf, safeCheck, safeCheckThread, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {HELICAL_LENGTH_FACTORS, INSERT_WIRE, insertDepths, receivingThread, type ThreadBasics} from './helical.js';
 import {blindHoleDepths, tapDrill, wallProblem} from './holes.js';
 import {DEMO_TABLE_WARNING, type SolidInsertEntry} from './solid-table.js';
@@ -71,18 +71,18 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
       setDown: depths.setDown,
       parentThread: {designation: rt.tap, major: rt.major, pitchDiameter: rt.pitchDiameter, minor: rt.minor, pitch: rt.pitch},
     };
-    const wall = wallProblem(repair.wall, rt.major, 'the receiving thread');
+    const wall = wallProblem(repair.wall, rt.major, 'the receiving thread', ctx.units);
     if (wall) return infeasible(o, wall);
     if (repair.through) {
       o.tappedDepth = depths.tappedDepth;
       if (repair.depthAvailable !== undefined && depths.tappedDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `the part is ${mm(repair.depthAvailable)} mm thick; a ${k}D insert needs ${depths.tappedDepth.toFixed(1)} mm`);
+        return infeasible(o, `the part is ${len(ctx, repair.depthAvailable)} thick; a ${k}D insert needs ${len(ctx, depths.tappedDepth, 1)}`);
       }
     } else {
       if (repair.depthAvailable !== undefined && depths.holeDepth > repair.depthAvailable + 1e-9) {
         const bottoming = insertDepths(t, k, rt.drill, 'bottoming');
         if (bottoming.holeDepth > repair.depthAvailable + 1e-9) {
-          return infeasible(o, `needs a hole ${depths.holeDepth.toFixed(1)} mm deep (${bottoming.holeDepth.toFixed(1)} mm with a bottoming tap); ${mm(repair.depthAvailable)} mm available`);
+          return infeasible(o, `needs a hole ${len(ctx, depths.holeDepth, 1)} deep (${len(ctx, bottoming.holeDepth, 1)} with a bottoming tap); ${len(ctx, repair.depthAvailable)} available`);
         }
         depths = bottoming;
         o.notes.push('finish with a bottoming tap to fit the depth available');
@@ -96,13 +96,13 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     let engagement = depths.assembled.min;
     if (fullReach > ctx.reach + 1e-9 && !repair.boltLengthMayChange) {
       engagement = Math.min(engagement, ctx.reach - depths.setDown.max);
-      if (engagement < t.pitch) return infeasible(o, `the screw reaches ${mm(ctx.reach)} mm, too short to engage the insert set ${depths.setDown.max.toFixed(1)} mm down`);
-      o.notes.push(`the screw engages only ${engagement.toFixed(1)} mm of the insert (screw length fixed)`);
+      if (engagement < t.pitch) return infeasible(o, `the screw reaches ${len(ctx, ctx.reach)}, too short to engage the insert set ${len(ctx, depths.setDown.max, 1)} down`);
+      o.notes.push(`the screw engages only ${len(ctx, engagement, 1)} of the insert (screw length fixed)`);
     } else {
       o.screwLengthChange = Math.max(0, fullReach - ctx.reach);
     }
     if (!repair.through && o.drilledDepth !== null && ctx.reach > o.drilledDepth + 1e-9) {
-      o.notes.push(`the present screw reaches ${mm(ctx.reach)} mm, deeper than the ${mm(o.drilledDepth)} mm drilled: fit a screw that stops short of the bottom`);
+      o.notes.push(`the present screw reaches ${len(ctx, ctx.reach)}, deeper than the ${len(ctx, o.drilledDepth)} drilled: fit a screw that stops short of the bottom`);
     }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: INSERT_WIRE.rm, parentShear: INSERT_WIRE.shear, engagement, chamfer: 0}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
@@ -116,8 +116,8 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     }
     if (!outer.ok) return infeasible(o, `not computed (parent at the receiving thread): ${outer.error}`);
     combine(o, inner.result, outer.result, {insert: 'insert wire thread', parent: 'parent at the receiving thread'});
-    o.notes.push(`countersink 120 deg to about ${rt.major.toFixed(1)} mm before winding in the insert (common practice, no source)`);
-    if (ctx.stripped) o.notes.push(`the receiving thread's minor diameter (${rt.minor.toFixed(2)} mm) is outside the old thread, so the torn thread is cut away`);
+    o.notes.push(`countersink 120 deg to about ${len(ctx, rt.major, 1)} before winding in the insert (common practice, no source)`);
+    if (ctx.stripped) o.notes.push(`the receiving thread's minor diameter (${len(ctx, rt.minor, 2)}) is outside the old thread, so the torn thread is cut away`);
     return judge(ctx, o);
   });
 }
@@ -153,7 +153,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     const engagement = repair.boltLengthMayChange ? e.length : Math.min(e.length, ctx.reach - e.setDown);
     const fullReach = roundUpHalf(e.setDown + e.length);
     o.screwLengthChange = repair.boltLengthMayChange ? Math.max(0, fullReach - ctx.reach) : 0;
-    if (engagement < ctx.thread.pitch) return infeasible(o, `the screw reaches ${mm(ctx.reach)} mm, too short for the insert`);
+    if (engagement < ctx.thread.pitch) return infeasible(o, `the screw reaches ${len(ctx, ctx.reach)}, too short for the insert`);
     const outer = safeCheckThread(ctx, newBoltVariant(ctx, {
       boltRm: e.bodyRm, boltRp: 0.8 * e.bodyRm, engagement: e.length, chamfer: 0, serviceLoad: 0, internal: 'tapped',
     }), e.external);
@@ -163,20 +163,20 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
     o.drill = e.drill ?? tapDrill(ext, {min: g.limits.internal.minorMin, max: g.limits.internal.minorMax});
     o.changeSize = g.nominal;
     o.insert = {type: e.type, nominalLength: e.length, setDown, parentThread: {designation: e.external, major: g.nominal, pitchDiameter: g.pitchDiameter, minor: g.minorDiameterInternal, pitch: g.pitch}, keys: e.keys, dataSource: table.provenance.source};
-    const wall = wallProblem(repair.wall, g.nominal, `the insert's external thread`);
+    const wall = wallProblem(repair.wall, g.nominal, `the insert's external thread`, ctx.units);
     if (wall) return infeasible(o, wall);
     if (repair.through) {
       o.tappedDepth = e.setDown + e.length;
       if (repair.depthAvailable !== undefined && o.tappedDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `the part is ${mm(repair.depthAvailable)} mm thick; the insert needs ${o.tappedDepth.toFixed(1)} mm`);
+        return infeasible(o, `the part is ${len(ctx, repair.depthAvailable)} thick; the insert needs ${len(ctx, o.tappedDepth, 1)}`);
       }
     } else {
       const d = blindHoleDepths(e.setDown + e.length, g.pitch, o.drill);
       Object.assign(o, {tappedDepth: d.tappedDepth, drilledDepth: d.drilledDepth, holeDepth: d.holeDepth});
       if (repair.depthAvailable !== undefined && d.holeDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
+        return infeasible(o, `needs a hole ${len(ctx, d.holeDepth, 1)} deep; ${len(ctx, repair.depthAvailable)} available`);
       }
-      if (ctx.reach > d.drilledDepth + 1e-9) o.notes.push(`the present screw reaches ${mm(ctx.reach)} mm, deeper than the ${mm(d.drilledDepth)} mm drilled: fit a screw that stops short of the bottom`);
+      if (ctx.reach > d.drilledDepth + 1e-9) o.notes.push(`the present screw reaches ${len(ctx, ctx.reach)}, deeper than the ${len(ctx, d.drilledDepth)} drilled: fit a screw that stops short of the bottom`);
     }
     const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);

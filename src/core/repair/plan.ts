@@ -3,8 +3,9 @@
  * wires the real core. Fast: a few dozen calls of the mechanics core.
  */
 import type {JointInput} from '../joint/input.js';
+import type {UnitSystem} from '../units.js';
 import {CAUTION_LINES} from '../cautions.js';
-import {infeasible, mm, skeleton, type PlanContext} from './common.js';
+import {infeasible, len, skeleton, type PlanContext} from './common.js';
 import type {RepairDeps} from './context.js';
 import {plainDesignation, HELICAL_SOURCES, type ThreadBasics} from './helical.js';
 import {HOLE_SOURCES} from './holes.js';
@@ -17,7 +18,7 @@ import {longerEngagementOption, reuseOption} from './same-thread.js';
 import {REPAIR_KINDS, type RepairOption, type RepairPlan} from './types.js';
 
 /** Build the per-call context. Throws only when the joint itself is rejected by the mechanics core. */
-export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairInput): PlanContext {
+export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairInput, units: UnitSystem = 'si'): PlanContext {
   const base = deps.check(joint);
   const spec = base.geometry.spec;
   const thread: ThreadBasics = {family: spec.family, nominal: base.geometry.nominal, pitch: base.geometry.pitch, tpi: spec.tpi, sizeLabel: spec.sizeLabel, series: spec.series};
@@ -30,17 +31,18 @@ export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairI
     deps, joint, repair, base, thread,
     plain: plainDesignation(thread),
     required: repair.margin ?? joint.requiredMargin,
-    reach, goodStart, stripped,
+    reach, goodStart, stripped, units,
   };
 }
 
 /**
  * Every repair option for the joint and the state of its hole, ranked by
- * REPAIR_RANKING_RULE. Lengths mm, forces N, torque N·m. Each option's margins
+ * REPAIR_RANKING_RULE. Lengths mm, forces N, torque N·m; `units` only sets the
+ * units the reasons and notes are written in (JSON: keep 'si'). Each option's margins
  * come from the mechanics core on a modified joint (see the option modules).
  */
-export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: RepairInput): RepairPlan {
-  const ctx = planContext(deps, joint, repair);
+export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: RepairInput, units: UnitSystem = 'si'): RepairPlan {
+  const ctx = planContext(deps, joint, repair, units);
   let options: RepairOption[];
   if (joint.internal === 'nut') {
     // The planner repairs tapped holes; a nut joint is put right with a new nut (and bolt).
@@ -57,7 +59,7 @@ export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: Rep
     ];
   }
   const notes: string[] = [];
-  if (ctx.stripped) notes.push(`stripped from the surface to ${mm(Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach))} mm; good thread assumed below ${ctx.goodStart.toFixed(1)} mm`);
+  if (ctx.stripped) notes.push(`stripped from the surface to ${len(ctx, Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach))}; good thread assumed below ${len(ctx, ctx.goodStart, 1)}`);
   if (repair.depthAvailable === undefined) notes.push(repair.through ? 'part thickness not given: depths are not checked' : 'depth available not given: hole depths are not checked');
   if (deps.solidTable.provenance.kind === 'demo') notes.push(`solid insert sizes: ${DEMO_TABLE_WARNING}`);
   if (repair.wall === undefined) notes.push('edge distance not given: options that remove material are not checked against the wall');

@@ -3,7 +3,7 @@
  * ISO 261/262 or unified series, same or finer pitch) and a through-bolt with a
  * nut. Margins from the mechanics core (checkJoint).
  */
-import {applyResult, infeasible, mm, judge, newBoltVariant, safeCheck, skeleton, type PlanContext} from './common.js';
+import {applyResult, infeasible, len, judge, newBoltVariant, safeCheck, skeleton, type PlanContext} from './common.js';
 import type {SeriesThread} from './context.js';
 import {blindHoleDepths, clearanceHole, tapDrill, wallProblem} from './holes.js';
 import type {ThreadBasics} from './helical.js';
@@ -49,7 +49,7 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
     applyResult(o, r.result);
     o.margin = {stripping: r.result.margin.stripping, boltBreaksFirst: r.result.margin.boltBreaksFirst};
     o.notes.push(`fit a ${c.designation} screw and open the clamped part's hole to suit; tightened by the utilisation rule (${joint.utilisation} of yield)`);
-    const wall = wallProblem(repair.wall, c.nominal, `the ${c.designation} thread`);
+    const wall = wallProblem(repair.wall, c.nominal, `the ${c.designation} thread`, ctx.units);
     if (wall) return infeasible(o, wall);
     if (repair.through) {
       o.tappedDepth = ctx.reach;
@@ -57,7 +57,7 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
       const d = blindHoleDepths(ctx.reach, c.pitch, o.drill);
       Object.assign(o, {tappedDepth: d.tappedDepth, drilledDepth: d.drilledDepth, holeDepth: d.holeDepth});
       if (repair.depthAvailable !== undefined && d.holeDepth > repair.depthAvailable + 1e-9) {
-        return infeasible(o, `needs a hole ${d.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
+        return infeasible(o, `needs a hole ${len(ctx, d.holeDepth, 1)} deep; ${len(ctx, repair.depthAvailable)} available`);
       }
     }
     return judge(ctx, o);
@@ -78,7 +78,7 @@ export function throughBoltOption(ctx: PlanContext): RepairOption {
   const m = repair.nutHeight ?? dims?.m;
   const s = repair.nutFlats ?? dims?.s;
   if (m === undefined || s === undefined) return infeasible(o, `no tabulated nut for ${ctx.plain}; give the nut height and width across flats`);
-  const wall = wallProblem(repair.wall, o.drill, 'the clearance hole');
+  const wall = wallProblem(repair.wall, o.drill, 'the clearance hole', ctx.units);
   if (wall) return infeasible(o, wall);
   const r = safeCheck(ctx, {
     ...joint,
@@ -95,6 +95,6 @@ export function throughBoltOption(ctx: PlanContext): RepairOption {
     o.screwLengthChange = null;
     o.notes.push('part thickness not given: the bolt must pass through it and the nut with 2 pitches showing');
   }
-  o.notes.push(`nut class ${nutClass}, height ${mm(m)} mm, ${mm(s)} mm across flats; needs access to the far side, washer under the nut`);
+  o.notes.push(`nut class ${nutClass}, height ${len(ctx, m)}, ${len(ctx, s)} across flats; needs access to the far side, washer under the nut`);
   return judge(ctx, o);
 }

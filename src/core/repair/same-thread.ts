@@ -3,7 +3,7 @@
  * deepen the hole for a longer engagement. Every margin comes from the
  * mechanics core (checkJoint) on a modified joint.
  */
-import {applyResult, infeasible, mm, judge, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
+import {applyResult, infeasible, len, judge, roundUpHalf, safeCheck, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {blindHoleDepths, tapDrill} from './holes.js';
 import type {RepairOption} from './types.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES} from '../joint/flags.js';
@@ -30,14 +30,14 @@ export function reuseOption(ctx: PlanContext): RepairOption {
   o.notes.push(`chase the thread with a ${ctx.plain} tap, blow out the chips, check the screw runs in by hand`);
   const goodLength = ctx.reach - ctx.goodStart;
   if (ctx.stripped && goodLength < ctx.thread.pitch) {
-    return infeasible(o, `no good thread left: stripped to ${mm(ctx.repair.strippedDepth ?? ctx.reach)} mm of the ${mm(ctx.reach)} mm the screw reaches`);
+    return infeasible(o, `no good thread left: stripped to ${len(ctx, ctx.repair.strippedDepth ?? ctx.reach)} of the ${len(ctx, ctx.reach)} the screw reaches`);
   }
   const c = ctx.stripped ? checkAtReach(ctx, ctx.reach, true) : {ok: true as const, result: ctx.base};
   if (!c.ok) return infeasible(o, `not computed: ${c.error}`);
   applyResult(o, c.result);
   o.margin = {stripping: c.result.margin.stripping, boltBreaksFirst: c.result.margin.boltBreaksFirst};
   o.requiredEngagement = {fedStd: c.result.stripping.requiredEngagement.fedStd, alexander: c.result.stripping.requiredEngagement.alexander};
-  if (ctx.stripped) o.notes.push(`the first ${ctx.goodStart.toFixed(1)} mm carry nothing: stripped zone plus one pitch cleaned up (common practice, no source)`);
+  if (ctx.stripped) o.notes.push(`the first ${len(ctx, ctx.goodStart, 1)} carry nothing: stripped zone plus one pitch cleaned up (common practice, no source)`);
   return judge(ctx, o);
 }
 
@@ -86,20 +86,20 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
   o.margin = {stripping: found.check.result.margin.stripping, boltBreaksFirst: found.check.result.margin.boltBreaksFirst};
   const req = found.check.result.stripping.requiredEngagement;
   o.requiredEngagement = {fedStd: req.fedStd, alexander: req.alexander};
-  o.notes.push(`full thread needed for the bolt to break first: ${req.fedStd.toFixed(1)} mm by FED-STD-H28/2B, ${req.alexander.toFixed(1)} mm by Alexander / VDI 2230; the larger, times the margin ${ctx.required}, is used`);
+  o.notes.push(`full thread needed for the bolt to break first: ${len(ctx, req.fedStd, 1)} by FED-STD-H28/2B, ${len(ctx, req.alexander, 1)} by Alexander / VDI 2230; the larger, times the margin ${ctx.required}, is used`);
   o.screwLengthChange = newReach - ctx.reach;
   o.changeSize = newReach - ctx.reach;
-  o.notes.push(`screw reach ${newReach.toFixed(1)} mm below the surface (${o.screwLengthChange.toFixed(1)} mm more than now)`);
+  o.notes.push(`screw reach ${len(ctx, newReach, 1)} below the surface (${len(ctx, o.screwLengthChange, 1)} more than now)`);
   if (found.capped) o.notes.push(`beyond ${MAX_ENGAGEMENT_FACTOR} x D of engagement more length is not tried: the first threads carry most of the load`);
   if (o.screwLengthChange <= 1e-9 && reuse.feasible && reuse.meetsMargin) {
     return infeasible(o, 'not needed: the present engagement already meets the margin');
   }
   if (o.screwLengthChange > 1e-9 && !repair.boltLengthMayChange) {
-    return infeasible(o, `needs a screw ${o.screwLengthChange.toFixed(1)} mm longer, and the screw length is fixed`);
+    return infeasible(o, `needs a screw ${len(ctx, o.screwLengthChange, 1)} longer, and the screw length is fixed`);
   }
   if (repair.through) {
     if (repair.depthAvailable !== undefined && newReach > repair.depthAvailable + 1e-9) {
-      return infeasible(o, `needs ${newReach.toFixed(1)} mm of thread; the part is ${mm(repair.depthAvailable)} mm thick`);
+      return infeasible(o, `needs ${len(ctx, newReach, 1)} of thread; the part is ${len(ctx, repair.depthAvailable)} thick`);
     }
     o.tappedDepth = newReach;
   } else {
@@ -114,14 +114,14 @@ export function longerEngagementOption(ctx: PlanContext, reuse: RepairOption): R
         o.holeDepth = bottoming;
         o.notes.push('finish with a bottoming tap (2P chamfer) to fit the depth available');
       } else {
-        return infeasible(o, `needs a hole ${depth.holeDepth.toFixed(1)} mm deep; ${mm(repair.depthAvailable)} mm available`);
+        return infeasible(o, `needs a hole ${len(ctx, depth.holeDepth, 1)} deep; ${len(ctx, repair.depthAvailable)} available`);
       }
     }
-    if (repair.depthAvailable === undefined) o.notes.push(`depth available not given: check the part allows a ${depth.holeDepth.toFixed(1)} mm hole`);
+    if (repair.depthAvailable === undefined) o.notes.push(`depth available not given: check the part allows a ${len(ctx, depth.holeDepth, 1)} hole`);
     // Full thread of the present hole as the mechanics core counts it (the last pitches incomplete).
     const present = ctx.joint.holeDepth === undefined ? undefined : ctx.joint.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * p;
     if (present !== undefined && present + 1e-9 >= newReach) {
-      o.notes.push(`the present hole (${mm(ctx.joint.holeDepth ?? 0)} mm) already has full thread to ${mm(present)} mm: a longer screw is all it takes`);
+      o.notes.push(`the present hole (${len(ctx, ctx.joint.holeDepth ?? 0)}) already has full thread to ${len(ctx, present)}: a longer screw is all it takes`);
     }
   }
   return judge(ctx, o);
