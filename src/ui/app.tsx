@@ -176,10 +176,10 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
     }
   }
   return (
-    <Box flexDirection="column" width={columns} height={height}>
+    <Box flexDirection="column" width={columns} height={height} overflow="hidden">
       <Header state={state} width={columns} />
       <PresetLine state={state} width={columns} />
-      <Box height={bodyH} width={columns}>
+      <Box height={bodyH} width={columns} overflow="hidden">
         {body}
       </Box>
       <MessageLine state={state} ev={state.screen === 'joint' && sev ? sev : ev} width={columns} />
