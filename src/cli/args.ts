@@ -105,3 +105,24 @@ export function range(option: string, text: string, rule: QuantityRule = {}): Ra
   if (max < min) throw new UsageError(`${option} range ${text}: min must not exceed max`, option);
   return {min, max};
 }
+
+/** --units si|us, the same check and wording in every command; `si` when not given. */
+export function unitsOption(values: ParsedOptions['values']): 'si' | 'us' {
+  const u = (str(values, 'units') ?? 'si').trim().toLowerCase();
+  if (u !== 'si' && u !== 'us') throw new UsageError(`--units is "${u}"; accepted: si, us`, '--units');
+  return u;
+}
+
+/**
+ * --format F with --json as its short form, the same wording in every command:
+ * F must be one of `accepted`; --json with another --format is a contradiction.
+ */
+export function formatOption<F extends string>(values: ParsedOptions['values'], accepted: readonly F[], fallback: F): F | 'json' {
+  const f = str(values, 'format')?.trim().toLowerCase();
+  if (f !== undefined && !(accepted as readonly string[]).includes(f)) throw new UsageError(`--format is "${f}"; accepted: ${accepted.join(', ')}`, '--format');
+  if (values.json === true) {
+    if (f !== undefined && f !== 'json') throw new UsageError(`--json and --format ${f} contradict each other; give one`, '--json');
+    return 'json';
+  }
+  return (f as F | undefined) ?? fallback;
+}

@@ -7,7 +7,7 @@
 import {resolveGeometry} from '../core/joint/resolve.js';
 import {nutDimensions} from '../core/materials/index.js';
 import type {JointInput, JointInputDraft} from '../core/joint/input.js';
-import {str, type OptionSpec, type ParsedOptions} from './args.js';
+import {unitsOption, type OptionSpec, type ParsedOptions} from './args.js';
 import {UsageError} from './io.js';
 import {buildDraft, optionFor, validate} from './commands/check.js';
 
@@ -41,8 +41,7 @@ export const JOINT_OPTIONS_HELP = [
  * some values). Throws UsageError naming the option and the accepted range.
  */
 export function jointFromOptions(values: ParsedOptions['values'], base?: JointInputDraft): JointInput {
-  const u = str(values, 'units') ?? 'si';
-  if (u !== 'si' && u !== 'us') throw new UsageError(`--units is "${u}"; accepted: si, us`, '--units');
+  const u = unitsOption(values);
   const draft = buildDraft(values, u, base);
   if (draft.thread === undefined) throw new UsageError('--thread is needed, e.g. --thread M10x1.5-6H/6g (or --from PRESET)', '--thread');
   if (draft.engagement === undefined && draft.internal === 'nut') {

@@ -99,7 +99,7 @@ describe('tapwright threads', () => {
 
     const units = await run('M10', '--units', 'imperial');
     expect(units.code).toBe(2);
-    expect(units.err).toMatch(/--units.*accepted: si or us/);
+    expect(units.err).toMatch(/--units.*accepted: si, us/);
 
     const opt = await run('M10', '--metric');
     expect(opt.code).toBe(2);

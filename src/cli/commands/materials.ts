@@ -4,7 +4,7 @@
  */
 import type {Command} from '../command.js';
 import {EXIT, UsageError} from '../io.js';
-import {parseOptions, str} from '../args.js';
+import {formatOption, parseOptions, str, unitsOption} from '../args.js';
 import {
   listBoltGrades,
   listHexHeads,
@@ -26,13 +26,15 @@ const WIDTH = 80;
 const HELP = `tapwright materials - bolt grades, nut classes, parent materials and sources
 
 Usage:
-  tapwright materials [--kind bolt|nut|parent] [--units si|us] [--json]
+  tapwright materials [--kind bolt|nut|parent] [--units si|us] [--format F]
 
 Options:
   --kind K     show one part of the library: bolt (bolt grades), nut (nut
                classes), parent (materials for tapped holes); default: all
   --units U    si (MPa, GPa) or us (ksi); default si
-  --json       the library as JSON, always SI (MPa, mm), with every source
+  --format F   text (default) or json
+  --json       the library as JSON, always SI (MPa, mm), with every source;
+               short for --format json
   --help       this text
 
 Strengths are minimums where a standard gives them. A row whose source says
@@ -168,15 +170,15 @@ export const command: Command = {
   summary: 'bolt grades, nut classes and parent materials with their sources',
   help: HELP,
   async run(args, io) {
-    const {values} = parseOptions(args, {json: {type: 'boolean'}, units: {type: 'string'}, kind: {type: 'string'}}, false);
-    const unitsText = (str(values, 'units') ?? 'si').trim().toLowerCase();
-    if (unitsText !== 'si' && unitsText !== 'us') throw new UsageError(`--units is "${unitsText}"; accepted: si, us`, '--units');
+    const {values} = parseOptions(args, {json: {type: 'boolean'}, format: {type: 'string'}, units: {type: 'string'}, kind: {type: 'string'}}, false);
+    const unitsText = unitsOption(values);
+    const format = formatOption(values, ['text', 'json'] as const, 'text');
     const kindText = str(values, 'kind')?.trim().toLowerCase();
     if (kindText !== undefined && !(KINDS as readonly string[]).includes(kindText)) {
       throw new UsageError(`--kind is "${kindText}"; accepted: ${KINDS.join(', ')}`, '--kind');
     }
     const kinds: readonly Kind[] = kindText ? [kindText as Kind] : KINDS;
-    if (values.json === true) io.out(`${JSON.stringify(materialsJson(kinds), null, 2)}\n`);
+    if (format === 'json') io.out(`${JSON.stringify(materialsJson(kinds), null, 2)}\n`);
     else io.out(materialsText(kinds, unitsText));
     return EXIT.ok;
   },

@@ -7,7 +7,7 @@ import {readFile} from 'node:fs/promises';
 import path from 'node:path';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
-import {parseOptions, quantity, str, type OptionSpec} from '../args.js';
+import {formatOption, parseOptions, quantity, str, unitsOption, type OptionSpec} from '../args.js';
 import {JointInputError} from '../../core/joint/index.js';
 import {resolveGeometry} from '../../core/joint/resolve.js';
 import {nutClassProblem} from '../../core/materials/index.js';
@@ -150,10 +150,8 @@ export const command: Command = {
       io.out(HELP);
       return EXIT.ok;
     }
-    const format = values.json ? 'json' : (str(values, 'format') ?? 'text');
-    if (format !== 'text' && format !== 'json' && format !== 'markdown') throw new UsageError(`--format is "${format}"; accepted: text, markdown, json`, '--format');
-    const units = (str(values, 'units') ?? 'si').toLowerCase();
-    if (units !== 'si' && units !== 'us') throw new UsageError(`--units is "${units}"; accepted: si, us`, '--units');
+    const format = formatOption(values, ['text', 'markdown', 'json'] as const, 'text');
+    const units = unitsOption(values);
     const presetName = str(values, 'preset');
     const preset = presetName === undefined ? {} : await loadPreset(presetName, io);
     const joint = jointFromOptions(values, preset.joint);

@@ -5,7 +5,8 @@
  */
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
-import {parseOptions, str} from '../args.js';
+import {formatOption, parseOptions, unitsOption} from '../args.js';
+import {toAscii} from '../../report/text.js';
 import {parseThread, threadGeometry, ACCEPTED_FORMS} from '../../core/threads/index.js';
 import {CAUTION_SHORT} from '../../core/cautions.js';
 import type {ThreadGeometry, ThreadSpec} from '../../core/types.js';
@@ -17,7 +18,7 @@ const IN = 25.4;
 const HELP = `tapwright threads - geometry and limits of size of a thread
 
 Usage:
-  tapwright threads <designation> [--units si|us] [--json]
+  tapwright threads <designation> [--units si|us] [--format text|json] [--ascii]
 
 Designations (case and spaces do not matter; "x" or "×"):
   ISO metric   M10  M10x1.25  M10x1.5-6g  M10x1.5-6H  M10x1.5-6H/6g  M8-5g6g
@@ -31,7 +32,10 @@ marked so; its limits come from the tolerance formulas, labelled as such.
 
 Options:
   --units U    si (mm) or us (inches); default si
-  --json       geometry and limits as JSON, always SI (mm, mm²)
+  --format F   text (default) or json
+  --json       geometry and limits as JSON, always SI (mm, mm²); short for
+               --format json
+  --ascii      plain ASCII text (mm^2, um)
   --help       this text
 
 Shows the basic profile (d, P, H, d2, d3, D1), the tensile stress area and
@@ -161,13 +165,12 @@ export const command: Command = {
   async run(args: string[], io: CliIo): Promise<number> {
     const {values, positionals} = parseOptions(args, {
       json: {type: 'boolean'},
+      format: {type: 'string'},
+      ascii: {type: 'boolean'},
       units: {type: 'string'},
     });
-    const unitsText = str(values, 'units') ?? 'si';
-    if (unitsText !== 'si' && unitsText !== 'us') {
-      throw new UsageError(`--units is "${unitsText}"; accepted: si or us`, '--units');
-    }
-    const units: UnitSystem = unitsText;
+    const units: UnitSystem = unitsOption(values);
+    const format = formatOption(values, ['text', 'json'] as const, 'text');
     const text = positionals.join(' ').trim();
     if (text === '') {
       throw new UsageError(`threads needs a designation, e.g. tapwright threads M10x1.5-6H/6g (accepted forms: ${ACCEPTED_FORMS})`);
@@ -179,13 +182,14 @@ export const command: Command = {
     }
     const spec = parsed.value;
     const g = spec.family === 'metric' || spec.family === 'unified' ? threadGeometry(spec) : undefined;
-    if (values.json === true) {
+    if (format === 'json') {
       io.out(`${JSON.stringify(jsonOf(spec, g), null, 2)}\n`);
       return EXIT.ok;
     }
     const lines = g ? geometryText(g, units) : powerText(spec, units);
     lines.push('', ...wrap(CAUTION_SHORT, '', ''));
-    io.out(`${lines.join('\n')}\n`);
+    const report = `${lines.join('\n')}\n`;
+    io.out(values.ascii === true ? toAscii(report) : report);
     return EXIT.ok;
   },
 };
