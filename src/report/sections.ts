@@ -103,7 +103,12 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
   rows.push({label: 'Engaged length', value: q(input.engagement, 'length', f), note: 'from the loaded face, including the chamfer'});
   rows.push({label: 'Countersink or chamfer', value: q(input.chamfer, 'length', f)});
   if (input.internal === 'tapped') {
-    rows.push({label: 'Hole', value: input.holeDepth !== undefined ? `blind, ${q(input.holeDepth, 'length', f)} deep` : 'through'});
+    // Without --hole-depth nothing says the hole is through: say what was assumed (tapwright repair reads the same joint as blind).
+    rows.push(
+      input.holeDepth !== undefined
+        ? {label: 'Hole', value: `blind, ${q(input.holeDepth, 'length', f)} deep`}
+        : {label: 'Hole', value: 'depth not given: no blind-hole check'},
+    );
   }
   rows.push(tighteningRow(input, f));
   if (result.tightening.method === 'nut-factor' && input.nutFactor !== undefined) {

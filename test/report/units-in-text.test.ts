@@ -92,3 +92,13 @@ describe('load share row', () => {
     for (const line of text.split('\n')) expect([...line].length, line).toBeLessThanOrEqual(80);
   });
 });
+
+describe('hole row', () => {
+  it('a tapped hole without a depth is not called "through" (repair reads the same joint as blind)', () => {
+    const text = formatCheckText(result, input, {units: 'si'});
+    expect(text).toMatch(/^ {2}Hole +depth not given: no blind-hole check$/m);
+    expect(text).not.toMatch(/^ {2}Hole +through/m);
+    const blind = JointInputSchema.parse({...DEMO, holeDepth: 25});
+    expect(formatCheckText(checkJoint(blind), blind, {units: 'us'})).toMatch(/^ {2}Hole +blind, 0\.984 in deep$/m);
+  });
+});
