@@ -38,6 +38,8 @@ export interface FlagContext {
   modelRangeNotes: string[];
   bearingEstimated: boolean;
   bearingDiameter: number;
+  /** Preload at which the assembly stress reaches the yield (utilisation 1) at the lowest friction, N (optional). */
+  yieldPreload?: number;
   /**
    * Units the message numbers are written in (default 'si': kN, mm). The values in the
    * context stay in working units; only the wording changes. JSON keeps the SI messages.
@@ -111,7 +113,11 @@ export function preloadOverYield(c: FlagContext): Flag | undefined {
     return {
       code: 'preload-over-yield',
       level: 'fail',
-      message: `Bolt yields while tightening: assembly stress reaches ${pct(c.utilisation)} of its yield at the low end of the friction range.`,
+      message:
+        `Bolt yields while tightening: assembly stress reaches ${pct(c.utilisation)} of its yield at the low end of the friction range.` +
+        (c.yieldPreload !== undefined && c.yieldPreload < c.maxPreload
+          ? ` It yields at about ${force(c, c.yieldPreload)}: the higher preloads shown are not reached, the bolt stretches instead. Lower the torque.`
+          : ''),
     };
   }
   if (c.utilisation > c.utilisationLimit + 1e-9) {
@@ -127,6 +133,8 @@ export function preloadOverYield(c: FlagContext): Flag | undefined {
 export function engagementBeyondUseful(c: FlagContext): Flag | undefined {
   const needed = Math.max(c.requiredFedStd, c.requiredAlexander);
   if (c.effectiveEngagement <= needed || c.engagedThreads <= SHORT_ENGAGEMENT_THREADS) return undefined;
+  // A bolt that bottoms out in a blind hole has no engagement to spare: say nothing that reads as reassurance.
+  if (c.internalKind === 'tapped' && c.holeDepth !== undefined && c.engagement > c.holeDepth) return undefined;
   return {
     code: 'engagement-beyond-useful',
     level: 'info',

@@ -196,6 +196,8 @@ function flagContext(result: CheckResult, input: JointInput, units: UnitSystem):
     modelRangeNotes: st.alexander.outOfRange ?? [],
     bearingEstimated: t.bearingSource === 'estimate' && t.method === 'friction',
     bearingDiameter: t.bearingDiameter,
+    // FM,zul is proportional to the utilisation (VDI 2230 Part 1 closed form), so the yield preload is FM,zul / nu.
+    ...(input.utilisation > 0 ? {yieldPreload: t.permissiblePreload / input.utilisation} : {}),
     units,
   };
 }
