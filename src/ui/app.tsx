@@ -8,13 +8,14 @@ import {Box, Text, useApp, useInput, useStdout} from 'ink';
 import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
 import {normaliseKey} from './keys.js';
 import {hintLines} from './keymap.js';
-import {contextsOf, handleKeys, isDirty, shownValues, type Screen, type WorkbenchState} from './state/workbench.js';
+import {contextsOf, handleKeys, isDirty, shownValues, snapshot, type Screen, type WorkbenchState} from './state/workbench.js';
 import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
 import {formatField} from './state/field-text.js';
 import {fieldById} from './state/fields.js';
 import type {WorkbenchServices} from './services.js';
 import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
 import {Lines} from './components/lines.js';
+import {ScreenGuard} from './components/screen-guard.js';
 import {JointScreen} from './screens/joint-screen.js';
 import {PresetsScreen} from './screens/presets-screen.js';
 import {ReportScreen} from './screens/report-screen.js';
@@ -180,7 +181,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       <Header state={state} width={columns} />
       <PresetLine state={state} width={columns} />
       <Box height={bodyH} width={columns} overflow="hidden">
-        {body}
+        <ScreenGuard resetKey={`${state.screen}.${state.mode}.${state.units}.${snapshot(shownValues(state))}`}>{body}</ScreenGuard>
       </Box>
       <MessageLine state={state} ev={state.screen === 'joint' && sev ? sev : ev} width={columns} />
       {caution.map((l, i) => (

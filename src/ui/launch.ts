@@ -129,6 +129,18 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     stdout.write(`${RESET_STYLE}${SHOW_CURSOR}${LEAVE_ALT}`);
   };
 
+  // Nothing may print to the terminal while the workbench owns it (React reports errors caught
+  // by a screen guard through console.error): keep such messages, show them after the exit
+  // with TAPWRIGHT_DEBUG=1.
+  const held: string[] = [];
+  const consoleBefore = {log: console.log, warn: console.warn, error: console.error};
+  const hold = (...a: unknown[]) => {
+    if (held.length < 50) held.push(a.map(x => (x instanceof Error ? (x.stack ?? x.message) : String(x))).join(' '));
+  };
+  console.log = hold;
+  console.warn = hold;
+  console.error = hold;
+  const releaseConsole = () => Object.assign(console, consoleBefore);
   stdout.write(ENTER_ALT);
   // TAPWRIGHT_FULL_REDRAW=1 hands Ink the terminal directly (full redraws), for a terminal that
   // misdraws the cell-by-cell updates.
@@ -181,6 +193,8 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     for (const [sig, h] of handlers) process.off(sig, h);
     restore();
     process.off('exit', restore);
+    releaseConsole();
+    if (held.length > 0 && io.env.TAPWRIGHT_DEBUG) io.err(`${held.join('\n')}\n`);
   }
   try {
     settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64)});

@@ -65,3 +65,15 @@ describe('quitting and the draft', () => {
     again.unmount();
   });
 });
+
+describe('a screen that fails to draw', () => {
+  it('says so and keeps the keys working', async () => {
+    const {fixtureServices, fixtureResult} = await import('../support/fixture-services.js');
+    const svc = fixtureServices({check: input => ({...fixtureResult(input), stripping: undefined as never})});
+    const app = startApp({svc});
+    await app.see('! This screen could not be drawn');
+    expect(app.frame()).toContain('Estimates only.');
+    await app.press('p', 'Presets: 1');
+    app.unmount();
+  });
+});
