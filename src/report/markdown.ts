@@ -9,7 +9,7 @@ import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {VERSION} from '../version.js';
-import {displayFlags, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
+import {displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
 
 export interface WorkOrderNotes {
   asset?: string;
@@ -113,7 +113,7 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
 
   out.push('## Limits and models used', '');
   for (const l of limitsLines(result, f)) out.push(`- ${l}`);
-  for (const n of result.notes) out.push(`- ${n}`);
+  for (const n of displayNotes(result, input, f)) out.push(`- ${n}`);
   out.push('');
 
   out.push('## Sources', '');

@@ -7,7 +7,7 @@
 import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {Flag, Range} from '../core/types.js';
-import {flagsInUnits} from '../core/joint/index.js';
+import {flagsInUnits, notesInUnits} from '../core/joint/index.js';
 import {CONVERSION, formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../core/units.js';
 
 export interface Row {
@@ -198,6 +198,11 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
 /** The flags with their messages in the report's units (US: lbf, in); the JSON keeps SI. */
 export function displayFlags(result: CheckResult, input: JointInput, f: Fmt): Flag[] {
   return flagsInUnits(result, input, f.units);
+}
+
+/** The notes with their lengths in the report's units; the JSON keeps SI. */
+export function displayNotes(result: CheckResult, input: JointInput, f: Fmt): string[] {
+  return notesInUnits(result, input, f.units);
 }
 
 /** Upper-case level word, so a flag never depends on colour. */

@@ -7,7 +7,7 @@ import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
-import {displayFlags, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
+import {displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
 
 export const TEXT_WIDTH = 80;
 const LABEL = 36;
@@ -119,9 +119,10 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
     out.push(...wrap(flag.message, '         ', '         '));
   }
 
-  if (result.notes.length > 0) {
+  const notes = displayNotes(result, input, f);
+  if (notes.length > 0) {
     out.push('', 'NOTES');
-    for (const n of result.notes) out.push(...wrap(n, '  - ', '    '));
+    for (const n of notes) out.push(...wrap(n, '  - ', '    '));
   }
 
   out.push('', 'LIMITS USED');

@@ -102,3 +102,20 @@ describe('hole row', () => {
     expect(formatCheckText(checkJoint(blind), blind, {units: 'us'})).toMatch(/^ {2}Hole +blind, 0\.984 in deep$/m);
   });
 });
+
+describe('notes in the report units', () => {
+  it('US: the hardware-table notes in inches (was "Bearing diameter 15.07 mm = ..."); JSON notes stay SI', async () => {
+    const {notesInUnits} = await import('../../src/core/joint/index.js');
+    const m12 = JointInputSchema.parse({thread: 'M12', boltGrade: '8.8', internal: 'nut', nutClass: '8', engagement: 10.37});
+    const r = checkJoint(m12);
+    // ISO 4014/4017 dw,min 16.63 mm, ISO 273 medium hole 13.5 mm: DKm = 15.07 mm = 0.593 in; ISO 4032 M12 m min 10.37 mm = 0.408 in.
+    expect(r.notes.join('\n')).toMatch(/Bearing diameter 15\.07 mm = \(dw,min 16\.63 \+ hole 13\.5\)\/2/);
+    const us = notesInUnits(r, m12, 'us').join('\n');
+    expect(us).toMatch(/Bearing diameter 0\.593 in = \(dw,min 0\.655 \+ hole 0\.531\)\/2/);
+    expect(us).toMatch(/Nut height 0\.408 in \(m min/);
+    expect(notesInUnits(r, m12, 'si')).toBe(r.notes);
+    const text = formatCheckText(r, m12, {units: 'us'});
+    const notes = text.slice(text.indexOf('\nNOTES\n'), text.indexOf('\nLIMITS USED\n'));
+    expect(notes).not.toMatch(/\d mm\b/);
+  });
+});

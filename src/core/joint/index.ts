@@ -7,7 +7,7 @@
 import type {JointInput} from './input.js';
 import type {CheckResult} from './result.js';
 import {JointInputError} from './errors.js';
-import {resolveJoint, type ResolvedJoint} from './resolve.js';
+import {resolveJoint, resolveNotes, type ResolvedJoint} from './resolve.js';
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
@@ -200,6 +200,16 @@ function flagContext(result: CheckResult, input: JointInput, units: UnitSystem):
     ...(input.utilisation > 0 ? {yieldPreload: t.permissiblePreload / input.utilisation} : {}),
     units,
   };
+}
+
+/**
+ * The result's notes with their lengths in `units` (US: in), for the reports; result.notes
+ * (and so the JSON) stay in SI. The hardware-table notes are rebuilt for the result's thread;
+ * the thread's own notes (metric pitches, tolerance sources) are the same in both systems.
+ */
+export function notesInUnits(result: CheckResult, input: JointInput, units: UnitSystem): string[] {
+  if (units === 'si') return result.notes;
+  return [...resolveNotes(input, result.geometry, units), ...result.geometry.notes];
 }
 
 /**

@@ -8,6 +8,7 @@ import {parseThread, threadGeometry} from '../threads/index.js';
 import {boltGrade, boltGradeProblem, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, parentMaterial, parentMaterialProblem} from '../materials/index.js';
 import type {JointInput} from './input.js';
 import {JointInputError} from './errors.js';
+import {toDisplay, type UnitSystem} from '../units.js';
 
 export interface ResolvedBolt {
   id: string;
@@ -151,7 +152,6 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${geometry.spec.sizeLabel}; give the nut height`);
     if (flats === undefined) throw new JointInputError('nutFlats', `no tabulated width across flats for ${geometry.spec.sizeLabel}; give the nut's width across flats`);
     if (flats <= d) throw new JointInputError('nutFlats', `width across flats ${flats} mm must exceed the thread diameter ${round(d)} mm`);
-    if (input.nutHeight === undefined && dims) notes.push(`Nut height ${dims.heightMin} mm (m min, ${dims.provenance.source}).`);
     nut = {height, flats};
     internal = {id: n.id, name: n.name, rm: n.rm, shear: n.shearRatio * n.rm, yield: n.rm, elasticModulus: bolt.elasticModulus, provenance: n.provenance};
   } else {
@@ -172,15 +172,40 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     if (h) {
       bearingDiameter = (h.dwMin + h.clearanceHole) / 2;
       bearingSource = 'standard';
-      const face = family === 'metric' ? 'dw,min' : 'bearing face';
-      notes.push(`Bearing diameter ${round(bearingDiameter)} mm = (${face} ${round(h.dwMin)} + hole ${round(h.clearanceHole)})/2 (${h.provenance.source}).`);
     } else {
       bearingDiameter = BEARING_RATIO_ESTIMATE * d;
       bearingSource = 'estimate';
-      notes.push(`Bearing diameter estimated as ${BEARING_RATIO_ESTIMATE} d = ${round(bearingDiameter)} mm (no hexagon-head table for this size).`);
     }
   }
+  notes.push(...resolveNotes(input, geometry, 'si'));
   return {geometry, bolt, internal, ...(nut ? {nut} : {}), bearingDiameter, bearingSource, notes};
+}
+
+/**
+ * The notes on the defaults taken from the hardware tables (nut height, bearing diameter),
+ * with lengths in `units` (SI mm, US in). resolveJoint keeps the SI ones in the result;
+ * a report in US units asks again with 'us'.
+ */
+export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units: UnitSystem): string[] {
+  const d = geometry.nominal;
+  const len = (x: number): string => (units === 'us' ? `${toDisplay(x, 'length', 'us').toFixed(3)} in` : `${round(x)} mm`);
+  const num = (x: number): string => (units === 'us' ? toDisplay(x, 'length', 'us').toFixed(3) : round(x));
+  const notes: string[] = [];
+  if (input.internal === 'nut' && input.nutHeight === undefined) {
+    const dims = nutDimensions(d);
+    if (dims) notes.push(`Nut height ${len(dims.heightMin)} (m min, ${dims.provenance.source}).`);
+  }
+  if (input.bearingDiameter === undefined) {
+    const family = geometry.spec.family;
+    const h = family === 'metric' ? hexHeadBearing(d) : family === 'unified' ? hexHeadBearing(d, 'inch') : undefined;
+    if (h) {
+      const face = family === 'metric' ? 'dw,min' : 'bearing face';
+      notes.push(`Bearing diameter ${len((h.dwMin + h.clearanceHole) / 2)} = (${face} ${num(h.dwMin)} + hole ${num(h.clearanceHole)})/2 (${h.provenance.source}).`);
+    } else {
+      notes.push(`Bearing diameter estimated as ${BEARING_RATIO_ESTIMATE} d = ${len(BEARING_RATIO_ESTIMATE * d)} (no hexagon-head table for this size).`);
+    }
+  }
+  return notes;
 }
 
 /** A stress for a message, MPa: 4 significant figures, no float noise. */
