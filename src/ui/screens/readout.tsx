@@ -27,6 +27,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const q = (v: number, d: Dimension, sig = 3) => formatQuantity(v, d, units, {ascii: t.ascii, significant: sig});
   const n = (v: number) => formatNumber(v, 3);
   const ns = (v: number) => formatNumber(toDisplay(v, 'stress', units), 3);
+  const num = (v: number, d: Dimension) => formatNumber(toDisplay(v, d, units), 3);
   if (!result || !input) {
     const lines: Line[] = [
       ...wrap(`! ${problem ?? 'No result yet.'}`, width, Math.max(1, height - 3), t.sym.ellipsis).map(text => ({text, color: t.tone('fail')})),
@@ -52,11 +53,11 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const hole = input.internal === 'nut' ? 'nut' : 'hole';
   const row = (_key: string, label: string, text: string, color?: string): Line => ({text: fit(`${L(label)}${text}`, width, t.sym.ellipsis), color});
   const lines: Line[] = [
-    row('p', 'Preload', `${q(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')}, nom. ${q(tg.preload.nominal, 'force')}`),
+    row('p', 'Preload', tg.preload.min === tg.preload.max ? `${q(tg.preload.nominal, 'force')} (no scatter)` : `${num(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')} (nom. ${num(tg.preload.nominal, 'force')})`),
     row('t', 'Torque', `${q(tg.torque, 'torque')}, stress ${formatNumber(tg.utilisation * 100, 2)}% of Rp0.2`),
     row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')}`),
     row('y', '', `= ${n(margin.firstThreadYieldBolt)}x bolt yield, ${n(margin.firstThreadYieldInternal)}x ${input.internal === 'nut' ? 'nut' : 'part'}`),
-    fit(` ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis),
+    fit(`ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
     row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${st.limitsUsed} limits)`, stripFail ? t.tone('fail') : undefined),
@@ -64,7 +65,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('m', 'Margins', `stripping ${n(margin.stripping)}, bolt-first ${n(margin.boltBreaksFirst)}`),
     row('g', ' bolt-1st', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} ${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
-    row('r', 'Needed', `F ${q(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${q(st.requiredEngagement.alexander, 'length')} Alex.`),
+    row('r', 'Needed', `F ${num(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${num(st.requiredEngagement.alexander, 'length')} Alex. ${displayUnit('length', units, t.ascii)}`),
     row('sc', ` ${t.sym.barFull}=present`, `${scale} ${formatNumber(toDisplay(end, 'length', units), 2)}`),
   ];
   return <Lines lines={lines} width={width} height={height} />;
