@@ -79,3 +79,11 @@ describe('tapwright repair --format markdown: inputs in the report units', () =>
     expect(nut.out).toMatch(/\| Bolt \| grade 8\.8 \|/);
   });
 });
+
+describe('tapwright repair --units us: core input errors in inches', () => {
+  it('a chamfer longer than the engagement', async () => {
+    const r = await run('--thread', '3/8-16 UNC', '--parent', '6061-T6', '--engage', '0.5', '--chamfer', '0.6', '--units', 'us');
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/--chamfer: the chamfer \(0\.600 in\) must be shorter than the engaged length \(0\.500 in\)/);
+  });
+});

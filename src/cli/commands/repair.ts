@@ -211,7 +211,7 @@ export const command: Command = {
     } catch (e) {
       if (e instanceof JointInputError) {
         const option = optionFor(e.field);
-        throw new UsageError(`${option}: ${e.message}`, option);
+        throw new UsageError(`${option}: ${e.messageIn(units)}`, option);
       }
       throw e;
     }

@@ -7,8 +7,15 @@ export class JointInputError extends Error {
   constructor(
     readonly field: string,
     message: string,
+    /** The same message with its numbers in US units (in, ksi), when it carries any. */
+    readonly usMessage?: string,
   ) {
     super(message);
     this.name = 'JointInputError';
+  }
+
+  /** The message in a unit system: `message` is SI; US falls back to it when no US wording exists. */
+  messageIn(units: 'si' | 'us'): string {
+    return units === 'us' && this.usMessage !== undefined ? this.usMessage : this.message;
   }
 }

@@ -7,7 +7,7 @@
 import type {JointInput} from './input.js';
 import type {CheckResult} from './result.js';
 import {JointInputError} from './errors.js';
-import {resolveJoint, resolveNotes, type ResolvedJoint} from './resolve.js';
+import {lengthText, resolveJoint, resolveNotes, type ResolvedJoint} from './resolve.js';
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
@@ -49,8 +49,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const g = r.geometry;
   const P = g.pitch;
   if (input.chamfer >= input.engagement) {
-    const mm = (x: number): string => String(Number(x.toPrecision(4)));
-    throw new JointInputError('chamfer', `the chamfer (${mm(input.chamfer)} mm) must be shorter than the engaged length (${mm(input.engagement)} mm)`);
+    const text = (u: UnitSystem) => `the chamfer (${lengthText(input.chamfer, u)}) must be shorter than the engaged length (${lengthText(input.engagement, u)})`;
+    throw new JointInputError('chamfer', text('si'), text('us'));
   }
   if (input.tightening === 'torque' && input.torque === undefined) throw new JointInputError('torque', 'tightening by torque needs the torque');
   if (input.tightening === 'preload' && input.preload === undefined) throw new JointInputError('preload', 'tightening to a preload needs the preload');

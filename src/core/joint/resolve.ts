@@ -86,7 +86,8 @@ function resolveBolt(input: JointInput, d: number): ResolvedBolt {
     provenance = {source: `Rp0.2 given by the user; Rm of grade ${g.id}`, kind: 'user'};
   }
   if (rp >= rm) {
-    throw new JointInputError('boltRp', `bolt yield Rp0.2 ${mpa(rp)} MPa must be below the tensile strength Rm ${mpa(rm)} MPa; give both --bolt-rm and --bolt-rp, or a grade`);
+    const text = (u: UnitSystem) => `bolt yield Rp0.2 ${stressText(rp, u)} must be below the tensile strength Rm ${stressText(rm, u)}; give both --bolt-rm and --bolt-rp, or a grade`;
+    throw new JointInputError('boltRp', text('si'), text('us'));
   }
   // Strengths given by the user: the bolt is no longer the grade, only its shear ratio and modulus (and a missing strength) are.
   const custom = input.boltRm !== undefined || input.boltRp !== undefined;
@@ -151,7 +152,10 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     const flats = input.nutFlats ?? dims?.flats;
     if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${geometry.spec.sizeLabel}; give the nut height`);
     if (flats === undefined) throw new JointInputError('nutFlats', `no tabulated width across flats for ${geometry.spec.sizeLabel}; give the nut's width across flats`);
-    if (flats <= d) throw new JointInputError('nutFlats', `width across flats ${flats} mm must exceed the thread diameter ${round(d)} mm`);
+    if (flats <= d) {
+      const text = (u: UnitSystem) => `width across flats ${lengthText(flats, u)} must exceed the thread diameter ${lengthText(d, u)}`;
+      throw new JointInputError('nutFlats', text('si'), text('us'));
+    }
     nut = {height, flats};
     internal = {id: n.id, name: n.name, rm: n.rm, shear: n.shearRatio * n.rm, yield: n.rm, elasticModulus: bolt.elasticModulus, provenance: n.provenance};
   } else {
@@ -162,7 +166,9 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
   if (input.bearingDiameter !== undefined) {
     // DKm is the mean of the head's bearing face and the clearance hole, both larger than d (VDI 2230 Part 1 definition of DKm).
     if (input.bearingDiameter <= d) {
-      throw new JointInputError('bearingDiameter', `bearing diameter ${round(input.bearingDiameter)} mm must be larger than the thread diameter ${round(d)} mm: it is the mean of the head's bearing face and the clearance hole`);
+      const dk = input.bearingDiameter;
+      const text = (u: UnitSystem) => `bearing diameter ${lengthText(dk, u)} must be larger than the thread diameter ${lengthText(d, u)}: it is the mean of the head's bearing face and the clearance hole`;
+      throw new JointInputError('bearingDiameter', text('si'), text('us'));
     }
     bearingDiameter = input.bearingDiameter;
     bearingSource = 'input';
@@ -208,9 +214,14 @@ export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units:
   return notes;
 }
 
-/** A stress for a message, MPa: 4 significant figures, no float noise. */
-function mpa(x: number): string {
-  return String(Number(x.toPrecision(4)));
+/** A stress for a message: MPa (SI) or ksi (US), 4 significant figures, no float noise. */
+export function stressText(x: number, units: UnitSystem): string {
+  return units === 'us' ? `${Number(toDisplay(x, 'stress', 'us').toPrecision(4))} ksi` : `${Number(x.toPrecision(4))} MPa`;
+}
+
+/** A length for a message: mm (SI, at most 2 decimals) or in (US, 3 decimals). */
+export function lengthText(x: number, units: UnitSystem): string {
+  return units === 'us' ? `${toDisplay(x, 'length', 'us').toFixed(3)} in` : `${round(x)} mm`;
 }
 
 function round(x: number): string {

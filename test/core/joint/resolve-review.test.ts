@@ -47,3 +47,17 @@ describe('other input checks', () => {
     expect(e.message).toBe('the chamfer (15.24 mm) must be shorter than the engaged length (12.7 mm)');
   });
 });
+
+describe('input errors in US units', () => {
+  it('messageIn("us") gives in and ksi; the SI message is unchanged', () => {
+    // 0.6 in = 15.24 mm, 0.5 in = 12.7 mm (1 in = 25.4 mm exactly, NIST SP 811).
+    const c = inputError(() => run({engagement: 12.7, chamfer: 15.24}));
+    expect(c.messageIn('si')).toBe('the chamfer (15.24 mm) must be shorter than the engaged length (12.7 mm)');
+    expect(c.messageIn('us')).toBe('the chamfer (0.600 in) must be shorter than the engaged length (0.500 in)');
+    // 120 ksi = 827.4 MPa, 130 ksi = 896.3 MPa (1 ksi = 6.894757 MPa).
+    const r = inputError(() => run({boltRm: 827.3708751802033, boltRp: 896.3184481118869}));
+    expect(r.messageIn('us')).toMatch(/Rp0\.2 130 ksi must be below the tensile strength Rm 120 ksi/);
+    const b = inputError(() => run({bearingDiameter: 5}));
+    expect(b.messageIn('us')).toMatch(/bearing diameter 0\.197 in must be larger than the thread diameter 0\.394 in/);
+  });
+});
