@@ -113,6 +113,8 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
   rows.push(tighteningRow(input, f));
   if (result.tightening.method === 'nut-factor' && input.nutFactor !== undefined) {
     rows.push({label: 'Nut factor K', value: ratio(input.nutFactor), note: 'T = K F d'});
+    // K sets torque and preload; the thread friction still sets the thread torque in the stresses.
+    rows.push({label: 'Thread friction muG', value: friction(input.muThread), note: 'thread torque in the stresses'});
   } else {
     rows.push({label: 'Thread friction muG', value: friction(input.muThread)});
     rows.push({label: 'Under-head friction muK', value: friction(input.muHead)});

@@ -119,3 +119,13 @@ describe('notes in the report units', () => {
     expect(notes).not.toMatch(/\d mm\b/);
   });
 });
+
+describe('nut-factor inputs', () => {
+  it('the thread friction used for the thread torque is still shown (it was hidden behind K)', () => {
+    const k = JointInputSchema.parse({thread: 'M12', boltGrade: '8.8', internal: 'nut', nutClass: '8', engagement: 10.37, nutFactor: 0.2, muThread: {min: 0.12, max: 0.14}});
+    const text = formatCheckText(checkJoint(k), k, {units: 'si'});
+    expect(text).toMatch(/^ {2}Nut factor K +0\.20\n +\(T = K F d\)$/m);
+    expect(text).toMatch(/^ {2}Thread friction muG +0\.12 to 0\.14\n +\(thread torque in the stresses\)$/m);
+    expect(text).not.toMatch(/Under-head friction/);
+  });
+});
