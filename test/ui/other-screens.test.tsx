@@ -79,7 +79,7 @@ describe('help screen', () => {
 describe('every keymap command is handled', () => {
   it('has a case in the command handler for each binding', async () => {
     const {readFileSync} = await import('node:fs');
-    const src = readFileSync(new URL('../../src/ui/state/workbench.ts', import.meta.url), 'utf8');
+    const src = readFileSync(new URL('../../src/ui/state/handle-key.ts', import.meta.url), 'utf8');
     for (const b of KEYMAP) expect(src, b.command).toContain(`case '${b.command}'`);
   });
 });

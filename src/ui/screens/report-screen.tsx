@@ -1,7 +1,8 @@
 /** The report preview: the work-order report as it will be written to a file. */
 import React from 'react';
 import {Box, Text} from 'ink';
-import {reportText, type WorkbenchState} from '../state/workbench.js';
+import type {WorkbenchState} from '../state/workbench.js';
+import {reportText} from '../state/preset-commands.js';
 import type {Evaluation} from '../state/evaluate.js';
 import type {WorkbenchServices} from '../services.js';
 import {useTheme} from '../theme.js';
