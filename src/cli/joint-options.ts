@@ -4,7 +4,7 @@
  * (buildDraft and validate in commands/check.ts), so a joint saved as a preset
  * is read exactly as `check` would read the same options.
  */
-import {resolveGeometry} from '../core/joint/resolve.js';
+import {resolveGeometry, sizeWords} from '../core/joint/resolve.js';
 import {nutDimensions} from '../core/materials/index.js';
 import type {JointInput, JointInputDraft} from '../core/joint/input.js';
 import {unitsOption, type OptionSpec, type ParsedOptions} from './args.js';
@@ -50,7 +50,7 @@ export function jointFromOptions(values: ParsedOptions['values'], base?: JointIn
     else {
       const g = resolveGeometry(draft.thread);
       const dims = nutDimensions(g.nominal);
-      if (!dims) throw new UsageError(`--nut-height or --engage is needed: no tabulated nut height for ${g.spec.sizeLabel}`, '--nut-height');
+      if (!dims) throw new UsageError(`--nut-height or --engage is needed: no tabulated nut height for ${sizeWords(g)}`, '--nut-height');
       draft.engagement = dims.heightMin;
     }
   }

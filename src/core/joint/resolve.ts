@@ -150,8 +150,8 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
     const dims = nutDimensions(d);
     const height = input.nutHeight ?? dims?.heightMin;
     const flats = input.nutFlats ?? dims?.flats;
-    if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${geometry.spec.sizeLabel}; give the nut height`);
-    if (flats === undefined) throw new JointInputError('nutFlats', `no tabulated width across flats for ${geometry.spec.sizeLabel}; give the nut's width across flats`);
+    if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${sizeWords(geometry)}; give the nut height`);
+    if (flats === undefined) throw new JointInputError('nutFlats', `no tabulated width across flats for ${sizeWords(geometry)}; give the nut's width across flats`);
     if (flats <= d) {
       const text = (u: UnitSystem) => `width across flats ${lengthText(flats, u)} must exceed the thread diameter ${lengthText(d, u)}`;
       throw new JointInputError('nutFlats', text('si'), text('us'));
@@ -212,6 +212,16 @@ export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units:
     }
   }
   return notes;
+}
+
+/**
+ * The size in a message: "M64", "#10", "1/4 in (the nut table is ISO 4032, metric only)".
+ * The ISO 4032 table is the only nut table shipped, so an inch size never has one.
+ */
+export function sizeWords(geometry: ThreadGeometry): string {
+  const label = geometry.spec.sizeLabel;
+  if (geometry.spec.family !== 'unified') return label;
+  return `${label.startsWith('#') ? label : `${label} in`} (the nut table is ISO 4032, metric only)`;
 }
 
 /** A stress for a message: MPa (SI) or ksi (US), 4 significant figures, no float noise. */

@@ -61,3 +61,11 @@ describe('input errors in US units', () => {
     expect(b.messageIn('us')).toMatch(/bearing diameter 0\.197 in must be larger than the thread diameter 0\.394 in/);
   });
 });
+
+describe('sizes in messages', () => {
+  it('an inch size with no nut table says "in" and why (was "no tabulated width across flats for 1/2")', () => {
+    const e = inputError(() => run({thread: '1/2-13 UNC', internal: 'nut', nutClass: 'SAE-5', parent: undefined, nutHeight: 11.1, engagement: 11.1}));
+    expect(e.field).toBe('nutFlats');
+    expect(e.message).toBe("no tabulated width across flats for 1/2 in (the nut table is ISO 4032, metric only); give the nut's width across flats");
+  });
+});
