@@ -9,7 +9,7 @@ import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {VERSION} from '../version.js';
-import {displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
+import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
 
 export interface WorkOrderNotes {
   asset?: string;
@@ -64,7 +64,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   const out: string[] = [];
 
   out.push(`# Threaded joint check: ${cell(result.geometry.spec.designation)}`, '');
-  out.push(`Bolt ${cell(result.materials.bolt.id)} in a ${cell(internalWords(result, input))}.`, '');
+  const bolt = boltWords(result);
+  out.push(`${bolt.charAt(0).toUpperCase()}${cell(bolt.slice(1))} in a ${cell(internalWords(result, input))}.`, '');
   out.push(
     ...table(
       ['Report', ''],

@@ -61,6 +61,11 @@ function friction(r: Range): string {
   return r.min === r.max ? ratio(r.min) : `${ratio(r.min)} to ${ratio(r.max)}`;
 }
 
+/** The bolt in a few words: "bolt 8.8", or "custom bolt" when its strengths were given. */
+export function boltWords(result: CheckResult): string {
+  return result.materials.bolt.id === 'custom' ? 'custom bolt' : `bolt ${result.materials.bolt.id}`;
+}
+
 /** The internal thread in a few words: "tapped hole in EN-GJL-250" or "nut, class 8". */
 export function internalWords(result: CheckResult, input: JointInput): string {
   const m = result.materials.internal;

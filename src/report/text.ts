@@ -7,7 +7,7 @@ import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
-import {displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
+import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
 
 export const TEXT_WIDTH = 80;
 const LABEL = 36;
@@ -99,7 +99,7 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
   const flags = displayFlags(result, input, f);
   const v = verdict(flags);
   const out: string[] = [];
-  out.push(...wrap(`Joint check: ${result.geometry.spec.designation}, bolt ${result.materials.bolt.id}, ${internalWords(result, input)}`, '', '  '));
+  out.push(...wrap(`Joint check: ${result.geometry.spec.designation}, ${boltWords(result)}, ${internalWords(result, input)}`, '', '  '));
   out.push(...wrap(`${v.word}: ${v.text}`, 'RESULT ', '       '));
   out.push(heavy);
 

@@ -129,3 +129,13 @@ describe('nut-factor inputs', () => {
     expect(text).not.toMatch(/Under-head friction/);
   });
 });
+
+describe('custom bolt in the headings', () => {
+  it('"custom bolt", not "bolt custom" or the grade', () => {
+    const c = JointInputSchema.parse({...DEMO, boltRm: 1000, boltRp: 900});
+    const r = checkJoint(c);
+    expect(formatCheckText(r, c, {units: 'si'})).toMatch(/^Joint check: 3\/8-16 UNC-2A\/2B, custom bolt, tapped hole/);
+    expect(formatCheckMarkdown(r, c, {date: new Date('2026-01-01T00:00:00Z'), units: 'si'})).toMatch(/^Custom bolt in a tapped hole/m);
+    expect(formatCheckMarkdown(result, input, {date: new Date('2026-01-01T00:00:00Z'), units: 'si'})).toMatch(/^Bolt SAE-8 in a tapped hole/m);
+  });
+});
