@@ -105,6 +105,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'preset.delete', keys: [c('x')], context: 'presets', hint: 'delete', description: 'Delete the marked preset (asks first)'},
   {command: 'preset.import', keys: [c('i')], context: 'presets', hint: 'import', description: 'Import presets from a JSON file'},
   {command: 'preset.export', keys: [c('e')], context: 'presets', hint: 'export', description: 'Export the marked preset to a JSON file'},
+  {command: 'preset.exportAll', keys: [c('E')], context: 'presets', hint: 'export all', description: 'Export every saved preset to one JSON file'},
   {command: 'screen.back', keys: [k('escape')], context: 'presets', description: 'Back to the joint screen'},
 
   {command: 'scroll.up', keys: [k('up')], context: 'report', hint: 'scroll', description: 'Scroll up a line'},

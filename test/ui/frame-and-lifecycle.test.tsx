@@ -57,6 +57,13 @@ describe('quitting and the draft', () => {
     await app.press([KEY.right, KEY.right], /Engaged length\s+21\.0 mm/);
     app.unmount();
 
+    const other = startApp({draft: {savedAt: '2026-02-03T04:05:06.000Z', presetName: 'mine', values: draftValues}});
+    other.svc.store.saved.set('mine', {values: structuredClone(FIXTURE_VALUES), savedAt: '2026-01-01T10:00:00.000Z'});
+    await other.press('y', 'Restored the unsaved edits');
+    expect(other.frame()).toContain('Preset: mine  * unsaved changes');
+    await other.press('s', 'Saved preset "mine".');
+    other.unmount();
+
     const again = startApp({draft: {savedAt: '2026-02-03T04:05:06.000Z', presetName: 'demo-fixture', values: draftValues}});
     again.svc.store.draft = {savedAt: 'x', presetName: 'p', values: draftValues};
     await again.press('n', 'Draft discarded');

@@ -80,6 +80,10 @@ describe('presets screen', () => {
     await app.press([KEY.down, KEY.down]);
     await app.press('e', 'to file: ');
     await app.press(KEY.enter, /Exported ".+" to .+\.json\./);
+    await app.press('E', 'Export all saved presets to file: tapwright-presets.json_');
+    await app.press(KEY.enter, 'Exported all presets to tapwright-presets.json.');
+    await app.press(['E', KEY.enter], 'tapwright-presets.json exists. Replace it? (y/n)');
+    await app.press('y', 'Exported all presets to tapwright-presets.json.');
     app.unmount();
   });
 

@@ -9,7 +9,7 @@ import {STEPS, fieldById, setValue, type Mode} from './fields.js';
 import {evaluate, evaluateRepairs} from './evaluate.js';
 import {commitEdit, go, moveField, moveStep, startEdit, withEditPreview, withPickerPreview} from './edit-commands.js';
 import {defaultReportPath, loadPreset, markedPreset, reportText, runPrompt, savePreset, slug, writeReport} from './preset-commands.js';
-import {contextsOf, currentField, errText, fail, filteredPresets, info, pickerItems, shownValues, type WorkbenchState} from './workbench.js';
+import {contextsOf, currentField, errText, fail, filteredPresets, info, pickerItems, shownValues, snapshot, type WorkbenchState} from './workbench.js';
 
 /** Apply one key to the state. */
 export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServices): WorkbenchState {
@@ -147,6 +147,8 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       if (command === 'preset.duplicate') return {...s, prompt: {kind: 'duplicate', title: `Copy "${name}" as`, buffer: `${name} copy`, target: name}};
       return {...s, prompt: {kind: 'export', title: `Export "${name}" to file`, buffer: `${slug(name)}.json`, target: name}};
     }
+    case 'preset.exportAll':
+      return {...s, prompt: {kind: 'export', title: 'Export all saved presets to file', buffer: 'tapwright-presets.json'}};
     case 'preset.import':
       return {...s, prompt: {kind: 'import', title: 'Import presets from file', buffer: ''}};
 
@@ -195,7 +197,7 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
         if (c.kind === 'overwritePreset') return savePreset(base, svc, c.target, true);
         if (c.kind === 'overwriteExport') {
           svc.presets.exportFile(c.target, c.preset, true);
-          return {...base, message: info(`Exported "${c.preset}" to ${c.target}.`)};
+          return {...base, message: info(`Exported ${c.preset ? `"${c.preset}"` : 'all presets'} to ${c.target}.`)};
         }
         return writeReport(base, svc, c.target, true);
       } catch (e) {
@@ -207,7 +209,17 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
 
     case 'draft.restore': {
       const d = s.draftOffer!;
-      return {...s, draftOffer: undefined, values: d.values, mode: d.mode === 'screw' && svc.checkScrew ? 'screw' : s.mode, step: 0, field: 0, message: info(`Restored the unsaved edits of ${d.savedAt.slice(0, 16).replace('T', ' ')}`)};
+      // Back on the preset the edits were made to, so s saves into it.
+      let preset = s.preset;
+      if (d.presetName && d.presetName !== s.preset.name) {
+        try {
+          const p = svc.presets.load(d.presetName);
+          preset = {name: p.name, readOnly: p.readOnly, saved: snapshot(p.values)};
+        } catch {
+          // That preset is gone: the edits stay on the open one.
+        }
+      }
+      return {...s, preset, draftOffer: undefined, values: d.values, mode: d.mode === 'screw' && svc.checkScrew ? 'screw' : s.mode, step: 0, field: 0, message: info(`Restored the unsaved edits of ${d.savedAt.slice(0, 16).replace('T', ' ')}`)};
     }
     case 'draft.discard':
       try {

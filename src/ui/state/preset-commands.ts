@@ -78,7 +78,7 @@ export function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchS
           }
           throw e;
         }
-        return {...base, message: info(`Exported "${p.target}" to ${text}.`)};
+        return {...base, message: info(`Exported ${p.target ? `"${p.target}"` : 'all presets'} to ${text}.`)};
       case 'reportPath':
         return writeReport(base, svc, text, false);
     }
