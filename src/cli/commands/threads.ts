@@ -25,6 +25,7 @@ Designations (case and spaces do not matter; "x" or "×"):
                (no pitch: coarse pitch of ISO 261; no class: 6H/6g)
   Unified      1/4-20 UNC-2A  #10-32 UNF-3B  1/2-13 UNC-2A/2B  5/16-24 UNF
                0.250-28 UNF   (series UNC, UNF, UNEF or UN; no class: 2A/2B)
+               1/4 UNC        (no threads per inch: the series pitch)
   Power screw  Tr24x5  Tr40x14(P7)  1-5 ACME-2G  square 32x4
                (basic data only here; see tapwright screw)
 A pitch outside the standard series is accepted as a special thread and

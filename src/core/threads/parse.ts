@@ -146,8 +146,24 @@ function parseMetric(raw: string): Parsed<ThreadSpec> {
 
 const UNIFIED_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d+(?:\.\d+)?)\s*(unef|unc|unf|un)?\s*(?:-\s*)?(.*)$`, 'i');
 
+/** "1/4 UNC", "#10 UNF-3B": a size and a series without the threads per inch. */
+const UNIFIED_NO_TPI_RE = new RegExp(String.raw`^${SIZE_RE}\s*-?\s*(unef|unc|unf)\b\s*(.*)$`, 'i');
+
 function parseUnified(raw: string): Parsed<ThreadSpec> {
   const m = UNIFIED_RE.exec(raw);
+  const bare = m ? null : UNIFIED_NO_TPI_RE.exec(raw);
+  if (bare) {
+    // The series gives the pitch, as "M10" gives the coarse pitch of ISO 261 (ASME B1.1 series tables).
+    const size = inchSize(bare[1] ?? '');
+    const series = (bare[2] ?? '').toUpperCase() as UnifiedSeries;
+    const row = size ? unifiedRow(size.inches) : undefined;
+    const tpi = row?.[series];
+    if (!row || tpi === undefined) {
+      return fail(`${row?.label ?? bare[1]} in has no ${series} pitch in ASME B1.1; give the threads per inch, e.g. ${row?.label ?? bare[1]}-8 UN`, raw);
+    }
+    const rest = (bare[3] ?? '').trim();
+    return parseUnified(`${row.label}-${trimNumber(tpi)} ${series}${rest ? `-${rest.replace(/^-\s*/, '')}` : ''}`);
+  }
   if (!m) {
     return fail(`designation "${raw}" is not understood; unified threads are written <size>-<threads per inch> <series>-<class>, e.g. 1/4-20 UNC-2A, #10-32 UNF-3B`, raw);
   }
