@@ -47,14 +47,15 @@ const TABS: readonly {screen: Screen; key: string; title: string}[] = [
   {screen: 'help', key: '?', title: 'Help'},
 ];
 
-function Header({state, width}: {state: WorkbenchState; width: number}) {
+// The header, preset line and caution change rarely: memoised, so a keystroke re-renders only what it changes.
+const Header = React.memo(function Header({screen, unitSystem, width}: {screen: Screen; unitSystem: 'si' | 'us'; width: number}) {
   const t = useTheme();
-  const units = state.units === 'si' ? 'Units SI' : 'Units US';
+  const units = unitSystem === 'si' ? 'Units SI' : 'Units US';
   return (
     <Box width={width}>
       <Text bold color={t.tone('accent')}>tapwright </Text>
       {TABS.map(tab => (
-        <Text key={tab.screen} inverse={state.screen === tab.screen} bold={state.screen === tab.screen}>
+        <Text key={tab.screen} inverse={screen === tab.screen} bold={screen === tab.screen}>
           {` ${tab.key} ${tab.title} `}
         </Text>
       ))}
@@ -62,14 +63,13 @@ function Header({state, width}: {state: WorkbenchState; width: number}) {
       <Text>{`  ${units}`}</Text>
     </Box>
   );
-}
+});
 
-function PresetLine({state, width}: {state: WorkbenchState; width: number}) {
+const PresetLine = React.memo(function PresetLine({presetName, readOnly, dirty, width}: {presetName: string; readOnly: boolean; dirty: boolean; width: number}) {
   const t = useTheme();
-  const dirty = isDirty(state);
-  const tag = state.preset.readOnly ? ' (shipped demo, read-only)' : '';
+  const tag = readOnly ? ' (shipped demo, read-only)' : '';
   const mark = dirty ? '  * unsaved changes' : '  saved';
-  const name = fit(state.preset.name, Math.max(8, width - 9 - tag.length - mark.length), t.sym.ellipsis);
+  const name = fit(presetName, Math.max(8, width - 9 - tag.length - mark.length), t.sym.ellipsis);
   return (
     <Box width={width}>
       <Text>Preset: </Text>
@@ -80,7 +80,12 @@ function PresetLine({state, width}: {state: WorkbenchState; width: number}) {
       </Text>
     </Box>
   );
-}
+});
+
+const Caution = React.memo(function Caution({columns}: {columns: number}) {
+  const t = useTheme();
+  return <Lines lines={cautionLines(columns).map(text => ({text, color: t.tone('watch')}))} width={columns} />;
+});
 
 function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Record<string, string>; error?: string}; width: number}) {
   const t = useTheme();
@@ -152,7 +157,6 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const t = useTheme();
   const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
   const sev = state.mode === 'screw' ? evaluateScrew(shownValues(state), svc, state.units, state.ascii) : undefined;
-  const caution = cautionLines(columns);
   const height = rows - 1;
   const hints = hintLines(contextsOf(state), t.ascii, columns);
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
@@ -179,17 +183,13 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   }
   return (
     <Box flexDirection="column" width={columns} height={height} overflow="hidden">
-      <Header state={state} width={columns} />
-      <PresetLine state={state} width={columns} />
+      <Header screen={state.screen} unitSystem={state.units} width={columns} />
+      <PresetLine presetName={state.preset.name} readOnly={state.preset.readOnly} dirty={isDirty(state)} width={columns} />
       <Box height={bodyH} width={columns} overflow="hidden">
         <ScreenGuard resetKey={`${state.screen}.${state.mode}.${state.units}.${snapshot(shownValues(state))}`}>{body}</ScreenGuard>
       </Box>
       <MessageLine state={state} ev={state.screen === 'joint' && sev ? sev : ev} width={columns} />
-      {caution.map((l, i) => (
-        <Text key={`c${i}`} color={t.tone('watch')}>
-          {l}
-        </Text>
-      ))}
+      <Caution columns={columns} />
       <Lines lines={hints.map(text => ({text, color: t.tone('dim')}))} width={columns} />
     </Box>
   );
