@@ -54,7 +54,7 @@ for step in cfg["steps"]:
     os.write(fd, data)
     _, t_done = read_for(2, lambda b: ESU in b)
     read_for(cfg.get("gap", 0.12))  # until quiet: every byte this key caused
-    results.append({"digit": step.get("digit", False), "latency": (t_done - t_send) if t_done else None, "bytes": len(buf) - start})
+    results.append({"digit": step.get("digit", False), "first": step.get("first", False), "latency": (t_done - t_send) if t_done else None, "bytes": len(buf) - start})
 
 def status():
     out = {}
