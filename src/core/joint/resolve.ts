@@ -197,9 +197,13 @@ export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units:
   const len = (x: number): string => (units === 'us' ? `${toDisplay(x, 'length', 'us').toFixed(3)} in` : `${round(x)} mm`);
   const num = (x: number): string => (units === 'us' ? toDisplay(x, 'length', 'us').toFixed(3) : round(x));
   const notes: string[] = [];
-  if (input.internal === 'nut' && input.nutHeight === undefined) {
+  if (input.internal === 'nut') {
     const dims = nutDimensions(d);
-    if (dims) notes.push(`Nut height ${len(dims.heightMin)} (m min, ${dims.provenance.source}).`);
+    if (input.nutHeight === undefined && dims) notes.push(`Nut height ${len(dims.heightMin)} (m min, ${dims.provenance.source}).`);
+    const height = input.nutHeight ?? dims?.heightMin;
+    if (height !== undefined && input.engagement > height + 1e-9) {
+      notes.push(`Engaged length ${len(input.engagement)} is longer than the nut (${len(height)}): only the nut height is counted.`);
+    }
   }
   if (input.bearingDiameter === undefined) {
     const family = geometry.spec.family;

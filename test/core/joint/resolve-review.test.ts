@@ -69,3 +69,12 @@ describe('sizes in messages', () => {
     expect(e.message).toBe("no tabulated width across flats for 1/2 in (the nut table is ISO 4032, metric only); give the nut's width across flats");
   });
 });
+
+describe('engagement longer than the nut', () => {
+  it('is cut to the nut height and says so (was silent); ISO 4032 M10 m min 8.04 mm', () => {
+    const r = run({internal: 'nut', nutClass: '8', parent: undefined, engagement: 20});
+    expect(r.stripping.effectiveEngagement).toBeCloseTo(8.04, 6);
+    expect(r.notes).toContain('Engaged length 20 mm is longer than the nut (8.04 mm): only the nut height is counted.');
+    expect(run({internal: 'nut', nutClass: '8', parent: undefined, engagement: 8.04}).notes.join(' ')).not.toMatch(/longer than the nut/);
+  });
+});
