@@ -87,3 +87,12 @@ describe('tapwright repair --units us: core input errors in inches', () => {
     expect(r.err).toMatch(/--chamfer: the chamfer \(0\.600 in\) must be shorter than the engaged length \(0\.500 in\)/);
   });
 });
+
+describe('tapwright repair: engagement and depth available', () => {
+  it('an engagement deeper than the depth available is bad input naming both options (was planned as given)', async () => {
+    const r = await run('--thread', 'M8', '--parent', 'AlSi7Mg-T6', '--engage', '30', '--depth-available', '25', '--through');
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/^tapwright: --engage 30\.0 mm is more than --depth-available 25\.0 mm \(the part thickness\)/);
+    expect((await run('--thread', 'M8', '--parent', 'AlSi7Mg-T6', '--engage', '8', '--depth-available', '25')).code).not.toBe(2);
+  });
+});

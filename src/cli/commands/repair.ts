@@ -196,6 +196,12 @@ export const command: Command = {
       const option = REPAIR_FIELD_OPTION[String(issue?.path[0] ?? '')] ?? String(issue?.path[0] ?? '');
       throw new UsageError(`${option}: ${issue?.message ?? 'invalid'}`, option);
     }
+    const avail = repair.data.depthAvailable;
+    if (avail !== undefined && joint.engagement > avail + 1e-9) {
+      const u = units as UnitSystem;
+      const what = repair.data.through ? 'the part thickness' : 'the depth to the bottom of the hole';
+      throw new UsageError(`--engage ${lengthText(joint.engagement, u)} is more than --depth-available ${lengthText(avail, u)} (${what}); the screw cannot reach further than that`, '--engage');
+    }
     if (repair.data.holeState === 'stripped' && repair.data.strippedDepth !== undefined && repair.data.strippedDepth > joint.engagement + 1e-9) {
       const u = units as UnitSystem;
       throw new UsageError(
