@@ -6,6 +6,7 @@ import {KEY} from '../support/keys.js';
 import {KEYMAP} from '../../src/ui/keymap.js';
 import {helpLines} from '../../src/ui/screens/help-screen.js';
 import {CAUTION_LINES} from '../../src/core/cautions.js';
+import {EFFORT_SCALE_TEXT} from '../../src/core/repair/rank.js';
 
 afterEach(() => cleanup());
 
@@ -61,6 +62,7 @@ describe('help screen', () => {
     expect(lines).toContain('  - source one');
     expect(lines).toContain('rule text');
     for (const c of CAUTION_LINES) expect(lines).toContain(c);
+    for (const l of EFFORT_SCALE_TEXT.split('\n')) expect(lines).toContain(l);
   });
 
   it('opens on ?, scrolls, and Esc returns to the screen before', async () => {
@@ -69,8 +71,9 @@ describe('help screen', () => {
     expect(app.frame()).toContain('Screens');
     await app.press(KEY.pageDown, /lines 1[0-9]-/);
     for (let i = 0; i < 12; i++) await app.press(KEY.pageDown);
-    await app.see('fixture ranking rule');
     await app.see('Lifting equipment, pressure boundaries');
+    expect(app.frame()).toContain('E6 resize:');
+    await app.press(KEY.pageUp, 'fixture ranking rule');
     await app.press(KEY.escape, 'Presets: 1');
     app.unmount();
   });

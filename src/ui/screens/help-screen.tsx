@@ -5,6 +5,7 @@
  */
 import React from 'react';
 import {CAUTION_LINES} from '../../core/cautions.js';
+import {EFFORT_SCALE_TEXT} from '../../core/repair/rank.js';
 import {CONTEXT_TITLES, KEYMAP, keyLabel, type Context} from '../keymap.js';
 import {ScrollView} from './scroll-view.js';
 
@@ -42,6 +43,7 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
   for (const s of opts.sources) lines.push(`  - ${s}`);
   lines.push('', 'Ranking of repairs');
   lines.push(`  ${opts.rankingRule ?? 'The repair planner is not in this build yet; tapwright repair --help describes it when it is.'}`);
+  lines.push('', 'Work grades (the Work column of the Repairs screen)', ...EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`));
   lines.push('', 'Cautions', ...CAUTION_LINES.map(l => `  ${l}`));
   return lines;
 }
