@@ -127,7 +127,10 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
   rows.push({
     label: 'Bearing diameter DKm',
     value: q(result.tightening.bearingDiameter, 'length', f),
-    note: BEARING_WORDS[result.tightening.bearingSource] ?? result.tightening.bearingSource,
+    note:
+      result.tightening.bearingSource === 'standard' && g.spec.family === 'unified'
+        ? 'hex cap screw head, ASME B18.2.1, with ASME B18.2.8 normal-fit hole'
+        : (BEARING_WORDS[result.tightening.bearingSource] ?? result.tightening.bearingSource),
   });
   rows.push({label: 'Service load', value: input.serviceLoad > 0 ? q(input.serviceLoad, 'force', f) : 'none'});
   rows.push({label: 'Scatter factor alphaA', value: ratio(input.scatter), note: input.scatter === 1 ? 'friction range only' : 'FM,max / FM,min'});

@@ -105,6 +105,15 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
       message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
     };
   }
+  // Formula 1 takes the shear area as twice the stress area (shear strength about
+  // half the tensile strength), so it can ask for more than the force ratio does.
+  if (c.effectiveEngagement < c.requiredFedStd) {
+    return {
+      code: 'strips-before-break',
+      level: 'watch',
+      message: `FED-STD-H28 Formula 1 calls for ${len(c, c.requiredFedStd)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged. The stripping forces still put the bolt first (ratio ${ratio.toFixed(2)}), but only because of the shear strengths assumed: confirm them or engage more thread.`,
+    };
+  }
   return undefined;
 }
 
