@@ -17,8 +17,8 @@ import type {JointInput, JointInputDraft} from '../../core/joint/input.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
 import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
-import {lengthText, planText} from './repair-text.js';
-import {planMarkdown} from './repair-markdown.js';
+import {lengthText, planText} from '../../report/repair-text.js';
+import {planMarkdown} from '../../report/repair-markdown.js';
 
 const OPTIONS: OptionSpec = {
   ...JOINT_OPTIONS,

@@ -3,12 +3,12 @@
  * inputs, the ranked options, reasons and notes, the ranking rule, sources,
  * cautions, date and preset name.
  */
-import type {JointInput} from '../../core/joint/input.js';
-import type {RepairOption, RepairPlan} from '../../core/repair/index.js';
-import {EFFORT_SCALE_TEXT} from '../../core/repair/index.js';
-import {CAUTION_LINES} from '../../core/cautions.js';
-import {formatQuantity, type UnitSystem} from '../../core/units.js';
-import {cell, isoDate} from '../../report/markdown.js';
+import type {JointInput} from '../core/joint/input.js';
+import type {RepairOption, RepairPlan} from '../core/repair/index.js';
+import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
+import {CAUTION_LINES} from '../core/cautions.js';
+import {formatQuantity, type UnitSystem} from '../core/units.js';
+import {cell, isoDate} from './markdown.js';
 
 export interface RepairReportMeta {
   date: Date;

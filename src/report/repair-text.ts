@@ -2,10 +2,10 @@
  * Text output of `tapwright repair`: the ranked table (80 columns), the reasons
  * and notes, the ranking rule and the cautions.
  */
-import type {RepairOption, RepairPlan} from '../../core/repair/index.js';
-import {EFFORT_SCALE_TEXT} from '../../core/repair/index.js';
-import {CAUTION_LINES} from '../../core/cautions.js';
-import {displayUnit, toDisplay, type UnitSystem} from '../../core/units.js';
+import type {RepairOption, RepairPlan} from '../core/repair/index.js';
+import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
+import {CAUTION_LINES} from '../core/cautions.js';
+import {displayUnit, toDisplay, type UnitSystem} from '../core/units.js';
 
 export const WIDTH = 80;
 
