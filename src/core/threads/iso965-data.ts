@@ -6,7 +6,7 @@
  * fundamental deviations, of Td, of TD1, of Td2 and of TD2.
  * How these numbers were obtained, honestly:
  *  - Grade 6 with positions g and H (the 6g/6H columns): the values are
- *    confirmed by the ISO 965-2 6g/6H limits of size, as transcribed in a
+ *    confirmed by the ISO 965-2 6g/6H limits of size, as copied in a
  *    public data file of the DIN 13 / ISO 965-2 limit tables: every 6g/6H
  *    limit checked there follows from these deviations and tolerances
  *    (test/core/threads/iso965-tables.test.ts).

@@ -5,9 +5,9 @@
  * Source: ASME B1.1 series table (UNC, UNF, UNEF). UNC and UNF #4 to 1-1/2 in
  * were read in Shigley's Mechanical Engineering Design, 9th ed., Table 8-2
  * (compiled from ANSI B1.1; it omits 1-1/8 and 1-3/8). #0 to #3, 1-1/8, 1-3/8,
- * 1-3/4 and the UNEF series were read in a public transcription of the ASME
+ * 1-3/4 and the UNEF series were read in a public copy of the ASME
  * B1.1 series table. The row marked `memory: true` (2 in, 4-1/2 tpi UNC) is
- * from memory: that transcription gives 4 tpi, which is not the UNC value.
+ * from memory: that copy gives 4 tpi, which is not the UNC value.
  * Numbered sizes: D = 0.060 + 0.013 N in (ASME B1.1; Shigley Table 8-2).
  */
 

@@ -12,7 +12,7 @@ function geom(text: string): ThreadGeometry {
  * Oracle: ISO 965-2:1998, limits of size for general purpose bolt and nut
  * threads, tolerance classes 6H (internal) and 6g (external); the same values
  * are tabulated in DIN 13-20 (coarse) and DIN 13-21 (fine). Read in a public
- * transcription of those limit tables. That transcription gives every 6H
+ * public copy of those limit tables. That copy gives every 6H
  * value and the 6g d3 min to 0.001 mm, but rounds the other 6g values of
  * sizes above M10 to 0.01 mm; those are checked at that resolution below.
  *
@@ -40,7 +40,7 @@ const EXACT_6G: Row[] = [
   ['M5x0.5', 4.98, 4.874, 4.655, 4.58, 4.272, 4.459, 4.599, 4.675, 4.775, 5],
 ];
 const ROUNDED_6G: Row[] = [
-  // ISO 965-2:1998 6g/6H table (DIN 13-20 coarse); 6g d, d2 to 0.01 mm in the transcription
+  // ISO 965-2:1998 6g/6H table (DIN 13-20 coarse); 6g d, d2 to 0.01 mm in the public copy
   ['M12', 11.97, 11.7, 10.83, 10.68, 9.601, 10.106, 10.441, 10.863, 11.063, 12],
   ['M16', 15.96, 15.68, 14.66, 14.5, 13.271, 13.835, 14.21, 14.701, 14.913, 16],
   ['M20', 19.96, 19.62, 18.33, 18.16, 16.624, 17.294, 17.744, 18.376, 18.6, 20],
@@ -75,10 +75,10 @@ describe('ISO metric 6g/6H limits of size against ISO 965-2', () => {
     expect(g.limitsProvenance.kind).toBe('standard');
   });
 
-  it.each(ROUNDED_6G)('%s-6H/6g matches ISO 965-2:1998 6H to 0.001 mm and 6g to the 0.01 mm of the transcription', (name, ...v) => {
+  it.each(ROUNDED_6G)('%s-6H/6g matches ISO 965-2:1998 6H to 0.001 mm and 6g to the 0.01 mm of the public copy', (name, ...v) => {
     const g = geom(`${name}-6H/6g`);
     const e = g.limits.external;
-    // 6g d and d2 are given to 0.01 mm in the transcription of ISO 965-2 (DIN 13-20/-21)
+    // 6g d and d2 are given to 0.01 mm in the public copy of ISO 965-2 (DIN 13-20/-21)
     for (const [got, want] of [[e.majorMax, v[0]], [e.majorMin, v[1]], [e.pitchMax, v[2]], [e.pitchMin, v[3]]] as const) {
       expect(Math.abs(got - want)).toBeLessThanOrEqual(0.005 + 1e-9);
     }
