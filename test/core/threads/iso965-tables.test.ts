@@ -11,7 +11,7 @@ function geom(text: string): ThreadGeometry {
 /*
  * Oracle: ISO 965-2:1998, limits of size for general purpose bolt and nut
  * threads, tolerance classes 6H (internal) and 6g (external); the same values
- * are tabulated in DIN 13-20 (coarse) and DIN 13-21 (fine). Read in a public
+ * are tabulated in DIN 13-20 (coarse) and DIN 13-21 (fine). Read in a
  * public copy of those limit tables. That copy gives every 6H
  * value and the 6g d3 min to 0.001 mm, but rounds the other 6g values of
  * sizes above M10 to 0.01 mm; those are checked at that resolution below.
