@@ -94,7 +94,12 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
   let text = '';
   let isError = false;
   if (state.prompt) {
-    text = `${state.prompt.title}: ${state.prompt.buffer}${t.sym.cursor}`;
+    // A long text shows its end, where the cursor is; the title stays.
+    const head = `${state.prompt.title}: `;
+    const room = Math.max(8, width - Array.from(head).length);
+    const tail = Array.from(`${state.prompt.buffer}${t.sym.cursor}`);
+    const cut = Array.from(t.sym.ellipsis).length;
+    text = `${head}${tail.length > room ? `${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}` : tail.join('')}`;
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
   } else if (state.draftOffer) {

@@ -52,7 +52,7 @@ export const CONTEXT_TITLES: Record<Context, string> = {
   report: 'Report screen',
   repairs: 'Repairs screen',
   help: 'Help screen',
-  prompt: 'Typing a name or file path',
+  prompt: 'Typing a name, file path or note',
   confirm: 'A yes/no question',
   draft: 'Start-up: unsaved draft found',
 };
@@ -114,6 +114,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'scroll.pageDown', keys: [k('pagedown'), c(' ')], context: 'report', description: 'Scroll down a page'},
   {command: 'report.format', keys: [c('t')], context: 'report', hint: 'text/Markdown', description: 'Switch the report between plain text and Markdown'},
   {command: 'report.write', keys: [k('enter')], context: 'report', hint: 'write file', description: 'Write the report to a file (asks for the path)'},
+  {command: 'report.notes', keys: [c('n')], context: 'report', hint: 'notes', description: 'Edit the work-order notes of the preset: asset tag, location, work-order number, then free text (Enter keeps each, Esc puts all back)'},
   {command: 'screen.back', keys: [k('escape')], context: 'report', description: 'Back to the joint screen'},
 
   {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'choose', description: 'Previous repair'},

@@ -21,6 +21,7 @@ import type {FormValues, PickSource} from './state/fields.js';
 export function presetValues(p: Preset): FormValues {
   const v = {joint: structuredClone(p.joint ?? {thread: 'M10', engagement: 10}), hole: structuredClone(p.repair ?? {})} as FormValues;
   if (p.screw) v.screw = structuredClone(p.screw);
+  v.notes = structuredClone(p.notes ?? {});
   return v;
 }
 
@@ -93,7 +94,8 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
             kind,
             ...(kind === 'joint' || values.joint.thread ? {joint: values.joint as JointInput, repair: values.hole} : {}),
             ...(values.screw ? {screw: values.screw as ScrewInput} : {}),
-            notes: existing?.notes ?? before?.notes ?? {},
+            // The workbench's notes; a draft from before notes were edited has none: keep the stored ones.
+            notes: values.notes ?? existing?.notes ?? before?.notes ?? {},
           },
           {overwrite, ...(before && overwrite ? {expectedRevision: before.revision} : {})},
         );
@@ -120,7 +122,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     },
     report(format, result, input, meta) {
       if (format === 'text') return formatCheckText(result, input, {units: meta.units});
-      const notes = loaded.get(meta.presetName)?.notes;
+      const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, ...(notes ? {notes} : {})});
     },
     writeFile(file, text, overwrite) {

@@ -11,6 +11,7 @@ import type {Provenance} from '../core/types.js';
 import type {ScrewInput} from '../core/screw/input.js';
 import type {ScrewResult} from '../core/screw/result.js';
 import type {FormValues, PickSource} from './state/fields.js';
+import type {Notes} from '../store/schema.js';
 
 /** One entry of a picker (grade, material, nut class) with where its numbers come from. */
 export interface PickItem {
@@ -52,6 +53,8 @@ export interface ReportMeta {
   presetName: string;
   date: Date;
   units: 'si' | 'us';
+  /** The work-order notes as they stand in the workbench (edited, maybe not saved yet). */
+  notes?: Notes;
 }
 
 export interface PresetPort {

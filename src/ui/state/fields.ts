@@ -8,6 +8,7 @@ import {JointInputSchema, type JointInputDraft} from '../../core/joint/input.js'
 import {RepairInputSchema, type RepairInput} from '../../core/repair/input.js';
 import {ScrewInputSchema, END_CONDITION_IDS, type ScrewInputDraft} from '../../core/screw/input.js';
 import type {Dimension} from '../../core/units.js';
+import type {Notes} from '../../store/schema.js';
 
 export type RepairDraft = Partial<z.input<typeof RepairInputSchema>>;
 
@@ -16,6 +17,8 @@ export interface FormValues {
   hole: RepairDraft;
   /** Power-screw inputs (the workbench's power-screw mode). */
   screw?: Partial<ScrewInputDraft>;
+  /** The preset's work-order notes (asset tag, location, work order, free text); not an input of any check. */
+  notes?: Notes;
 }
 
 /** What the workbench works on: a threaded joint, or a power screw (lead screw and nut). */

@@ -8,6 +8,7 @@ import {helpLines} from '../screens/help-screen.js';
 import {STEPS, fieldById, setValue, type Mode} from './fields.js';
 import {evaluate, evaluateRepairs} from './evaluate.js';
 import {commitEdit, go, moveField, moveStep, startEdit, withEditPreview, withPickerPreview} from './edit-commands.js';
+import {cancelNotes, setNoteBuffer, startNotes} from './note-commands.js';
 import {defaultReportPath, loadPreset, markedPreset, reportText, runPrompt, savePreset, slug, writeReport} from './preset-commands.js';
 import {contextsOf, currentField, errText, fail, filteredPresets, info, pickerItems, shownValues, snapshot, type WorkbenchState} from './workbench.js';
 
@@ -170,6 +171,13 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     }
     case 'report.format':
       return {...s, report: {format: s.report.format === 'markdown' ? 'text' : 'markdown', scroll: 0}};
+    case 'report.notes':
+      return startNotes(s, md => {
+        const rows = bodyHeight(md.size) - 1;
+        const lines = wrapLines((reportText(md, svc, evaluate(md.values, svc, md.units, md.ascii)).text ?? '').split('\n'), md.size.columns);
+        const at = lines.findIndex(l => /^#+ *work order/i.test(l));
+        return Math.max(0, Math.min(at - 1, lines.length - rows));
+      });
     case 'report.write':
       return {...s, prompt: {kind: 'reportPath', title: 'Write the report to file', buffer: defaultReportPath(s, svc)}};
     case 'repair.hole':
@@ -178,13 +186,15 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'prompt.ok':
       return runPrompt(s, svc);
     case 'prompt.cancel':
-      return {...s, prompt: undefined, message: info('Cancelled')};
+      return s.prompt!.kind === 'note' ? cancelNotes(s) : {...s, prompt: undefined, message: info('Cancelled')};
     case 'prompt.erase':
-      return {...s, message: undefined, prompt: {...s.prompt!, buffer: Array.from(s.prompt!.buffer).slice(0, -1).join('')}};
     case 'prompt.clear':
-      return {...s, message: undefined, prompt: {...s.prompt!, buffer: ''}};
-    case 'prompt.type':
-      return s.prompt!.buffer.length >= 200 ? s : {...s, message: undefined, prompt: {...s.prompt!, buffer: s.prompt!.buffer + (ev.char ?? '')}};
+    case 'prompt.type': {
+      const b = s.prompt!.buffer;
+      const buffer = command === 'prompt.type' ? b + (ev.char ?? '') : command === 'prompt.clear' ? '' : Array.from(b).slice(0, -1).join('');
+      if (s.prompt!.kind === 'note') return setNoteBuffer(s, buffer);
+      return command === 'prompt.type' && b.length >= 200 ? s : {...s, message: undefined, prompt: {...s.prompt!, buffer}};
+    }
 
     case 'confirm.yes': {
       const c = s.confirm!;

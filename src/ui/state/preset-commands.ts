@@ -2,6 +2,7 @@
 import type {WorkbenchServices} from '../services.js';
 import type {Mode} from './fields.js';
 import {evaluate} from './evaluate.js';
+import {acceptNote, shownNotes} from './note-commands.js';
 import {errText, fail, filteredPresets, info, snapshot, type WorkbenchState} from './workbench.js';
 
 export function markedPreset(s: WorkbenchState, svc: WorkbenchServices): string | undefined {
@@ -44,6 +45,8 @@ export function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchS
   const text = p.buffer.trim();
   const base = {...s, prompt: undefined};
   if (p.kind === 'search') return {...base, presetList: {query: text, index: 0}};
+  // A note may be empty: Enter on an empty line clears it.
+  if (p.kind === 'note') return acceptNote(s);
   if (text === '') return {...s, message: fail(`${p.title}: type a value, or Esc to cancel`)};
   try {
     switch (p.kind) {
@@ -95,7 +98,7 @@ export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
     return {
-      text: svc.report(s.report.format, ev.result as never, ev.input as never, {presetName: s.preset.name, date: svc.now(), units: s.units}),
+      text: svc.report(s.report.format, ev.result as never, ev.input as never, {presetName: s.preset.name, date: svc.now(), units: s.units, notes: shownNotes(s)}),
     };
   } catch (e) {
     return {why: `Cannot build the report: ${errText(e)}`};

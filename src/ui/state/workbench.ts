@@ -5,6 +5,7 @@
  * (store, files) go only through the injected services.
  */
 import type {UnitSystem} from '../../core/units.js';
+import type {Notes} from '../../store/schema.js';
 import type {Draft, PickItem, PresetEntry, WorkbenchServices} from '../services.js';
 import type {Context} from '../keymap.js';
 import {fieldById, stepsFor, visibleFields, type FieldDef, type FormValues, type Mode} from './fields.js';
@@ -26,13 +27,17 @@ export interface PickerState {
   original: unknown;
 }
 
-export type PromptKind = 'saveAs' | 'rename' | 'duplicate' | 'import' | 'export' | 'search' | 'reportPath';
+export type PromptKind = 'saveAs' | 'rename' | 'duplicate' | 'import' | 'export' | 'search' | 'reportPath' | 'note';
 export interface PromptState {
   kind: PromptKind;
   title: string;
   buffer: string;
   /** The preset the prompt acts on (rename, duplicate, export). */
   target?: string;
+  /** The work-order note being typed (kind 'note'). */
+  note?: 'asset' | 'location' | 'workOrder' | 'text';
+  /** The notes as they were before the first note prompt: Esc puts them back. */
+  notesBefore?: Notes;
 }
 
 export type ConfirmKind = 'delete' | 'overwritePreset' | 'overwriteFile' | 'overwriteExport';
