@@ -6,4 +6,4 @@ export {formatCheckText, toAscii, wrapText, TEXT_WIDTH} from './text.js';
 export {formatCheckMarkdown, isoDate, type MarkdownMeta, type WorkOrderNotes} from './markdown.js';
 export {verdict, levelWord} from './sections.js';
 export {planText, lengthText} from './repair-text.js';
-export {planMarkdown, type RepairReportMeta} from './repair-markdown.js';
+export {planMarkdown, planSectionLines, type RepairReportMeta} from './repair-markdown.js';

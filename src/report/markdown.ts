@@ -23,6 +23,8 @@ export interface MarkdownMeta {
   date: Date;
   notes?: WorkOrderNotes;
   units: UnitSystem;
+  /** Further sections (Markdown, starting with a "## " heading), placed before the cautions. */
+  extraSections?: string[];
 }
 
 /** Make text safe inside a Markdown table cell. */
@@ -120,6 +122,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   out.push('## Sources', '');
   for (const s of sourceLines(result)) out.push(`- ${s}`);
   out.push('');
+
+  for (const section of meta.extraSections ?? []) out.push(section.trimEnd(), '');
 
   out.push('## Cautions', '');
   // Two trailing spaces: a hard line break, so each caution keeps its own line when rendered.

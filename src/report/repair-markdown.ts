@@ -57,23 +57,49 @@ export function planMarkdown(plan: RepairPlan, joint: JointInput, meta: RepairRe
     ['Required margin', plan.requiredMargin.toFixed(2)],
   ];
   for (const [k, v] of rows) out.push(`| ${cell(k)} | ${cell(v)} |`);
-  if (plan.asIs) {
-    out.push('', `${h.state === 'stripped' ? 'As designed, before the damage' : 'As is'}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`);
+  if (!plan.asIs) out.push('');
+  out.push(...planSectionLines(plan, u, {level: 2}));
+  out.push('## Cautions', '', ...CAUTION_LINES.map(c => `- ${cell(c)}`), '');
+  return out.join('\n');
+}
+
+/**
+ * The ranked plan as Markdown lines: the state as it is, the ranked options,
+ * reasons and notes, the ranking rule and the sources. `level` is the heading
+ * level of its parts; `chosen` (a rank) is written as the repair chosen.
+ */
+export function planSectionLines(plan: RepairPlan, u: UnitSystem, opts: {level: number; chosen?: number}): string[] {
+  const h = plan.hole;
+  const hd = '#'.repeat(opts.level);
+  const out: string[] = [];
+  const chosen = opts.chosen !== undefined ? plan.options.find(o => o.rank === opts.chosen) : undefined;
+  if (chosen) {
+    const what = [
+      chosen.drill !== null && chosen.drill !== undefined ? `drill ${q(chosen.drill, 'length', u)}` : null,
+      chosen.tapThread ? `tap ${chosen.tapThread}` : null,
+      chosen.holeDepth !== null && chosen.holeDepth !== undefined ? `hole depth ${q(chosen.holeDepth, 'length', u)}` : null,
+      chosen.torque !== null && chosen.torque !== undefined ? `tighten to ${q(chosen.torque, 'torque', u)}` : null,
+    ].filter(Boolean);
+    out.push(`**Repair chosen:** ${chosen.rank} ${cell(chosen.label)} (${state(chosen)}; stripping margin ${ratio(chosen.margin.stripping)}, bolt breaks first ${ratio(chosen.margin.boltBreaksFirst)})${what.length ? `: ${cell(what.join(', '))}` : ''}.`, '');
   }
-  out.push('', '## Ranked options', '');
+  if (plan.asIs) {
+    if (out.at(-1) !== '') out.push('');
+    out.push(`${h.state === 'stripped' ? 'As designed, before the damage' : 'As is'}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`);
+  }
+  out.push('', `${hd} Ranked options`, '');
   out.push('| # | Option | Effort | Can be done | Stripping margin | Bolt breaks first | Drill | Tap | Hole depth | Torque |');
   out.push('|---|---|---|---|---|---|---|---|---|---|');
   for (const o of plan.options) {
     out.push(`| ${o.rank} | ${cell(o.label)} | E${o.effort.grade} ${cell(o.effort.name)} | ${state(o)} | ${ratio(o.margin.stripping)} | ${ratio(o.margin.boltBreaksFirst)} | ${q(o.drill, 'length', u)} | ${cell(o.tapThread ?? '-')} | ${q(o.holeDepth, 'length', u)} | ${q(o.torque, 'torque', u)} |`);
   }
-  out.push('', '## Reasons and notes', '');
+  out.push('', `${hd} Reasons and notes`, '');
   for (const o of plan.options) {
     const parts = [o.reason, o.strength ? `governs: ${o.strength.governs}` : null, ...(o.feasible ? o.notes : [])].filter(Boolean);
     if (parts.length) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(parts.join('; '))}`);
   }
   for (const n of plan.notes) out.push(`- ${cell(n)}`);
-  out.push('', '## Ranking', '', cell(plan.rankingRule), '', ...EFFORT_SCALE_TEXT.split('\n').map(l => `- ${cell(l)}`));
-  out.push('', '## Sources', '', ...plan.sources.map(s => `- ${cell(s)}`));
-  out.push('', '## Cautions', '', ...CAUTION_LINES.map(c => `- ${cell(c)}`), '');
-  return out.join('\n');
+  out.push('', `${hd} Ranking`, '', cell(plan.rankingRule), '', ...EFFORT_SCALE_TEXT.split('\n').map(l => `- ${cell(l)}`));
+  out.push('', `${hd} Sources`, '', ...plan.sources.map(s => `- ${cell(s)}`));
+  out.push('');
+  return out;
 }

@@ -89,11 +89,17 @@ export function lengthText(mm: number, units: UnitSystem): string {
 }
 
 /** The whole text report. */
-export function planText(plan: RepairPlan, units: UnitSystem, heading: string): string {
+/** The ranked plan as 80-column text; `cautions: false` leaves the cautions to the report it is part of. */
+export function planText(plan: RepairPlan, units: UnitSystem, heading: string, opts: {cautions?: boolean; chosen?: number} = {}): string {
   const L = displayUnit('length', units, true);
   const T = displayUnit('torque', units, true);
   const out: string[] = [];
   out.push(...wrap(heading, '', '  '));
+  const chosen = opts.chosen !== undefined ? plan.options.find(o => o.rank === opts.chosen) : undefined;
+  if (chosen) {
+    const how = !chosen.feasible ? 'cannot be done here' : chosen.meetsMargin ? 'meets the required margin' : 'short of the required margin';
+    out.push(...wrap(`Repair chosen: ${chosen.rank} ${chosen.label} (${how}).`, '', '  '));
+  }
   const h = plan.hole;
   const hole = [
     h.state === 'stripped' ? `stripped to ${length(h.strippedDepth, units)} ${L}` : 'intact',
@@ -128,7 +134,9 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string): 
   out.push(...wrap(plan.rankingRule, 'Ranking: ', '  '));
   out.push('Effort grades:');
   for (const line of EFFORT_SCALE_TEXT.split('\n')) out.push(...wrap(line, '  ', '     '));
-  out.push('');
-  for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
+  if (opts.cautions !== false) {
+    out.push('');
+    for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
+  }
   return out.join('\n') + '\n';
 }

@@ -90,7 +90,8 @@ export function toAscii(text: string): string {
  * The text report of a checked joint, in the display units of `opts.units`.
  * Input and result values are in working units (mm, N, N·m, MPa).
  */
-export function formatCheckText(result: CheckResult, input: JointInput, opts: {units: UnitSystem; ascii?: boolean}): string {
+/** `extraSections`: further plain-text blocks (e.g. the repair plan), placed before the cautions. */
+export function formatCheckText(result: CheckResult, input: JointInput, opts: {units: UnitSystem; ascii?: boolean; extraSections?: string[]}): string {
   const f: Fmt = {units: opts.units, ascii: opts.ascii ?? false};
   // Convert to ASCII before wrapping, so a symbol that grows ("²" -> "^2") cannot push a line past 80.
   const wrap: Wrap = (text, first, rest) => wrapText(f.ascii ? toAscii(text) : text, first, rest);
@@ -130,6 +131,8 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
 
   out.push('', 'SOURCES');
   for (const s of sourceLines(result)) out.push(...wrap(s, '  - ', '    '));
+
+  for (const section of opts.extraSections ?? []) out.push('', light, section.trimEnd());
 
   out.push('', light);
   for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));

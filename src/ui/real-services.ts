@@ -13,7 +13,7 @@ import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
-import {formatCheckMarkdown, formatCheckText} from '../report/index.js';
+import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
 import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
@@ -121,9 +121,16 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
       clear: () => clearDraft(opts.configDir),
     },
     report(format, result, input, meta) {
-      if (format === 'text') return formatCheckText(result, input, {units: meta.units});
+      const rep = meta.repairs;
+      if (format === 'text') {
+        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})] : [];
+        return formatCheckText(result, input, {units: meta.units, extraSections: extra});
+      }
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
-      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, ...(notes ? {notes} : {})});
+      const extra = rep
+        ? [['## Repair plan', '', ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
+        : [];
+      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: extra, ...(notes ? {notes} : {})});
     },
     writeFile(file, text, overwrite) {
       const full = path.resolve(opts.cwd, file);

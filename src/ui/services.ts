@@ -55,6 +55,8 @@ export interface ReportMeta {
   units: 'si' | 'us';
   /** The work-order notes as they stand in the workbench (edited, maybe not saved yet). */
   notes?: Notes;
+  /** The ranked repairs and the one marked on the Repairs screen (its rank), when the report should carry them. */
+  repairs?: {plan: RepairPlan; chosen?: number};
 }
 
 export interface PresetPort {

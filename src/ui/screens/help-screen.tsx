@@ -12,7 +12,9 @@ import {ScrollView} from './scroll-view.js';
 export const SCREEN_GUIDE: readonly string[] = [
   'Joint: the inputs in five steps on the left (Thread, Parts, Engagement,',
   '  Tightening, Hole state); the results on the right change as you type.',
-  'Repairs: the fixes for a weak or stripped hole, best first.',
+  'Repairs: the fixes for a weak or stripped hole, best first. When the hole is',
+  '  stripped or the check fails, the report carries the ranked repairs and the',
+  '  one marked here as the repair chosen.',
   'Presets: saved joints; shipped demos are read-only, "save as" copies them.',
   'Report: the work-order report, written to a Markdown or text file; n edits the',
   '  preset\'s work-order notes (asset tag, location, work order, free text).',

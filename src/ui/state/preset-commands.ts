@@ -1,7 +1,7 @@
 /** Preset and report commands: save, load, the name and path prompts, writing the report. */
 import type {WorkbenchServices} from '../services.js';
 import type {Mode} from './fields.js';
-import {evaluate} from './evaluate.js';
+import {evaluate, evaluateRepairs, type Evaluation} from './evaluate.js';
 import {acceptNote, shownNotes} from './note-commands.js';
 import {errText, fail, filteredPresets, info, snapshot, type WorkbenchState} from './workbench.js';
 
@@ -91,14 +91,36 @@ export function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchS
   return base;
 }
 
+/**
+ * The repair plan the report carries: when the hole is stripped or the check
+ * failed, the ranked repairs with the one marked on the Repairs screen as the
+ * repair chosen.
+ */
+function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation): {plan: NonNullable<ReturnType<typeof evaluateRepairs>['plan']>; chosen?: number} | undefined {
+  const stripped = (s.values.hole as {holeState?: unknown} | undefined)?.holeState === 'stripped';
+  const failed = ev.result?.flags.some(f => f.level === 'fail') ?? false;
+  if (!stripped && !failed) return undefined;
+  const plan = evaluateRepairs(s.values, svc, ev).plan;
+  if (!plan || plan.options.length === 0) return undefined;
+  const marked = plan.options[Math.min(s.repairIndex, plan.options.length - 1)];
+  return {plan, ...(marked ? {chosen: marked.rank} : {})};
+}
+
 /** The report text for the current joint, or a reason it cannot be made. */
 export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input?: unknown; result?: unknown}): {text?: string; why?: string} {
   if (!svc.report) return {why: 'The report writer is not in this build yet.'};
   if (s.mode === 'screw') return {why: 'The work-order report covers threaded joints; for this power screw save the preset and run tapwright screw --preset NAME.'};
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
+    const repairs = reportRepairs(s, svc, ev as Evaluation);
     return {
-      text: svc.report(s.report.format, ev.result as never, ev.input as never, {presetName: s.preset.name, date: svc.now(), units: s.units, notes: shownNotes(s)}),
+      text: svc.report(s.report.format, ev.result as never, ev.input as never, {
+        presetName: s.preset.name,
+        date: svc.now(),
+        units: s.units,
+        notes: shownNotes(s),
+        ...(repairs ? {repairs} : {}),
+      }),
     };
   } catch (e) {
     return {why: `Cannot build the report: ${errText(e)}`};

@@ -1,0 +1,58 @@
+/**
+ * The workbench's work-order report carries the ranked repairs, and the repair
+ * marked on the Repairs screen as the repair chosen, when the hole is stripped
+ * or the check failed; a clean joint's report does not.
+ */
+import {mkdtempSync, rmSync} from 'node:fs';
+import {tmpdir} from 'node:os';
+import path from 'node:path';
+import {describe, expect, it, onTestFinished} from 'vitest';
+import {realServices} from '../../src/ui/real-services.js';
+import {reportText} from '../../src/ui/state/preset-commands.js';
+import {evaluate, evaluateRepairs} from '../../src/ui/state/evaluate.js';
+import {initialState, type WorkbenchState} from '../../src/ui/state/workbench.js';
+
+function services() {
+  const dir = mkdtempSync(path.join(tmpdir(), 'tw-report-repairs-'));
+  onTestFinished(() => rmSync(dir, {recursive: true, force: true}));
+  return realServices({configDir: dir, cwd: dir, now: () => new Date('2026-05-06T07:08:09Z')});
+}
+
+describe('report with the repair plan', () => {
+  it('the shipped demo (check fails) carries the ranked repairs and the marked one as chosen', () => {
+    const svc = services();
+    const demo = svc.presets.load(svc.defaultPreset);
+    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: demo.readOnly, values: demo.values, units: 'si', ascii: true}), screen: 'report', repairIndex: 1};
+    const ev = evaluate(s.values, svc, 'si', true);
+    expect(ev.result?.flags.some(f => f.level === 'fail')).toBe(true);
+    const plan = evaluateRepairs(s.values, svc, ev).plan!;
+    const second = plan.options[1]!;
+    const md = reportText(s, svc, ev).text ?? '';
+    expect(md).toContain('## Repair plan');
+    expect(md).toContain(`**Repair chosen:** ${second.rank} ${second.label}`);
+    expect(md).toContain('### Ranked options');
+    // The repair plan stands before the cautions and the sign-off.
+    expect(md.indexOf('## Repair plan')).toBeLessThan(md.indexOf('## Cautions'));
+    expect(md.indexOf('## Cautions')).toBeLessThan(md.indexOf('## Sign-off'));
+    const text = reportText({...s, report: {format: 'text', scroll: 0}}, svc, ev).text ?? '';
+    expect(text).toContain('REPAIR PLAN (ranked)');
+    expect(text).toContain(`Repair chosen: ${second.rank} ${second.label}`);
+    // One set of cautions at the end, not one per part.
+    expect(text.match(/qualified person's sign-off/g)?.length).toBe(1);
+    for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+  });
+
+  it('a joint that passes with an intact hole carries no repair plan', () => {
+    const svc = services();
+    const demo = svc.presets.load(svc.defaultPreset);
+    const values = structuredClone(demo.values);
+    // Longer engagement in a deeper hole: the bolt breaks first.
+    (values.joint as Record<string, unknown>).engagement = 30;
+    (values.joint as Record<string, unknown>).holeDepth = 40;
+    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: demo.readOnly, values, units: 'si', ascii: true}), screen: 'report'};
+    const ev = evaluate(s.values, svc, 'si', true);
+    expect(ev.result, JSON.stringify(ev.errors)).toBeDefined();
+    expect(ev.result!.flags.some(f => f.level === 'fail')).toBe(false);
+    expect(reportText(s, svc, ev).text).not.toContain('Repair plan');
+  });
+});
