@@ -14,6 +14,7 @@ import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/mater
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
 import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
+import {defaultSolidTable} from '../store/solid-tables.js';
 import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
@@ -68,7 +69,8 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     checkScrew: (input: ScrewInput) => checkScrew(input),
     designations,
     picks: (source, units) => picks(source, units),
-    repairs: (joint, hole) => planRepairs(joint, hole),
+    // The user's first stored solid-insert table, else the shipped demo table (as tapwright repair).
+    repairs: (joint, hole) => planRepairs(joint, hole, defaultSolidTable(store)),
     presets: {
       list: () =>
         store.list().map(p => ({

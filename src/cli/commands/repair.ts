@@ -56,9 +56,10 @@ The hole and the repair:
   --through-nut CLASS   nut class for the through-bolt option (default: matched
                         to the bolt grade); --through-nut-height L,
                         --through-nut-flats L (default: ISO 4032)
-  --solid-table FILE    your solid key-locked insert table (JSON); default: the
-                        shipped demo table (demo values: use the insert
-                        maker's data)
+  --solid-table T       solid key-locked insert table: a name from tapwright
+                        inserts list, or a JSON file; default: your first
+                        stored table, else the shipped demo table (demo
+                        values: use the insert maker's data)
   --preset NAME         joint and hole state from a saved or shipped preset
 Output:
   --format text|markdown|json   markdown: the work-order report
@@ -93,6 +94,22 @@ async function loadTable(file: string, io: CliIo): Promise<SolidInsertTable> {
   const t = parseSolidInsertTable(data);
   if (!t.ok) throw new UsageError(`--solid-table: ${t.error}`, '--solid-table');
   return t.value;
+}
+
+/**
+ * The solid-insert table: --solid-table names one of the user's stored tables
+ * (or the shipped one) or a JSON file; without it, the user's first stored
+ * table, else the shipped demo table.
+ */
+async function chooseTable(given: string | undefined, io: CliIo): Promise<SolidInsertTable> {
+  const {openPresetStore} = await import('../../store/presets.js');
+  const {configDir} = await import('../../store/paths.js');
+  const {defaultSolidTable, findSolidTable} = await import('../../store/solid-tables.js');
+  const store = openPresetStore(configDir(io.env));
+  for (const w of store.warnings()) io.err(`tapwright: ${w}\n`);
+  if (given === undefined) return defaultSolidTable(store);
+  if (given.trim() === '') throw new UsageError('--solid-table needs a table name or a file; see tapwright inserts list', '--solid-table');
+  return findSolidTable(store, given) ?? (await loadTable(given, io));
 }
 
 /** "--wall -3" -> "--wall=-3", so a negative number reaches the range check instead of the option parser. */
@@ -188,8 +205,7 @@ export const command: Command = {
       if (problem !== undefined) throw new UsageError(`--through-nut: ${problem}`, '--through-nut');
     }
     if (str(values, 'margin') !== undefined) draft.margin = joint.requiredMargin;
-    const tableFile = str(values, 'solid-table');
-    const table = tableFile === undefined ? undefined : await loadTable(tableFile, io);
+    const table = await chooseTable(str(values, 'solid-table'), io);
     const repair = RepairInputSchema.safeParse(draft);
     if (!repair.success) {
       const issue = repair.error.issues[0];
