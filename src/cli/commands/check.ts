@@ -237,7 +237,7 @@ function joinNegativeValues(args: string[]): string[] {
 }
 
 async function loadPreset(name: string, io: CliIo): Promise<{joint: JointInputDraft; notes: WorkOrderNotes}> {
-  const {resolvePreset} = await import('../../store/index.js');
+  const {resolvePreset} = await import('../../store/resolve.js');
   const p = resolvePreset(name, io.env, 'joint', m => io.err(`tapwright: ${m}\n`));
   if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
   return {joint: p.joint, notes: p.notes};

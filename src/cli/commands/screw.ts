@@ -202,7 +202,7 @@ export const command: Command = {
     const presetName = str(parseOptions(args, OPTIONS, false).values, 'preset');
     let base: Record<string, unknown> | undefined;
     if (presetName !== undefined) {
-      const {resolvePreset} = await import('../../store/index.js');
+      const {resolvePreset} = await import('../../store/resolve.js');
       const p = resolvePreset(presetName, io.env, 'screw', m => io.err(`tapwright: ${m}\n`));
       if (!p.screw) throw new UsageError(`--preset "${presetName}" has no power-screw inputs`, '--preset');
       base = {...p.screw};
