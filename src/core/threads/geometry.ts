@@ -75,14 +75,29 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
   const int = must(parseUnifiedClass(spec.toleranceInternal));
   const tpi = spec.tpi ?? IN / P;
   const lim = unifiedLimits(d / IN, tpi, ext, int);
-  if (ext.grade !== 2 || int.grade !== 2) {
+  const fromTable = lim.source.external === 'table' && lim.source.internal === 'table';
+  const computed = [
+    ...(lim.source.external === 'formula' ? [ext] : []),
+    ...(lim.source.internal === 'formula' ? [int] : []),
+  ];
+  if (computed.some(c => c.grade !== 2)) {
     notes.push(
       'Class 1A/3A/1B/3B tolerance factors (1.5, 0.75, 1.95, 0.975 x the 2A pitch-diameter tolerance) and the 3B minor-diameter rule are from memory of ASME B1.1: verify against the standard.',
     );
   }
-  notes.push(
-    'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by 0.0001 in.',
-  );
+  if (fromTable) {
+    notes.push(`Limits of size ${ext.text}/${int.text} read from the ASME B1.1 standard series limits table.`);
+  } else if (computed.length === 2) {
+    notes.push(
+      'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by 0.0001 in.',
+    );
+  } else {
+    const t = lim.source.external === 'table' ? ext : int;
+    const c = lim.source.external === 'table' ? int : ext;
+    notes.push(
+      `Class ${t.text} limits read from the ASME B1.1 standard series limits table; class ${c.text} computed from the ASME B1.1 tolerance formulas (not read from the tables, so a value may differ by 0.0001 in).`,
+    );
+  }
   return {
     spec,
     nominal: d,
@@ -94,11 +109,15 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
     stressArea,
     minorArea: (Math.PI / 4) * d3 * d3,
     limits: {external: lim.external, internal: lim.internal},
-    limitsProvenance: {
-      source: 'ASME B1.1 tolerance formulas (recalled), rounded as in the ASME B1.1 tables',
-      kind: 'formula',
-      method: 'formula',
-    },
+    limitsProvenance: fromTable
+      ? {source: 'ASME B1.1 standard series limits table', kind: 'standard', method: 'table'}
+      : computed.length === 2
+        ? {source: 'ASME B1.1 tolerance formulas (recalled), rounded as in the ASME B1.1 tables', kind: 'formula', method: 'formula'}
+        : {
+            source: 'ASME B1.1 standard series limits table for one side, ASME B1.1 tolerance formulas (recalled) for the other',
+            kind: 'formula',
+            method: 'formula',
+          },
     notes,
   };
 }
