@@ -77,7 +77,9 @@ export async function runCli(
     }
     const command = await entry.load();
     if (rest.includes('--help') || rest.includes('-h')) {
-      io.out(command.help.endsWith('\n') ? command.help : `${command.help}\n`);
+      // Every help text ends with the cautions, whatever the command.
+      const help = command.help.endsWith('\n') ? command.help : `${command.help}\n`;
+      io.out(help.includes(CAUTION_LINES[0] ?? '') ? help : `${help}\n${CAUTION_LINES.join('\n')}\n`);
       return EXIT.ok;
     }
     return await command.run(rest, io);

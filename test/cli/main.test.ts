@@ -19,6 +19,14 @@ describe('cli entry', () => {
     expect(io.stdout()).toMatch(/Exit codes/);
     expect(io.stdout()).toMatch(/qualified person/);
   });
+  it('ends every command help with the cautions', async () => {
+    const {COMMANDS} = await import('../../src/cli/commands/index.js');
+    for (const c of COMMANDS) {
+      const io = memoryIo();
+      expect(await runCli([c.name, '--help'], io)).toBe(0);
+      expect(io.stdout(), c.name).toMatch(/qualified person's sign-off/);
+    }
+  });
   it('rejects an unknown command with exit 2 and a hint', async () => {
     const io = memoryIo();
     expect(await runCli(['chek'], io)).toBe(2);
