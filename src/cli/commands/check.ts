@@ -81,50 +81,64 @@ const OPTIONS: OptionSpec = {
   ...NOTE_OPTION_SPEC,
 };
 
-const HELP = `tapwright check - one threaded joint: preload, stresses, load share, stripping, margins, flags
+const HELP = `tapwright check - one threaded joint: preload, stresses, load share,
+stripping, margins, flags
 
-Usage: tapwright check --thread M10x1.5-6H/6g --bolt 8.8 --parent S355 --engage 15 [options]
-       tapwright check --preset NAME [options that change the preset]
+Usage:
+  tapwright check --thread M10x1.5-6H/6g --bolt 8.8 --parent S355 --engage 15
+  tapwright check --preset NAME [options that change the preset]
 
 The joint
-  --thread TEXT          thread with tolerance class: M10x1.5-6H/6g, M8x1, 1/4-20 UNC-2A
-  --bolt ID              bolt grade (8.8, 10.9, 12.9, A2-70, SAE-5, ...; default 8.8)
-  --bolt-rm, --bolt-rp   custom bolt tensile strength / yield (e.g. 900MPa, 130ksi)
-  --parent ID            tapped hole: parent material (see tapwright materials)
+  --thread TEXT        thread and tolerance class: M10x1.5-6H/6g, M8x1,
+                       1/4-20 UNC-2A
+  --bolt ID            bolt grade (8.8, 10.9, 12.9, A2-70, SAE-5, ...;
+                       default 8.8)
+  --bolt-rm, --bolt-rp custom bolt tensile strength / yield (900MPa, 130ksi)
+  --parent ID          tapped hole: parent material (see tapwright materials)
   --parent-rm, --parent-shear  tapped hole: custom tensile / shear strength
-  --nut CLASS            a nut instead of a tapped hole (ISO 898-2 "8", "10"; SAE-5, ...)
-  --nut-height, --nut-flats    nut height m and width across flats s (default ISO 4032)
-  --engage LEN           engaged length from the loaded face (default for a nut: its height)
-  --chamfer LEN          length lost to the countersink or chamfer at the loaded face
-  --hole-depth LEN       tapped depth of a blind hole (the last 4 threads count as incomplete)
+  --nut CLASS          a nut instead of a tapped hole (ISO 898-2 "8", "10";
+                       SAE-5, ...)
+  --nut-height, --nut-flats    nut height m and width across flats s
+                       (default ISO 4032)
+  --engage LEN         engaged length from the loaded face (default for a nut:
+                       its height)
+  --chamfer LEN        length lost to the countersink or chamfer at the face
+  --hole-depth LEN     tapped depth of a blind hole (the last 4 threads count
+                       as incomplete)
 Tightening (one of; default --utilisation 0.9)
-  --torque T             tightening torque (40Nm, 30ft-lbf)
-  --preload F            target preload at mid friction (25kN, 5000lbf)
-  --utilisation R        von Mises utilisation of the bolt yield while tightening (0.9 or 90%)
-  --mu-thread MU         thread friction, a value or min..max (default 0.10..0.16)
-  --mu-head MU           under-head friction, a value or min..max (default 0.10..0.16)
-  --nut-factor K         use T = K F d instead of the friction coefficients
-  --bearing-diameter LEN effective bearing diameter under the head (default (dw,min + hole)/2)
-  --scatter A            tightening scatter alphaA beyond the friction range (default 1)
+  --torque T           tightening torque (40Nm, 30ft-lbf)
+  --preload F          target preload at mid friction (25kN, 5000lbf)
+  --utilisation R      von Mises utilisation of the bolt yield while
+                       tightening (0.9 or 90%)
+  --mu-thread MU       thread friction, a value or min..max (default 0.10..0.16)
+  --mu-head MU         under-head friction, a value or min..max
+                       (default 0.10..0.16)
+  --nut-factor K       use T = K F d instead of the friction coefficients
+  --bearing-diameter LEN  effective bearing diameter under the head
+                       (default (dw,min + hole)/2)
+  --scatter A          tightening scatter alphaA beyond the friction range
+                       (default 1)
 Loads and margins
-  --service-load F       external axial load on the bolt, taken in full
-  --margin M             required stripping margin on bolt break (default 1.0)
+  --service-load F     external axial load on the bolt, taken in full
+  --margin M           required stripping margin on bolt break (default 1.0)
 Output
-  --units si|us          display units; a bare number is read in these units (mm, N, N·m, MPa
-                         or in, lbf, ft·lbf, ksi); JSON is always SI
+  --units si|us        display units; a bare number is read in these units
+                       (mm, N, N·m, MPa or in, lbf, ft·lbf, ksi); JSON is SI
   --format text|markdown|json   (--json is short for --format json)
-  --ascii                plain ASCII text
+  --ascii              plain ASCII text
 Work order, for --format markdown (default: the notes of the --preset)
-  --asset TEXT           asset tag of the machine
-  --location TEXT        where it is
-  --work-order TEXT      work-order number
-  --note TEXT            free text under the work-order fields
-                         each replaces the preset's entry; empty clears it
+  --asset TEXT         asset tag of the machine
+  --location TEXT      where it is
+  --work-order TEXT    work-order number
+  --note TEXT          free text under the work-order fields
+                       each replaces the preset's entry; empty clears it
 
-Exit codes: 0 no failed check; 3 computed, but a check failed; 2 bad input or usage.
-Methods: VDI 2230 Part 1 tightening; Shigley, Mechanical Engineering Design 9th ed. section 8-2
-thread stresses; spring-chain load share; FED-STD-H28/2B stripping at the least-material limits;
-Alexander (1977) / VDI 2230 engagement.
+Exit codes: 0 no failed check; 3 computed, but a check failed; 2 bad input
+or usage.
+Methods: VDI 2230 Part 1 tightening; Shigley, Mechanical Engineering Design
+9th ed. section 8-2 thread stresses; spring-chain load share; FED-STD-H28/2B
+stripping at the least-material limits; Alexander (1977) / VDI 2230
+engagement.
 
 ${CAUTION_LINES.join('\n')}
 `;
@@ -267,7 +281,7 @@ export const command: Command = {
       input = validate(draft, units);
       result = checkJoint(input);
     } catch (e) {
-      if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.message}`, optionFor(e.field));
+      if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.messageIn(units)}`, optionFor(e.field));
       throw e;
     }
     if (format === 'json') {
