@@ -178,10 +178,10 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       body = <ReportScreen state={state} ev={ev} svc={svc} width={columns} height={bodyH} />;
       break;
     case 'repairs':
-      body = <RepairsScreen rep={evaluateRepairs(shownValues(state), svc, ev)} index={state.repairIndex} units={state.units} holeSummary={holeSummary(state, t)} width={columns} height={bodyH} />;
+      body = <RepairsScreen rep={evaluateRepairs(shownValues(state), svc, ev, state.units)} index={state.repairIndex} units={state.units} holeSummary={holeSummary(state, t)} width={columns} height={bodyH} />;
       break;
     case 'help': {
-      const plan = evaluateRepairs(shownValues(state), svc, ev).plan;
+      const plan = evaluateRepairs(shownValues(state), svc, ev, state.units).plan;
       body = <HelpScreen ascii={t.ascii} sources={[...(ev.result?.sources ?? []), ...(sev?.result?.sources ?? [])]} rankingRule={plan?.rankingRule} scroll={state.helpScroll} width={columns} height={bodyH} />;
       break;
     }

@@ -70,7 +70,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     designations,
     picks: (source, units) => picks(source, units),
     // The user's first stored solid-insert table, else the shipped demo table (as tapwright repair).
-    repairs: (joint, hole) => planRepairs(joint, hole, defaultSolidTable(store)),
+    repairs: (joint, hole, units) => planRepairs(joint, hole, defaultSolidTable(store), units ?? 'si'),
     presets: {
       list: () =>
         store.list().map(p => ({

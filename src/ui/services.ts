@@ -89,7 +89,7 @@ export interface WorkbenchServices {
   /** The power-screw check; throws on input it cannot compute. Undefined: no power-screw mode in this build. */
   checkScrew?: (input: ScrewInput) => ScrewResult;
   /** The ranked repair list; undefined while the repair planner is not in this build. */
-  repairs?: (joint: JointInput, hole: RepairInput) => RepairPlan;
+  repairs?: (joint: JointInput, hole: RepairInput, units?: 'si' | 'us') => RepairPlan;
   presets: PresetPort;
   draft: DraftPort;
   /** The work-order report as text or Markdown; undefined while the report module is not in this build. */

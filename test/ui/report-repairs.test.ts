@@ -56,3 +56,19 @@ describe('report with the repair plan', () => {
     expect(reportText(s, svc, ev).text).not.toContain('Repair plan');
   });
 });
+
+describe('the workbench in US units', () => {
+  it('writes flag messages and repair reasons in inch units, like the CLI reports', () => {
+    const svc = services();
+    const demo = svc.presets.load(svc.defaultPreset);
+    const us = evaluate(demo.values, svc, 'us', true);
+    const si = evaluate(demo.values, svc, 'si', true);
+    const strip = (e: typeof us) => e.result!.flags.find(f => f.code === 'strips-before-break')!.message;
+    expect(strip(si)).toMatch(/kN/);
+    expect(strip(us)).toMatch(/lbf/);
+    expect(strip(us)).not.toMatch(/kN/);
+    const notes = (p: ReturnType<typeof evaluateRepairs>) => p.plan!.options.flatMap(o => [o.reason ?? '', ...o.notes]).join(' ');
+    expect(notes(evaluateRepairs(demo.values, svc, si, 'si'))).toMatch(/\d mm/);
+    expect(notes(evaluateRepairs(demo.values, svc, us, 'us'))).not.toMatch(/\d mm\b/);
+  });
+});

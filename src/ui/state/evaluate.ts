@@ -6,6 +6,8 @@
 import {JointInputSchema, type JointInput} from '../../core/joint/input.js';
 import {RepairInputSchema, type RepairInput} from '../../core/repair/input.js';
 import type {CheckResult} from '../../core/joint/result.js';
+import {flagsInUnits} from '../../core/joint/index.js';
+import {JointInputError} from '../../core/joint/errors.js';
 import type {UnitSystem} from '../../core/units.js';
 import type {RepairPlan, WorkbenchServices} from '../services.js';
 import {FIELDS, SCREW_STEPS, STEPS, fieldBounds, fieldById, getValue, visibleFields, type FormValues} from './fields.js';
@@ -90,9 +92,11 @@ function compute(values: FormValues, svc: WorkbenchServices, units: UnitSystem, 
     return {errors};
   }
   try {
-    return {input: parsed.data, result: svc.check(parsed.data), errors};
+    const result = svc.check(parsed.data);
+    // Flag messages in the units on screen (the core writes them in SI).
+    return {input: parsed.data, result: units === 'si' ? result : {...result, flags: flagsInUnits(result, parsed.data, units)}, errors};
   } catch (e) {
-    const msg = e instanceof Error ? e.message : String(e);
+    const msg = e instanceof JointInputError ? e.messageIn(units) : e instanceof Error ? e.message : String(e);
     const id = fieldOfError(e);
     if (id) {
       const f = fieldById(id);
@@ -108,11 +112,16 @@ export interface RepairEvaluation {
   available: boolean;
 }
 
-const repairCache = new WeakMap<FormValues, RepairEvaluation>();
+const repairCache = new WeakMap<FormValues, Map<UnitSystem, RepairEvaluation>>();
 
-/** The ranked repairs for the current joint and hole state. */
-export function evaluateRepairs(values: FormValues, svc: WorkbenchServices, ev: Evaluation): RepairEvaluation {
-  const hit = repairCache.get(values);
+/** The ranked repairs for the current joint and hole state; reasons and notes in `units`. */
+export function evaluateRepairs(values: FormValues, svc: WorkbenchServices, ev: Evaluation, units: UnitSystem = 'si'): RepairEvaluation {
+  let perUnits = repairCache.get(values);
+  if (!perUnits) {
+    perUnits = new Map();
+    repairCache.set(values, perUnits);
+  }
+  const hit = perUnits.get(units);
   if (hit) return hit;
   let out: RepairEvaluation;
   if (!svc.repairs) out = {available: false};
@@ -124,13 +133,13 @@ export function evaluateRepairs(values: FormValues, svc: WorkbenchServices, ev: 
       out = {available: true, error: `Hole state: ${String(issue?.path[0] ?? '')} ${issue?.message ?? ''}`};
     } else {
       try {
-        out = {available: true, plan: svc.repairs(ev.input, hole.data as RepairInput)};
+        out = {available: true, plan: svc.repairs(ev.input, hole.data as RepairInput, units)};
       } catch (e) {
         out = {available: true, error: `Cannot plan repairs: ${e instanceof Error ? e.message : String(e)}`};
       }
     }
   }
-  repairCache.set(values, out);
+  perUnits.set(units, out);
   return out;
 }
 

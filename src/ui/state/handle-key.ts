@@ -123,7 +123,7 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
     case 'list.down': {
       const d = command === 'list.up' ? -1 : 1;
       if (s.screen === 'repairs') {
-        const n = evaluateRepairs(shownValues(s), svc, evaluate(shownValues(s), svc, s.units, s.ascii)).plan?.options.length ?? 0;
+        const n = evaluateRepairs(shownValues(s), svc, evaluate(shownValues(s), svc, s.units, s.ascii), s.units).plan?.options.length ?? 0;
         return {...s, repairIndex: Math.max(0, Math.min(n - 1, s.repairIndex + d))};
       }
       const n = filteredPresets(s, svc).length;
@@ -163,7 +163,7 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       const clamp = (x: number, lines: string[]) => Math.max(0, Math.min(x, wrapLines(lines, s.size.columns).length - rows));
       if (s.screen === 'help') {
         const ev = evaluate(shownValues(s), svc, s.units, s.ascii);
-        const rule = evaluateRepairs(shownValues(s), svc, ev).plan?.rankingRule;
+        const rule = evaluateRepairs(shownValues(s), svc, ev, s.units).plan?.rankingRule;
         return {...s, helpScroll: clamp(s.helpScroll + d, helpLines({ascii: s.ascii, sources: ev.result?.sources ?? [], rankingRule: rule}))};
       }
       const text = reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii)).text ?? '';

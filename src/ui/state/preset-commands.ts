@@ -100,7 +100,7 @@ function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation
   const stripped = (s.values.hole as {holeState?: unknown} | undefined)?.holeState === 'stripped';
   const failed = ev.result?.flags.some(f => f.level === 'fail') ?? false;
   if (!stripped && !failed) return undefined;
-  const plan = evaluateRepairs(s.values, svc, ev).plan;
+  const plan = evaluateRepairs(s.values, svc, ev, s.units).plan;
   if (!plan || plan.options.length === 0) return undefined;
   const marked = plan.options[Math.min(s.repairIndex, plan.options.length - 1)];
   return {plan, ...(marked ? {chosen: marked.rank} : {})};
