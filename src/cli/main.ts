@@ -4,7 +4,7 @@
  */
 import {COMMANDS} from './commands/index.js';
 import {EXIT, UsageError, type CliIo} from './io.js';
-import {CAUTION_LINES} from '../core/cautions.js';
+import {CAUTION_LINES, cautionText} from '../core/cautions.js';
 import {VERSION} from '../version.js';
 
 export function topHelp(): string {
@@ -13,7 +13,7 @@ export function topHelp(): string {
     'tapwright - workbench for threaded joints',
     '',
     'Usage:',
-    '  tapwright                     open the interactive workbench (needs a terminal)',
+    '  tapwright                     open the interactive workbench (in a terminal)',
     '  tapwright <command> [options] run one command; see tapwright <command> --help',
     '',
     'Commands:',
@@ -25,10 +25,11 @@ export function topHelp(): string {
     '  --preset NAME  open the workbench on a saved or shipped preset',
     '  --ascii        workbench with ASCII borders and symbols',
     '',
-    'Exit codes: 0 ok; 2 bad input or usage; 3 computed, but a check failed; 1 internal error.',
+    'Exit codes: 0 ok; 2 bad input or usage; 3 computed, but a check failed;',
+    '1 internal error.',
     'JSON output (--json) is always in SI units: mm, N, MPa, N·m.',
     '',
-    ...CAUTION_LINES,
+    cautionText(80),
     '',
   ].join('\n');
 }
@@ -77,9 +78,10 @@ export async function runCli(
     }
     const command = await entry.load();
     if (rest.includes('--help') || rest.includes('-h')) {
-      // Every help text ends with the cautions, whatever the command.
+      // Every help text ends with the cautions, whatever the command, wrapped to 80 columns.
       const help = command.help.endsWith('\n') ? command.help : `${command.help}\n`;
-      io.out(help.includes(CAUTION_LINES[0] ?? '') ? help : `${help}\n${CAUTION_LINES.join('\n')}\n`);
+      const raw = CAUTION_LINES.join('\n');
+      io.out(help.includes(raw) ? help.replace(raw, cautionText(80)) : `${help}\n${cautionText(80)}\n`);
       return EXIT.ok;
     }
     return await command.run(rest, io);

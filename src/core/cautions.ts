@@ -11,3 +11,20 @@ export const CAUTION_LINES: readonly string[] = [
   'Lifting equipment, pressure boundaries and safety-critical joints need a qualified person\'s sign-off.',
   'Check material strengths against the certificates; typical values here are marked as such.',
 ];
+
+/** The cautions word-wrapped to `width` columns (continuation lines indented by two spaces). */
+export function cautionText(width = 80): string {
+  const out: string[] = [];
+  for (const line of CAUTION_LINES) {
+    let current = '';
+    for (const word of line.split(' ')) {
+      const next = current === '' ? word : `${current} ${word}`;
+      if (next.length > width && current !== '') {
+        out.push(current);
+        current = `  ${word}`;
+      } else current = next;
+    }
+    out.push(current);
+  }
+  return out.join('\n');
+}

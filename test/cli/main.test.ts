@@ -25,7 +25,11 @@ describe('cli entry', () => {
       const io = memoryIo();
       expect(await runCli([c.name, '--help'], io)).toBe(0);
       expect(io.stdout(), c.name).toMatch(/qualified person's sign-off/);
+      for (const line of io.stdout().split('\n')) expect(line.length, `${c.name}: ${line}`).toBeLessThanOrEqual(80);
     }
+    const top = memoryIo();
+    await runCli(['--help'], top);
+    for (const line of top.stdout().split('\n')) expect(line.length, line).toBeLessThanOrEqual(80);
   });
   it('rejects an unknown command with exit 2 and a hint', async () => {
     const io = memoryIo();

@@ -11,11 +11,11 @@ export interface CommandEntry {
 }
 
 export const COMMANDS: CommandEntry[] = [
-  {name: 'check', summary: 'compute a joint: preload, stresses, stripping, margins, flags', load: async () => (await import('./check.js')).command},
+  {name: 'check', summary: 'one joint: preload, stresses, stripping, margins, flags', load: async () => (await import('./check.js')).command},
   {name: 'repair', summary: 'ranked repairs for a weak or stripped thread', load: async () => (await import('./repair.js')).command},
-  {name: 'screw', summary: 'power screws (lead screws and nuts): torque, efficiency, stresses, buckling', load: async () => (await import('./screw.js')).command},
+  {name: 'screw', summary: 'lead screw and nut: torque, efficiency, stresses, buckling', load: async () => (await import('./screw.js')).command},
   {name: 'threads', summary: 'geometry and limits of size of a thread designation', load: async () => (await import('./threads.js')).command},
-  {name: 'materials', summary: 'bolt grades, nut classes and parent materials with their sources', load: async () => (await import('./materials.js')).command},
-  {name: 'inserts', summary: 'solid key-locked insert tables: the shipped demo table and your own', load: async () => (await import('./inserts.js')).command},
-  {name: 'presets', summary: 'saved joints: list, show, save, rename, delete, import, export', load: async () => (await import('./presets.js')).command},
+  {name: 'materials', summary: 'bolt grades, nut classes, parent materials, with sources', load: async () => (await import('./materials.js')).command},
+  {name: 'inserts', summary: 'solid key-locked insert tables: the demo one and yours', load: async () => (await import('./inserts.js')).command},
+  {name: 'presets', summary: 'saved joints: list, show, save, rename, delete, import', load: async () => (await import('./presets.js')).command},
 ];

@@ -25,11 +25,12 @@ Usage:
   tapwright inserts delete NAME --yes
 
 The shipped table "demo solid key-locked inserts" holds invented sizes
-(${DEMO_TABLE_WARNING}). Keep the sizes of the inserts you stock as a
-table of your own: export the demo table, edit it with the maker's data, set
-"provenance" to {"kind": "maker", "source": "<catalogue and date>"}, give it a
-new "name" and import it. The repair planner and the workbench use your first
-table by name, else the demo table; tapwright repair --solid-table NAME|FILE
+(${DEMO_TABLE_WARNING}).
+Keep the sizes of the inserts you stock as a table of your own: export
+the demo table, edit it with the maker's data, set "provenance" to
+{"kind": "maker", "source": "<catalogue and date>"}, give it a new "name"
+and import it. The repair planner and the workbench use your first table
+by name, else the demo table; tapwright repair --solid-table NAME|FILE
 picks another.
 
 A table is JSON: {"kind": "solid-key-locked-inserts", "version": 1, "name",
@@ -43,7 +44,7 @@ Options:
   --json        machine-readable output (SI units)
   --overwrite   import: replace your table of the same name
   --force       export: replace an existing file
-  --yes         delete: needed, so a table is never removed by a mistyped command
+  --yes         delete: needed, so a mistyped command never removes a table
   --help        this text
 `;
 
