@@ -19,6 +19,8 @@ interface UnitDef {
   factor: number;
   /** Accepted spellings, lower-case, without spaces. */
   names: string[];
+  /** How messages write the unit (default: the first name). */
+  label?: string;
 }
 
 const UNITS: Record<Dimension, UnitDef[]> = {
@@ -32,23 +34,23 @@ const UNITS: Record<Dimension, UnitDef[]> = {
     {factor: IN_MM / 1000, names: ['thou', 'mil']},
   ],
   force: [
-    {factor: 1, names: ['n']},
-    {factor: 1000, names: ['kn']},
-    {factor: 1e6, names: ['mn']},
+    {factor: 1, names: ['n'], label: 'N'},
+    {factor: 1000, names: ['kn'], label: 'kN'},
+    {factor: 1e6, names: ['mn'], label: 'MN'},
     {factor: LBF_N, names: ['lbf', 'lb', 'lbs']},
     {factor: LBF_N * 1000, names: ['kip', 'kips', 'klbf']},
   ],
   torque: [
-    {factor: 1, names: ['nm', 'n·m', 'n.m', 'n-m', 'n*m']},
-    {factor: 0.001, names: ['nmm', 'n·mm', 'n.mm', 'n-mm', 'n*mm']},
-    {factor: 1000, names: ['knm', 'kn·m', 'kn.m', 'kn-m']},
+    {factor: 1, names: ['nm', 'n·m', 'n.m', 'n-m', 'n*m'], label: 'Nm'},
+    {factor: 0.001, names: ['nmm', 'n·mm', 'n.mm', 'n-mm', 'n*mm'], label: 'Nmm'},
+    {factor: 1000, names: ['knm', 'kn·m', 'kn.m', 'kn-m'], label: 'kNm'},
     {factor: LBF_N * IN_MM * 12 / 1000, names: ['ft-lbf', 'ftlbf', 'ft-lb', 'ftlb', 'lbf-ft', 'lbfft', 'lb-ft', 'lbft', 'ft·lbf', 'lbf·ft']},
     {factor: LBF_N * IN_MM / 1000, names: ['in-lbf', 'inlbf', 'in-lb', 'inlb', 'lbf-in', 'lbfin', 'lb-in', 'lbin', 'in·lbf', 'lbf·in']},
   ],
   stress: [
-    {factor: 1, names: ['mpa', 'n/mm2', 'n/mm^2', 'n/mm²']},
-    {factor: 1000, names: ['gpa']},
-    {factor: 0.001, names: ['kpa']},
+    {factor: 1, names: ['mpa', 'n/mm2', 'n/mm^2', 'n/mm²'], label: 'MPa'},
+    {factor: 1000, names: ['gpa'], label: 'GPa'},
+    {factor: 0.001, names: ['kpa'], label: 'kPa'},
     {factor: LBF_N / (IN_MM * IN_MM), names: ['psi']},
     {factor: (LBF_N / (IN_MM * IN_MM)) * 1000, names: ['ksi']},
   ],
@@ -87,8 +89,8 @@ const DISPLAY: Record<UnitSystem, Record<Dimension, {unit: string; ascii: string
 /** Unit names accepted for a dimension, for messages. */
 export function acceptedUnits(dimension: Dimension): string {
   return UNITS[dimension]
-    .map(u => u.names[0])
-    .filter(n => n !== '')
+    .map(u => u.label ?? u.names[0])
+    .filter(n => n !== undefined && n !== '')
     .join(', ');
 }
 

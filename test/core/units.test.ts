@@ -42,3 +42,12 @@ describe('units', () => {
     expect(toDisplay(1.3558179483314004, 'torque', 'us')).toBeCloseTo(1, 9);
   });
 });
+
+describe('unit names in messages', () => {
+  it('writes force, torque and stress units as the trade writes them, not as lower-case look-alikes', async () => {
+    const {acceptedUnits} = await import('../../src/core/units.js');
+    expect(acceptedUnits('force')).toBe('N, kN, MN, lbf, kip');
+    expect(acceptedUnits('torque')).toMatch(/^Nm, Nmm, kNm, ft-lbf, in-lbf$/);
+    expect(acceptedUnits('stress')).toMatch(/^MPa, GPa, kPa, psi, ksi$/);
+  });
+});
