@@ -74,6 +74,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
   {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
   {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},
+  {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', description: 'On a friction field of the power screw: pick a row of the published friction table'},
   {command: 'mode.toggle', keys: [c('m')], context: 'joint', hint: 'joint/screw', description: 'Switch between a threaded joint and a power screw (lead screw and nut)'},
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},

@@ -8,7 +8,7 @@ import path from 'node:path';
 import {checkJoint} from '../core/joint/index.js';
 import type {JointInput} from '../core/joint/input.js';
 import {planRepairs} from '../core/repair/index.js';
-import {checkScrew} from '../core/screw/index.js';
+import {checkScrew, THREAD_FRICTION, COLLAR_FRICTION, THREAD_FRICTION_SOURCE, COLLAR_FRICTION_SOURCE} from '../core/screw/index.js';
 import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
@@ -39,6 +39,22 @@ function picks(source: PickSource, units: UnitSystem): PickItem[] {
       return {id, name: first.name, detail: mine.map(detail).join('; '), provenance: first.provenance};
     });
   };
+  // Friction of power screws: the rows of the published tables; the entry sets the number field.
+  if (source === 'screwThreadFriction') {
+    return THREAD_FRICTION.map(p => ({
+      id: p.id,
+      name: `${p.screw} screw, ${p.nut} nut`,
+      detail: `f ${p.min.toFixed(2)} to ${p.max.toFixed(2)}`,
+      provenance: THREAD_FRICTION_SOURCE,
+      value: {min: p.min, max: p.max},
+    }));
+  }
+  if (source === 'screwCollarFriction') {
+    return COLLAR_FRICTION.flatMap(p => [
+      {id: p.id, name: `${p.combination}, running`, detail: `fc ${p.running.toFixed(2)}`, provenance: COLLAR_FRICTION_SOURCE, value: p.running},
+      {id: `${p.id}:starting`, name: `${p.combination}, starting`, detail: `fc ${p.starting.toFixed(2)}`, provenance: COLLAR_FRICTION_SOURCE, value: p.starting},
+    ]);
+  }
   if (source === 'boltGrade') return group(listBoltGrades(), g => `${sizeText(g)}Rm ${s(g.rmMin)}, Rp0.2 ${s(g.rpMin)}`);
   if (source === 'nutClass') return group(listNutClasses(), n => `${sizeText(n)}Rm ${s(n.rm)}`);
   return group(listParentMaterials(), m => `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`);

@@ -20,6 +20,8 @@ export interface PickItem {
   /** The key numbers in working units, already formatted, e.g. "Rm 800 MPa, Rp0.2 640 MPa". */
   detail: string;
   provenance: Provenance;
+  /** The field value this entry sets, when it is not the id (a friction range from a table). */
+  value?: unknown;
 }
 
 export interface PresetEntry {

@@ -8,7 +8,8 @@ export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): Wo
   if (!s.picker) return s;
   const items = pickerItems(s, svc);
   const f = fieldById(s.picker.fieldId);
-  const chosen = s.picker.index >= 0 ? items[s.picker.index]?.value : f.kind === 'thread' ? s.picker.filter.trim() : undefined;
+  const marked = s.picker.index >= 0 ? items[s.picker.index] : undefined;
+  const chosen = marked ? (marked.item?.value ?? marked.value) : f.kind === 'thread' ? s.picker.filter.trim() : undefined;
   if (chosen === undefined || chosen === '') return {...s, preview: undefined};
   return {...s, preview: setValue(s.values, f.id, chosen)};
 }
@@ -41,6 +42,13 @@ export function startEdit(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices
   }
   const buffer = typed ?? editText(f, value, s.units);
   return withEditPreview({...s, message: undefined, edit: {fieldId: f.id, buffer, original: value}});
+}
+
+/** Open the field's published table (t on a friction field of the power screw). */
+export function startTablePick(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices): WorkbenchState {
+  if (!f.table) return {...s, message: info(`${f.label}: no published table to pick from; type a value`)};
+  const value = getValue(s.values, f.id) ?? fieldBounds(f.id).default;
+  return withPickerPreview({...s, message: undefined, picker: {fieldId: f.id, filter: '', index: 0, original: value, table: true}}, svc);
 }
 
 export function commitEdit(s: WorkbenchState): WorkbenchState {

@@ -43,7 +43,7 @@ export const SCREW_STEPS: readonly {id: StepId; title: string}[] = [
 export const stepsFor = (mode: Mode) => (mode === 'screw' ? SCREW_STEPS : STEPS);
 
 export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
-export type PickSource = 'boltGrade' | 'parent' | 'nutClass';
+export type PickSource = 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction';
 
 export interface FieldDef {
   /** Key in FormValues.joint, or "hole.<key>" for FormValues.hole. */
@@ -54,6 +54,8 @@ export interface FieldDef {
   dimension?: Dimension;
   choices?: readonly string[];
   pick?: PickSource;
+  /** A published table whose rows can be picked for this number field (t on the field). */
+  table?: PickSource;
   /** May be left empty (the core then uses its default or leaves it out). */
   optional: boolean;
   /** Whole numbers only (shown without decimals). */
@@ -157,10 +159,10 @@ export const FIELDS: readonly FieldDef[] = [
     help: 'Loss of nut-thread thickness by wear; 0 for a new nut.'},
   {id: 'screw.speed', label: 'Sliding speed', step: 'screw-nut', kind: 'quantity', dimension: 'speed', optional: true, empty: 'not given',
     help: 'Sliding speed at the thread, for the allowable bearing pressure; 3m/min accepted.'},
-  {id: 'screw.muThread', label: 'Thread friction', step: 'screw-friction', kind: 'range', optional: true,
-    help: 'Thread friction f as one value or min..max, e.g. 0.10..0.15.'},
-  {id: 'screw.muCollar', label: 'Collar friction', step: 'screw-friction', kind: 'ratio', optional: true,
-    help: 'Thrust-collar friction fc; 0 with a rolling thrust bearing.'},
+  {id: 'screw.muThread', label: 'Thread friction', step: 'screw-friction', kind: 'range', optional: true, table: 'screwThreadFriction',
+    help: 'Thread friction f as one value or min..max, e.g. 0.10..0.15; t picks a row of Shigley Table 8-5.'},
+  {id: 'screw.muCollar', label: 'Collar friction', step: 'screw-friction', kind: 'ratio', optional: true, table: 'screwCollarFriction',
+    help: 'Thrust-collar friction fc; 0 with a rolling thrust bearing; t picks a row of Shigley Table 8-6.'},
   {id: 'screw.collarDiameter', label: 'Collar mean dia', step: 'screw-friction', kind: 'quantity', dimension: 'length', optional: true,
     help: 'Mean diameter of the thrust collar; 0 = no collar friction.'},
 ];

@@ -7,7 +7,7 @@ import {wrapLines} from '../screens/scroll-view.js';
 import {helpLines} from '../screens/help-screen.js';
 import {STEPS, fieldById, setValue, type Mode} from './fields.js';
 import {evaluate, evaluateRepairs} from './evaluate.js';
-import {commitEdit, go, moveField, moveStep, startEdit, withEditPreview, withPickerPreview} from './edit-commands.js';
+import {commitEdit, go, moveField, moveStep, startEdit, startTablePick, withEditPreview, withPickerPreview} from './edit-commands.js';
 import {cancelNotes, setNoteBuffer, startNotes} from './note-commands.js';
 import {defaultReportPath, loadPreset, markedPreset, reportText, runPrompt, savePreset, slug, writeReport} from './preset-commands.js';
 import {contextsOf, currentField, errText, fail, filteredPresets, info, pickerItems, shownValues, snapshot, type WorkbenchState} from './workbench.js';
@@ -49,6 +49,8 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       return moveStep(s, -1);
     case 'field.edit':
       return f ? startEdit(s, f, svc) : s;
+    case 'field.table':
+      return f ? startTablePick(s, f, svc) : s;
     case 'field.type':
       return f && (f.kind === 'quantity' || f.kind === 'ratio' || f.kind === 'range') ? startEdit(s, f, svc, ev.char) : s;
     case 'field.clear':
@@ -112,8 +114,9 @@ export function handleKey(s0: WorkbenchState, ev: KeyEvent, svc: WorkbenchServic
       const p = s.picker!;
       const field = fieldById(p.fieldId);
       const items = pickerItems(s, svc);
-      const value = p.index >= 0 ? items[p.index]?.value : p.filter.trim();
-      if (!value) return {...s, message: fail(`${field.label}: nothing matches "${p.filter}"; Backspace to widen, Esc to keep the old value`)};
+      const marked = p.index >= 0 ? items[p.index] : undefined;
+      const value = marked ? (marked.item?.value ?? marked.value) : p.filter.trim();
+      if (value === undefined || value === '') return {...s, message: fail(`${field.label}: nothing matches "${p.filter}"; Backspace to widen, Esc to keep the old value`)};
       return {...s, values: setValue(s.values, field.id, value), picker: undefined, preview: undefined, message: undefined};
     }
     case 'pick.cancel':

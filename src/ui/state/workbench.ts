@@ -25,6 +25,8 @@ export interface PickerState {
   /** Marked entry; -1 = the text as typed (thread only). */
   index: number;
   original: unknown;
+  /** Picking a row of the field's published table (FieldDef.table) for a number field. */
+  table?: boolean;
 }
 
 export type PromptKind = 'saveAs' | 'rename' | 'duplicate' | 'import' | 'export' | 'search' | 'reportPath' | 'note';
@@ -147,6 +149,13 @@ export const errText = (e: unknown): string => (e instanceof Error ? e.message :
 export function pickerItems(s: WorkbenchState, svc: WorkbenchServices): {label: string; value: string; item?: PickItem}[] {
   if (!s.picker) return [];
   const f = fieldById(s.picker.fieldId);
+  if (s.picker.table && f.table) {
+    const q = s.picker.filter.toLowerCase();
+    return svc
+      .picks(f.table, s.units)
+      .filter(p => q === '' || p.id.toLowerCase().includes(q) || p.name.toLowerCase().includes(q))
+      .map(p => ({label: `${p.name}  ${p.detail}`, value: p.id, item: p}));
+  }
   if (f.kind === 'thread') return svc.designations(s.picker.filter, 8).map(d => ({label: d, value: d}));
   const q = s.picker.filter.toLowerCase();
   return svc
