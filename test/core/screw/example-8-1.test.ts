@@ -8,7 +8,8 @@ import {checkScrew, ScrewInputSchema} from '../../../src/core/screw/index.js';
  *
  * The statement and the start of the solution, part (a) (depth = width = p/2 = 2 mm,
  * dm = 32 - 4/2 = 30 mm, dr = d - p), were read in a stored copy of p. 419. The printed
- * answers of parts (b) to (h) are on the next page: book answers not confirmed here.
+ * answers of parts (b) to (h) are on the next page and were not read here; the last test
+ * checks them as recalled (from memory), to the digits the book prints.
  * Every expected value below is computed by hand from the book's equations (the
  * arithmetic is shown), independently of the code under test.
  *
@@ -133,5 +134,22 @@ describe('Shigley 9th ed. Example 8-1 (square thread with collar)', () => {
     const PL = (6400 * (f * Math.cos(lam) - Math.sin(lam))) / (Math.cos(lam) + f * Math.sin(lam));
     expect(r.torque.raiseThread).toBeCloseTo((PR * 15) / 1000, 9);
     expect(r.torque.lowerThread).toBeCloseTo((PL * 15) / 1000, 9);
+  });
+
+  it("matches the book's printed answers to the digits printed (from memory, not read here)", () => {
+    // Shigley 9th ed. Example 8-1 answers as recalled (from memory): (b) TR = 15.94 + 10.24 = 26.18 N·m,
+    // TL = -0.466 + 10.24 = 9.77 N·m; (c) e = 0.311; (d) tau = 6.07 MPa, sigma = -10.39 MPa;
+    // (e) sigma_B = -12.9 MPa; (f) sigma_b = 41.5 MPa; (h) sigma' = 48.7 MPa, tau_max = 27.3 MPa.
+    expect(r.torque.raiseThread.toFixed(2)).toBe('15.94');
+    expect(r.torque.raise.toFixed(2)).toBe('26.18');
+    expect(r.torque.lowerThread.toFixed(3)).toBe('-0.466');
+    expect(r.torque.lower.toFixed(2)).toBe('9.77');
+    expect(r.efficiency.toFixed(3)).toBe('0.311');
+    expect(r.stress.body.torsion.toFixed(2)).toBe('6.07');
+    expect(r.stress.body.axial.toFixed(2)).toBe('-10.39');
+    expect(r.stress.firstThread.bearing.toFixed(1)).toBe('-12.9');
+    expect(r.stress.firstThread.bending.toFixed(1)).toBe('41.5');
+    expect(r.stress.firstThread.vonMisesTextbook.toFixed(1)).toBe('48.7');
+    expect(r.stress.firstThread.maxShearTextbook.toFixed(1)).toBe('27.3');
   });
 });
