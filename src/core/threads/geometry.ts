@@ -50,25 +50,24 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
         : `Special thread: ${spec.tpi ?? ''} threads per inch is not in the UNC, UNF or UNEF series for ${spec.sizeLabel} in (ASME B1.1 UN special).`,
     );
   }
+  // The basic profile values both families share.
+  const basic = (stressArea: number) => ({
+    spec,
+    nominal: d,
+    pitch: P,
+    fundamentalHeight: H,
+    pitchDiameter: d2,
+    minorDiameterExternal: d3,
+    minorDiameterInternal: D1,
+    stressArea,
+    minorArea: (Math.PI / 4) * d3 * d3,
+  });
   if (spec.family === 'metric') {
     const stressArea = (Math.PI / 4) * ((d2 + d3) / 2) ** 2;
     const ext = must(parseMetricClass(spec.toleranceExternal, 'external'));
     const int = must(parseMetricClass(spec.toleranceInternal, 'internal'));
     const lim = metricLimits(d, P, ext, int);
-    return {
-      spec,
-      nominal: d,
-      pitch: P,
-      fundamentalHeight: H,
-      pitchDiameter: d2,
-      minorDiameterExternal: d3,
-      minorDiameterInternal: D1,
-      stressArea,
-      minorArea: (Math.PI / 4) * d3 * d3,
-      limits: {external: lim.external, internal: lim.internal},
-      limitsProvenance: lim.provenance,
-      notes: [...notes, ...lim.notes],
-    };
+    return {...basic(stressArea), limits: {external: lim.external, internal: lim.internal}, limitsProvenance: lim.provenance, notes: [...notes, ...lim.notes]};
   }
   const stressArea = 0.7854 * (d - 0.9743 * P) ** 2;
   const ext = must(parseUnifiedClass(spec.toleranceExternal));
@@ -99,15 +98,7 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
     );
   }
   return {
-    spec,
-    nominal: d,
-    pitch: P,
-    fundamentalHeight: H,
-    pitchDiameter: d2,
-    minorDiameterExternal: d3,
-    minorDiameterInternal: D1,
-    stressArea,
-    minorArea: (Math.PI / 4) * d3 * d3,
+    ...basic(stressArea),
     limits: {external: lim.external, internal: lim.internal},
     limitsProvenance: fromTable
       ? {source: 'ASME B1.1 standard series limits table', kind: 'standard', method: 'table'}
