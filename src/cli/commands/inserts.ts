@@ -3,17 +3,17 @@
  * offers. The shipped table is demo data; a user keeps the insert maker's
  * sizes as a table of their own in the preset store.
  */
-import {readFile} from 'node:fs/promises';
 import {writeFileSync} from 'node:fs';
 import path from 'node:path';
 import type {Command} from '../command.js';
-import {EXIT, UsageError, type CliIo} from '../io.js';
+import {EXIT, UsageError} from '../io.js';
 import {parseOptions} from '../args.js';
 import {configDir} from '../../store/paths.js';
 import {openPresetStore} from '../../store/presets.js';
 import {allSolidTables, defaultSolidTable, findSolidTable} from '../../store/solid-tables.js';
-import {parseSolidInsertTable, DEMO_SOLID_INSERTS, DEMO_TABLE_WARNING, type SolidInsertTable} from '../../core/repair/index.js';
-import {MAX_IMPORT_BYTES, MAX_IMPORT_TEXT} from '../../store/guard.js';
+import {DEMO_SOLID_INSERTS, DEMO_TABLE_WARNING, type SolidInsertTable} from '../../core/repair/index.js';
+import {readSolidTableFile} from '../solid-table-file.js';
+import {MAX_IMPORT_TEXT} from '../../store/guard.js';
 
 const HELP = `tapwright inserts - solid key-locked insert tables for the repair planner
 
@@ -69,24 +69,6 @@ function summary(t: SolidInsertTable, shipped: boolean, isDefault: boolean) {
   };
 }
 
-async function readTable(file: string, io: CliIo): Promise<SolidInsertTable> {
-  let text: string;
-  try {
-    text = await readFile(path.resolve(io.cwd, file), 'utf8');
-  } catch {
-    throw new UsageError(`inserts import: cannot read "${file}"`, 'FILE');
-  }
-  if (Buffer.byteLength(text) > MAX_IMPORT_BYTES) throw new UsageError(`inserts import: "${file}" is larger than ${MAX_IMPORT_TEXT}`, 'FILE');
-  let data: unknown;
-  try {
-    data = JSON.parse(text);
-  } catch {
-    throw new UsageError(`inserts import: "${file}" is not JSON`, 'FILE');
-  }
-  const t = parseSolidInsertTable(data);
-  if (!t.ok) throw new UsageError(`inserts import: ${t.error}`, 'FILE');
-  return t.value;
-}
 
 export const command: Command = {
   name: 'inserts',
@@ -143,7 +125,7 @@ export const command: Command = {
       case 'import': {
         const file = rest[0];
         if (!file) throw new UsageError('inserts import needs a FILE', 'FILE');
-        const t = await readTable(file, io);
+        const t = await readSolidTableFile(file, io, 'inserts import', 'FILE');
         if (t.name.trim().toLowerCase() === DEMO_NAME) {
           throw new UsageError(`inserts import: "${t.name}" is the shipped table's name; give your table a name of its own`, 'FILE');
         }

@@ -3,8 +3,6 @@
  * Takes the check options for the joint plus the state of the hole; prints a
  * ranked 80-column table with the cautions, or the plan as JSON (always SI).
  */
-import {readFile} from 'node:fs/promises';
-import path from 'node:path';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {formatOption, parseOptions, quantity, str, unitsOption, type OptionSpec} from '../args.js';
@@ -12,12 +10,13 @@ import {JointInputError} from '../../core/joint/index.js';
 import {resolveGeometry} from '../../core/joint/resolve.js';
 import {nutClassProblem} from '../../core/materials/index.js';
 import {formatQuantity} from '../../core/units.js';
-import {parseSolidInsertTable, planRepairs, RepairInputSchema, REPAIR_RANKING_RULE, EFFORT_SCALE_TEXT, type RepairInputDraft, type SolidInsertTable} from '../../core/repair/index.js';
+import {planRepairs, RepairInputSchema, REPAIR_RANKING_RULE, EFFORT_SCALE_TEXT, type RepairInputDraft, type SolidInsertTable} from '../../core/repair/index.js';
 import type {JointInput, JointInputDraft} from '../../core/joint/input.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
 import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
 import {lengthText, planText, wrap} from '../../report/repair-text.js';
+import {readSolidTableFile} from '../solid-table-file.js';
 import {planMarkdown} from '../../report/repair-markdown.js';
 
 const OPTIONS: OptionSpec = {
@@ -78,23 +77,6 @@ ${EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`).join('\n')}
 ${CAUTION_LINES.join('\n')}
 `;
 
-async function loadTable(file: string, io: CliIo): Promise<SolidInsertTable> {
-  let text: string;
-  try {
-    text = await readFile(path.resolve(io.cwd, file), 'utf8');
-  } catch {
-    throw new UsageError(`--solid-table: cannot read "${file}"`, '--solid-table');
-  }
-  let data: unknown;
-  try {
-    data = JSON.parse(text);
-  } catch {
-    throw new UsageError(`--solid-table: "${file}" is not JSON`, '--solid-table');
-  }
-  const t = parseSolidInsertTable(data);
-  if (!t.ok) throw new UsageError(`--solid-table: ${t.error}`, '--solid-table');
-  return t.value;
-}
 
 /**
  * The solid-insert table: --solid-table names one of the user's stored tables
@@ -109,7 +91,7 @@ async function chooseTable(given: string | undefined, io: CliIo): Promise<SolidI
   for (const w of store.warnings()) io.err(`tapwright: ${w}\n`);
   if (given === undefined) return defaultSolidTable(store);
   if (given.trim() === '') throw new UsageError('--solid-table needs a table name or a file; see tapwright inserts list', '--solid-table');
-  return findSolidTable(store, given) ?? (await loadTable(given, io));
+  return findSolidTable(store, given) ?? (await readSolidTableFile(given, io, '--solid-table', '--solid-table'));
 }
 
 /** "--wall -3" -> "--wall=-3", so a negative number reaches the range check instead of the option parser. */
