@@ -15,6 +15,8 @@ import {shippedPresets} from './shipped.js';
 import {exportDocument, importPresets, writeExport, type ImportReport} from './transfer.js';
 import {dropInsertTable, putInsertTable, readInsertTables, type SolidInsertTable} from './inserts.js';
 import type {PresetStore, PresetSummary, StoreOptions} from './store-types.js';
+import {dropUserMaterial, putUserMaterial, readUserMaterials} from './user-materials.js';
+import type {UserParentMaterial} from '../core/joint/input.js';
 
 export type {Preset, SavablePreset, QuarantineEntry} from './schema.js';
 export type {ImportOptions, ImportReport} from './transfer.js';
@@ -243,6 +245,19 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
     },
     removeInsertTable(name) {
       mutate(s => dropInsertTable(s, name));
+    },
+    userMaterials() {
+      return readUserMaterials(current()).map(m => structuredClone(m));
+    },
+    saveUserMaterial(m, o = {}) {
+      let out: UserParentMaterial | undefined;
+      mutate(s => {
+        out = putUserMaterial(s, m, o.overwrite === true);
+      });
+      return structuredClone(out!);
+    },
+    removeUserMaterial(id) {
+      mutate(s => dropUserMaterial(s, id));
     },
     warnings() {
       return [...notes];

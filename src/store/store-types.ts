@@ -1,3 +1,4 @@
+import type {UserParentMaterial} from '../core/joint/input.js';
 /** The preset store's public interface (implemented in presets.ts). */
 import type {Preset, SavablePreset} from './schema.js';
 import type {ImportOptions, ImportReport} from './transfer.js';
@@ -55,6 +56,10 @@ export interface PresetStore {
   insertTables(): SolidInsertTable[];
   saveInsertTable(t: SolidInsertTableDraft, opts?: {overwrite?: boolean}): SolidInsertTable;
   removeInsertTable(name: string): void;
+  /** The user's own parent materials (for tapped holes), by id. */
+  userMaterials(): UserParentMaterial[];
+  saveUserMaterial(m: unknown, opts?: {overwrite?: boolean}): UserParentMaterial;
+  removeUserMaterial(id: string): void;
   /** One-line messages for the user about what happened to the files. */
   warnings(): string[];
 }

@@ -15,6 +15,7 @@ import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
 import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
 import {defaultSolidTable} from '../store/solid-tables.js';
+import {withUserMaterial} from '../store/user-materials.js';
 import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
@@ -60,6 +61,17 @@ function picks(source: PickSource, units: UnitSystem): PickItem[] {
   return group(listParentMaterials(), m => `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`);
 }
 
+/** The user's own parent materials as picker entries, with their source. */
+function userPicks(store: PresetStore, units: UnitSystem): PickItem[] {
+  const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
+  return store.userMaterials().map(m => ({
+    id: m.id,
+    name: `${m.name} (yours)`,
+    detail: `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`,
+    provenance: {source: m.source, kind: 'user' as const},
+  }));
+}
+
 /** Type-ahead: designations starting with the text first, then the nearest by spelling. */
 function designations(query: string, limit: number): string[] {
   const q = query.trim().toLowerCase().replace(/\s+/g, ' ');
@@ -81,12 +93,13 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
   };
   return {
     store,
-    check: (input: JointInput) => checkJoint(input),
+    // The user's own parent materials from the store count as well as the library's.
+    check: (input: JointInput) => checkJoint(withUserMaterial(input, store.userMaterials())),
     checkScrew: (input: ScrewInput) => checkScrew(input),
     designations,
-    picks: (source, units) => picks(source, units),
+    picks: (source, units) => [...picks(source, units), ...(source === 'parent' ? userPicks(store, units) : [])],
     // The user's first stored solid-insert table, else the shipped demo table (as tapwright repair).
-    repairs: (joint, hole, units) => planRepairs(joint, hole, defaultSolidTable(store), units ?? 'si'),
+    repairs: (joint, hole, units) => planRepairs(withUserMaterial(joint, store.userMaterials()), hole, defaultSolidTable(store), units ?? 'si'),
     presets: {
       list: () =>
         store.list().map(p => ({

@@ -3,6 +3,7 @@
  * result as text, a Markdown work-order report, or SI JSON.
  * Exit 0 no fail flag, 3 computed with a fail flag, 2 bad input naming the option.
  */
+import {withMyMaterial} from '../user-material-input.js';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {parseOptions, quantity, range, str, type OptionSpec, type ParsedOptions} from '../args.js';
@@ -278,7 +279,7 @@ export const command: Command = {
     try {
       if (draft.thread === undefined) throw new UsageError('--thread is needed, e.g. --thread M10x1.5-6H/6g (or --preset NAME)', '--thread');
       defaultEngagement(draft);
-      input = validate(draft, units);
+      input = await withMyMaterial(validate(draft, units), io);
       result = checkJoint(input);
     } catch (e) {
       if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.messageIn(units)}`, optionFor(e.field));

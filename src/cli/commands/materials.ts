@@ -5,6 +5,7 @@
 import type {Command} from '../command.js';
 import {EXIT, UsageError} from '../io.js';
 import {formatOption, parseOptions, str, unitsOption} from '../args.js';
+import {USER_MATERIALS_HELP} from './user-materials.js';
 import {
   listBoltGrades,
   listHexHeads,
@@ -40,6 +41,8 @@ Options:
 Strengths are minimums where a standard gives them. A row whose source says
 "from memory" is a typical value: verify it against the material certificate.
 tauB/Rm is the shear-strength ratio used for thread stripping.
+
+${USER_MATERIALS_HELP}
 `;
 
 /** Wrap `text` to WIDTH with `first` as the prefix of the first line and `indent` for the rest. */
@@ -170,8 +173,17 @@ export const command: Command = {
   summary: 'bolt grades, nut classes and parent materials with their sources',
   help: HELP,
   async run(args, io) {
-    const {values} = parseOptions(args, {json: {type: 'boolean'}, format: {type: 'string'}, units: {type: 'string'}, kind: {type: 'string'}}, false);
+    const {values, positionals} = parseOptions(
+      args,
+      {json: {type: 'boolean'}, format: {type: 'string'}, units: {type: 'string'}, kind: {type: 'string'}, overwrite: {type: 'boolean'}, yes: {type: 'boolean'}},
+      true,
+    );
     const unitsText = unitsOption(values);
+    if (positionals.length > 0) {
+      const [action, ...rest] = positionals;
+      const {userMaterialsAction} = await import('./user-materials.js');
+      return userMaterialsAction(action ?? '', rest, {json: values.json === true, overwrite: values.overwrite === true, yes: values.yes === true, units: unitsText}, io);
+    }
     const format = formatOption(values, ['text', 'json'] as const, 'text');
     const kindText = str(values, 'kind')?.trim().toLowerCase();
     if (kindText !== undefined && !(KINDS as readonly string[]).includes(kindText)) {

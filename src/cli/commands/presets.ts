@@ -2,6 +2,7 @@
  * `tapwright presets`: saved joints from the command line. The store itself
  * (locking, atomic writes, recovery) is src/store; this file maps options to it.
  */
+import {withUserMaterial} from '../../store/user-materials.js';
 import path from 'node:path';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
@@ -133,7 +134,8 @@ async function save(args: string[], io: CliIo): Promise<number> {
   } else {
     try {
       const joint = jointFromOptions(p.values, base?.joint);
-      resolveJoint(joint); // unknown thread, grade or material: refused now, not when the preset is used
+      // Unknown thread, grade or material: refused now, not when the preset is used (the user's own materials count).
+      resolveJoint(withUserMaterial(joint, store.userMaterials()));
       preset = {...(base ?? {kind: 'joint' as const, savedAt: '', revision: 1}), name, kind: 'joint', joint, notes: notesFrom(p.values, base?.notes)};
     } catch (e) {
       if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.message}`, optionFor(e.field));

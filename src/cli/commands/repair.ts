@@ -3,6 +3,7 @@
  * Takes the check options for the joint plus the state of the hole; prints a
  * ranked 80-column table with the cautions, or the plan as JSON (always SI).
  */
+import {withMyMaterial} from '../user-material-input.js';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {formatOption, parseOptions, quantity, str, unitsOption, type OptionSpec} from '../args.js';
@@ -211,7 +212,7 @@ export const command: Command = {
     let plan;
     try {
       // Reasons and notes in the display units; the JSON stays SI throughout.
-      plan = planRepairs(joint, repair.data, table, format === 'json' ? 'si' : (units as UnitSystem));
+      plan = planRepairs(await withMyMaterial(joint, io), repair.data, table, format === 'json' ? 'si' : (units as UnitSystem));
     } catch (e) {
       if (e instanceof JointInputError) {
         const option = optionFor(e.field);

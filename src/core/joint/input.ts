@@ -13,6 +13,26 @@ export const FrictionRangeSchema = z
   })
   .refine(r => r.min <= r.max, {message: 'min must not exceed max'});
 
+/**
+ * A parent material of the user's own (kept in the preset store), attached to the
+ * input by the CLI or the workbench when `parent` names it. Strengths in MPa.
+ */
+export const UserParentMaterialSchema = z
+  .object({
+    id: z.string().trim().min(1).max(40).regex(/^[A-Za-z0-9][A-Za-z0-9._+-]*$/, 'letters, digits and . _ + - only'),
+    name: z.string().trim().min(1).max(80),
+    group: z.enum(['steel', 'cast-iron', 'aluminium', 'copper-alloy', 'magnesium', 'other']).default('other'),
+    rm: z.number().min(20).max(2500),
+    yield: z.number().min(10).max(2500),
+    shear: z.number().min(10).max(1500),
+    elasticModulus: z.number().min(1000).max(500000),
+    /** Where the numbers come from, e.g. "material certificate 3.1 no. 12345". */
+    source: z.string().trim().min(1).max(300),
+  })
+  .refine(m => m.yield <= m.rm, {message: 'yield must not exceed rm', path: ['yield']});
+
+export type UserParentMaterial = z.output<typeof UserParentMaterialSchema>;
+
 export const JointInputSchema = z.object({
   /** Thread designation as typed, e.g. "M10x1.5-6H/6g", "1/4-20 UNC-2A". */
   thread: z.string().trim().min(1).max(60),
@@ -26,6 +46,8 @@ export const JointInputSchema = z.object({
   internal: z.enum(['tapped', 'nut']).default('tapped'),
   /** Parent material id for a tapped hole. */
   parent: z.string().min(1).max(40).optional(),
+  /** The user's own material named by `parent`, attached from the store (not a CLI option). */
+  parentData: UserParentMaterialSchema.optional(),
   /** Custom parent tensile strength, MPa. */
   parentRm: z.number().min(20).max(2500).optional(),
   /** Custom parent shear strength, MPa. */

@@ -97,8 +97,23 @@ function resolveBolt(input: JointInput, d: number): ResolvedBolt {
   return {id, name, rm, rp, shear: g.shearRatio * rm, shearRatio: g.shearRatio, elasticModulus: g.elasticModulus, provenance};
 }
 
+/** The user's own material attached to the input, when `parent` names it. */
+function userParent(input: JointInput) {
+  const u = input.parentData;
+  if (!u || (input.parent !== undefined && input.parent.trim().toLowerCase() !== u.id.toLowerCase())) return undefined;
+  return {
+    id: u.id,
+    name: u.name,
+    rm: u.rm,
+    yield: u.yield,
+    shearRatio: u.shear / u.rm,
+    elasticModulus: u.elasticModulus,
+    provenance: {source: `your material "${u.id}": ${u.source}`, kind: 'user' as const},
+  };
+}
+
 function resolveParent(input: JointInput, bolt: ResolvedBolt): ResolvedInternal {
-  const m = input.parent !== undefined ? parentMaterial(input.parent) : undefined;
+  const m = userParent(input) ?? (input.parent !== undefined ? parentMaterial(input.parent) : undefined);
   if (input.parent !== undefined && !m) {
     throw new JointInputError('parent', parentMaterialProblem(input.parent) ?? `unknown parent material "${input.parent}"`);
   }
