@@ -4,6 +4,7 @@
  */
 import type {Flag, ThreadSpec} from '../types.js';
 import type {EndCondition} from './buckling.js';
+import type {ThreadRootStresses} from './stresses.js';
 
 export interface ScrewResult {
   thread: ThreadSpec;
@@ -46,29 +47,8 @@ export interface ScrewResult {
      * First-thread stresses, MPa: the same components with the same meaning as `tapwright check`
      * (src/core/thread-stress.ts). 0.38 F and 0.38 T on one thread from 6 threads engaged.
      */
-    firstThread: {
-      /** Flank bearing -2F1/(pi dm p), compressive (Shigley 9th ed. Eq. 8-10). */
-      bearing: number;
-      /** Root bending 6F1/(pi dr p), magnitude (Eq. 8-11). */
-      bending: number;
-      /** Tangential shear at the root from the thread torque 4T1/(pi dr^2 p) (common practice, no source). */
-      shear: number;
-      /** Transverse shear at the centre of the root section 3F1/(pi dr p) (Eq. 8-12); not combined. */
-      transverseShear: number;
-      /** Body axial at the root, negative in compression (Eq. 8-8). */
-      axial: number;
-      /** Body torsion at the root (Eq. 8-7). */
-      torsion: number;
-      /** Full 3D von Mises of bending, axial, torsion and tangential shear (Eq. 5-14). */
-      vonMises: number;
-      maxShear: number;
-      principal: [number, number, number];
-      /** von Mises of Shigley's p. 419 state exactly: sx = bending, sy = body axial, tyz = body torsion. */
-      vonMisesTextbook: number;
-      maxShearTextbook: number;
-      principalTextbook: [number, number, number];
-      share: number;
-    };
+    /** The components of ThreadRootStresses (src/core/screw/stresses.ts), and the load share used. */
+    firstThread: ThreadRootStresses & {share: number};
   };
   nut: {
     material: string;
