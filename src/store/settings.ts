@@ -15,26 +15,8 @@ import {FILES, fileStamp} from './paths.js';
 import {describeFsError, withLock} from './file-ops.js';
 import {describeZodError} from './schema.js';
 
-export const SettingsSchema = z.object({
-  /** Display units; JSON output is always SI. */
-  units: z.enum(['si', 'us']).default('si'),
-  /** ASCII borders and symbols in the workbench. */
-  ascii: z.boolean().default(false),
-  /** The preset the workbench had open last. */
-  lastPreset: z.string().min(1).max(64).optional(),
-  /** Default tightening-method scatter factor alphaA (1 = friction range only). */
-  scatterDefault: z.number().min(1).max(4).default(1),
-});
-export type Settings = z.output<typeof SettingsSchema>;
-
-const FIELD_RULE: Record<keyof Settings, string> = {
-  units: 'si or us',
-  ascii: 'true or false',
-  lastPreset: 'a preset name of 1 to 64 characters',
-  scatterDefault: 'a number from 1 to 4',
-};
-
-export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});
+import {SettingsSchema, FIELD_RULE, DEFAULT_SETTINGS, type Settings} from './settings-schema.js';
+export {SettingsSchema, DEFAULT_SETTINGS, type Settings} from './settings-schema.js';
 
 export interface SettingsHandle {
   get(): Settings;

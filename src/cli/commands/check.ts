@@ -3,6 +3,7 @@
  * result as text, a Markdown work-order report, or SI JSON.
  * Exit 0 no fail flag, 3 computed with a fail flag, 2 bad input naming the option.
  */
+import {defaultScatter} from '../default-scatter.js';
 import {withMyMaterial} from '../user-material-input.js';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
@@ -274,6 +275,11 @@ export const command: Command = {
     const preset = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
     const notes = format === 'markdown' ? await workOrderNotes(values, preset?.notes) : {};
     const draft = buildDraft(values, units, preset?.joint);
+    // The settings' default scatter applies when neither --scatter nor a preset gives one.
+    if (draft.scatter === undefined && preset === undefined) {
+      const d = defaultScatter(io);
+      if (d !== 1) draft.scatter = d;
+    }
     let input: JointInput;
     let result;
     try {

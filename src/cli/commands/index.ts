@@ -17,5 +17,6 @@ export const COMMANDS: CommandEntry[] = [
   {name: 'threads', summary: 'geometry and limits of size of a thread designation', load: async () => (await import('./threads.js')).command},
   {name: 'materials', summary: 'bolt grades, nut classes, parent materials, with sources', load: async () => (await import('./materials.js')).command},
   {name: 'inserts', summary: 'solid key-locked insert tables: the demo one and yours', load: async () => (await import('./inserts.js')).command},
+  {name: 'settings', summary: 'display units, ASCII drawing, default scatter factor', load: async () => (await import('./settings.js')).command},
   {name: 'presets', summary: 'saved joints: list, show, save, rename, delete, import', load: async () => (await import('./presets.js')).command},
 ];

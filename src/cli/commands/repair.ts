@@ -3,6 +3,7 @@
  * Takes the check options for the joint plus the state of the hole; prints a
  * ranked 80-column table with the cautions, or the plan as JSON (always SI).
  */
+import {defaultScatter} from '../default-scatter.js';
 import {withMyMaterial} from '../user-material-input.js';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
@@ -154,7 +155,12 @@ export const command: Command = {
     const units = unitsOption(values);
     const presetName = str(values, 'preset');
     const preset = presetName === undefined ? {} : await loadPreset(presetName, io);
-    const joint = jointFromOptions(values, preset.joint);
+    let joint = jointFromOptions(values, preset.joint);
+    // The settings' default scatter applies when neither --scatter nor a preset gives one.
+    if (values.scatter === undefined && presetName === undefined) {
+      const d = defaultScatter(io);
+      if (d !== 1) joint = {...joint, scatter: d};
+    }
 
     const draft: RepairInputDraft = {...(preset.repair ?? {})};
     if (values.through === true) draft.through = true;
