@@ -30,7 +30,7 @@ describe('report screen', () => {
 
   it('says why there is no report when the joint cannot be computed', async () => {
     const app = startApp({svc: fixtureServices({report: undefined})});
-    await app.press('w', 'The report writer is not in this build yet.');
+    await app.press('w', 'The report writer is not available in this workbench.');
     app.unmount();
   });
 });
@@ -50,7 +50,7 @@ describe('repairs screen', () => {
 
   it('says so when the planner is not in the build', async () => {
     const app = startApp({svc: fixtureServices({repairs: undefined})});
-    await app.press('r', 'The repair planner is not in this build yet.');
+    await app.press('r', 'The repair planner is not available in this workbench.');
     app.unmount();
   });
 });

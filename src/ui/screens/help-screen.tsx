@@ -45,7 +45,7 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
   if (opts.sources.length === 0) lines.push('  (shown once the joint is computed)');
   for (const s of opts.sources) lines.push(`  - ${s}`);
   lines.push('', 'Ranking of repairs');
-  lines.push(`  ${opts.rankingRule ?? 'The repair planner is not in this build yet; tapwright repair --help describes it when it is.'}`);
+  lines.push(`  ${opts.rankingRule ?? 'The repair planner is not available in this workbench; tapwright repair --help describes the ranking.'}`);
   lines.push('', 'Work grades (the Work column of the Repairs screen)', ...EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`));
   lines.push('', 'Cautions', ...CAUTION_LINES.map(l => `  ${l}`));
   return lines;

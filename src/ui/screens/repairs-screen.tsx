@@ -18,7 +18,7 @@ interface Props {
 export function RepairsScreen({rep, index, units, holeSummary, width, height}: Props) {
   const t = useTheme();
   if (!rep.available || !rep.plan) {
-    const why = rep.available ? rep.error : 'The repair planner is not in this build yet. The hole state is kept with the preset.';
+    const why = rep.available ? rep.error : 'The repair planner is not available in this workbench. The hole state is kept with the preset.';
     return (
       <Box flexDirection="column" width={width} height={height}>
         <Text bold>{fit(`Repairs for: ${holeSummary}`, width, t.sym.ellipsis)}</Text>

@@ -108,7 +108,7 @@ function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation
 
 /** The report text for the current joint, or a reason it cannot be made. */
 export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input?: unknown; result?: unknown}): {text?: string; why?: string} {
-  if (!svc.report) return {why: 'The report writer is not in this build yet.'};
+  if (!svc.report) return {why: 'The report writer is not available in this workbench.'};
   if (s.mode === 'screw') return {why: 'The work-order report covers threaded joints; for this power screw save the preset and run tapwright screw --preset NAME.'};
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
