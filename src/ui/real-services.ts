@@ -16,6 +16,8 @@ import {formatQuantity, type UnitSystem} from '../core/units.js';
 import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
 import {defaultSolidTable} from '../store/solid-tables.js';
 import {withUserMaterial} from '../store/user-materials.js';
+import type {UserParentMaterial} from '../core/joint/input.js';
+import type {SolidInsertTable} from '../core/repair/index.js';
 import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
@@ -62,9 +64,9 @@ function picks(source: PickSource, units: UnitSystem): PickItem[] {
 }
 
 /** The user's own parent materials as picker entries, with their source. */
-function userPicks(store: PresetStore, units: UnitSystem): PickItem[] {
+function userPicks(materials: readonly UserParentMaterial[], units: UnitSystem): PickItem[] {
   const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
-  return store.userMaterials().map(m => ({
+  return materials.map(m => ({
     id: m.id,
     name: `${m.name} (yours)`,
     detail: `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`,
@@ -91,15 +93,30 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     if (!p) throw new Error(`no preset named "${name}"`);
     return p;
   };
+  // The user's materials and insert table come from the store file. The readout
+  // asks for them on every keystroke, so they are read again only when the file
+  // changed (size or time), not parsed on each key.
+  let cached: {key: string; materials: UserParentMaterial[]; solidTable: SolidInsertTable} | undefined;
+  const mine = () => {
+    let key = 'none';
+    try {
+      const st = fs.statSync(store.file);
+      key = `${st.mtimeMs}:${st.size}`;
+    } catch {
+      // No store file yet: no materials of the user's own.
+    }
+    if (cached?.key !== key) cached = {key, materials: store.userMaterials(), solidTable: defaultSolidTable(store)};
+    return cached;
+  };
   return {
     store,
     // The user's own parent materials from the store count as well as the library's.
-    check: (input: JointInput) => checkJoint(withUserMaterial(input, store.userMaterials())),
+    check: (input: JointInput) => checkJoint(withUserMaterial(input, mine().materials)),
     checkScrew: (input: ScrewInput) => checkScrew(input),
     designations,
-    picks: (source, units) => [...picks(source, units), ...(source === 'parent' ? userPicks(store, units) : [])],
+    picks: (source, units) => [...picks(source, units), ...(source === 'parent' ? userPicks(mine().materials, units) : [])],
     // The user's first stored solid-insert table, else the shipped demo table (as tapwright repair).
-    repairs: (joint, hole, units) => planRepairs(withUserMaterial(joint, store.userMaterials()), hole, defaultSolidTable(store), units ?? 'si'),
+    repairs: (joint, hole, units) => planRepairs(withUserMaterial(joint, mine().materials), hole, mine().solidTable, units ?? 'si'),
     presets: {
       list: () =>
         store.list().map(p => ({
