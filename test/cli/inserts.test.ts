@@ -1,24 +1,13 @@
-import {describe, expect, it, onTestFinished} from 'vitest';
-import {mkdtempSync, readFileSync, rmSync, writeFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
+import {describe, expect, it} from 'vitest';
+import {cliInTempStore} from '../support/cli-in-temp-store.js';
+import {readFileSync, writeFileSync} from 'node:fs';
 import path from 'node:path';
-import {runCli} from '../../src/cli/main.js';
-import {memoryIo} from '../../src/cli/io.js';
 import {realServices} from '../../src/ui/real-services.js';
 
 // Solid key-locked insert tables: the shipped one is demo data; a user's own
 // table (here an invented one, marked as a test table) is stored, used by the
 // repair planner and the workbench by default, and never loses the demo table.
-function setup() {
-  const dir = mkdtempSync(path.join(tmpdir(), 'tw-inserts-'));
-  onTestFinished(() => rmSync(dir, {recursive: true, force: true}));
-  const run = async (...args: string[]) => {
-    const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: dir}, cwd: dir});
-    const code = await runCli(args, io);
-    return {code, out: io.stdout(), err: io.stderr()};
-  };
-  return {dir, run};
-}
+const setup = () => cliInTempStore('tw-inserts');
 
 async function ownTable(run: (...a: string[]) => Promise<{code: number; out: string}>, dir: string): Promise<string> {
   const demo = JSON.parse((await run('inserts', 'export', 'demo solid key-locked inserts', '-')).out) as Record<string, unknown> & {entries: Array<Record<string, unknown>>};

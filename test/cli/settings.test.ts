@@ -1,20 +1,9 @@
-import {describe, expect, it, onTestFinished} from 'vitest';
-import {mkdtempSync, rmSync, writeFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
+import {describe, expect, it} from 'vitest';
+import {cliInTempStore} from '../support/cli-in-temp-store.js';
+import {writeFileSync} from 'node:fs';
 import path from 'node:path';
-import {runCli} from '../../src/cli/main.js';
-import {memoryIo} from '../../src/cli/io.js';
 
-function setup() {
-  const dir = mkdtempSync(path.join(tmpdir(), 'tw-settings-'));
-  onTestFinished(() => rmSync(dir, {recursive: true, force: true}));
-  const run = async (...args: string[]) => {
-    const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: dir}, cwd: dir});
-    const code = await runCli(args, io);
-    return {code, out: io.stdout(), err: io.stderr()};
-  };
-  return {dir, run};
-}
+const setup = () => cliInTempStore('tw-settings');
 
 const JOINT = ['check', '--thread', 'M10', '--parent', 'S355', '--engage', '15', '--torque', '40Nm', '--json'];
 const preload = (out: string) => (JSON.parse(out) as {tightening: {preload: {min: number; max: number}}}).tightening.preload;

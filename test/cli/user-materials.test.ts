@@ -1,9 +1,7 @@
-import {describe, expect, it, onTestFinished} from 'vitest';
-import {mkdtempSync, rmSync, writeFileSync, readFileSync} from 'node:fs';
-import {tmpdir} from 'node:os';
+import {describe, expect, it} from 'vitest';
+import {cliInTempStore} from '../support/cli-in-temp-store.js';
+import {writeFileSync, readFileSync} from 'node:fs';
 import path from 'node:path';
-import {runCli} from '../../src/cli/main.js';
-import {memoryIo} from '../../src/cli/io.js';
 import {realServices} from '../../src/ui/real-services.js';
 import {evaluate} from '../../src/ui/state/evaluate.js';
 import {setValue} from '../../src/ui/state/fields.js';
@@ -15,16 +13,7 @@ const MINE = {
   rm: 620, yield: 390, shear: 560, elasticModulus: 174000, source: 'demo certificate for a test',
 };
 
-function setup() {
-  const dir = mkdtempSync(path.join(tmpdir(), 'tw-mymat-'));
-  onTestFinished(() => rmSync(dir, {recursive: true, force: true}));
-  const run = async (...args: string[]) => {
-    const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: dir}, cwd: dir});
-    const code = await runCli(args, io);
-    return {code, out: io.stdout(), err: io.stderr()};
-  };
-  return {dir, run};
-}
+const setup = () => cliInTempStore('tw-mymat');
 
 describe('materials of the user\'s own', () => {
   it('are added to the store and used by check, repair and presets save by id', async () => {
