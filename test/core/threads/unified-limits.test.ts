@@ -1,33 +1,7 @@
 import {describe, expect, it} from 'vitest';
-import {parseThread, threadGeometry} from '../../../src/core/threads/index.js';
+import {cls, geom, inches} from './unified-helpers.js';
 import {td2Class2A, unifiedLimitsInches} from '../../../src/core/threads/unified-limits.js';
-import {parseUnifiedClass} from '../../../src/core/threads/tolerance-class.js';
-import type {ThreadGeometry} from '../../../src/core/types.js';
 
-const IN = 25.4;
-
-function geom(text: string): ThreadGeometry {
-  const p = parseThread(text);
-  if (!p.ok) throw new Error(p.error);
-  return threadGeometry(p.value);
-}
-
-/** Limits in inches, rounded to 4 decimals to undo the mm conversion. */
-function inches(g: ThreadGeometry) {
-  const r = (v: number | undefined) => (v === undefined ? undefined : Math.round((v / IN) * 1e4) / 1e4);
-  const e = g.limits.external;
-  const i = g.limits.internal;
-  return {
-    ext: [r(e.majorMax), r(e.majorMin), r(e.pitchMax), r(e.pitchMin)],
-    int: [r(i.minorMin), r(i.minorMax), r(i.pitchMin), r(i.pitchMax), r(i.majorMin)],
-  };
-}
-
-const cls = (t: string) => {
-  const c = parseUnifiedClass(t);
-  if (!c.ok) throw new Error(c.error);
-  return c.value;
-};
 
 describe('unified limits of size, classes 2A/2B', () => {
   it('1/4-20 UNC-2B matches the published UNC 2B internal-thread table (ASME B1.1 values)', () => {
