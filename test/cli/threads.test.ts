@@ -68,6 +68,22 @@ describe('tapwright threads', () => {
     for (const l of r.out.split('\n')) expect(l.length).toBeLessThanOrEqual(80);
   });
 
+  it('--json labels unified limits table or formula by what the table data holds', async () => {
+    // ASME B1.1 standard series limits table rows (src/core/threads/unified-table-data.ts):
+    // 3-48 UNC has 2A and 2B rows, 1/4-20 UNC a 2B row only, 5/16-24 UNF none
+    const full = JSON.parse((await run('#3-48 UNC', '--json')).out).geometry;
+    expect(full.limitsProvenance).toMatchObject({method: 'table', source: 'ASME B1.1 standard series limits table'});
+    expect(full.limits.internal.pitchMax).toBeCloseTo(0.0885 * 25.4, 6);
+    const half = JSON.parse((await run('1/4-20 UNC-2A/2B', '--json')).out).geometry;
+    expect(half.limitsProvenance.method).toBe('formula');
+    expect(half.limitsProvenance.source).toMatch(/table for one side/);
+    expect(half.notes.join(' ')).toMatch(/Class 2B limits read from the ASME B1\.1 standard series limits table; class 2A computed/);
+    const none = JSON.parse((await run('5/16-24 UNF', '--json')).out).geometry;
+    expect(none.limitsProvenance.method).toBe('formula');
+    expect(none.limitsProvenance.source).not.toMatch(/limits table/);
+    expect(none.notes.join(' ')).toMatch(/not read from the ASME B1\.1 tables/);
+  });
+
   it('a special thread says so and labels the formula limits', async () => {
     const r = await run('M10x1.3');
     expect(r.code).toBe(0);

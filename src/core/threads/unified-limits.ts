@@ -19,8 +19,9 @@
  * 0.000001 in; each allowance, tolerance and the basic pitch diameter to
  * 0.0001 in, then added; 1B/2B minor diameters to 0.001 in from #6 (0.138 in)
  * up, below #6 D1 and the minor tolerance each to 0.0001 in, then added) they
- * reproduce every ASME B1.1 table value in unified-table-data.ts and the
- * published values checked in the tests.
+ * reproduce every ASME B1.1 table value in unified-table-data.ts but one (the
+ * #10-24 UNC-2B maximum minor diameter: table 0.156 in, formulas 0.155 in) and
+ * the published values checked in the tests.
  */
 import type {ExternalLimits, InternalLimits} from '../types.js';
 import type {UnifiedClass} from './tolerance-class.js';

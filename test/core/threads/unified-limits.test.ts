@@ -4,17 +4,22 @@ import {td2Class2A, unifiedLimitsInches} from '../../../src/core/threads/unified
 
 
 describe('unified limits of size, classes 2A/2B', () => {
-  it('1/4-20 UNC-2B matches the published UNC 2B internal-thread table (ASME B1.1 values)', () => {
+  // The formulas themselves (unifiedLimitsInches), not threadGeometry: these sizes now have a 2B table row.
+  const formulaInt = (D: number, n: number) => {
+    const i = unifiedLimitsInches(D, n, cls('2A'), cls('2B')).internal;
+    return [i.minorMin, i.minorMax, i.pitchMin, i.pitchMax, i.majorMin];
+  };
+
+  it('1/4-20 UNC-2B from the formulas matches the published UNC 2B internal-thread table (ASME B1.1 values)', () => {
     // ASME B1.1 limits of size for 1/4-20 UNC-2B, read in a published UNC 2B
     // internal-thread dimension table: minor 0.196/0.207, pitch 0.2175/0.2224 in
-    const {int} = inches(geom('1/4-20 UNC-2B'));
-    expect(int).toEqual([0.196, 0.207, 0.2175, 0.2224, 0.25]);
+    expect(formulaInt(0.25, 20)).toEqual([0.196, 0.207, 0.2175, 0.2224, 0.25]);
+    expect(inches(geom('1/4-20 UNC-2B')).int).toEqual([0.196, 0.207, 0.2175, 0.2224, 0.25]);
   });
 
-  it('3/8-16 UNC-2B matches the published UNC 2B internal-thread table (ASME B1.1 values)', () => {
+  it('3/8-16 UNC-2B from the formulas matches the published UNC 2B internal-thread table (ASME B1.1 values)', () => {
     // ASME B1.1 limits of size (same published UNC 2B table), 3/8-16 UNC-2B: minor 0.307/0.321, pitch 0.3344/0.3401 in
-    const {int} = inches(geom('3/8-16 UNC-2B'));
-    expect(int).toEqual([0.307, 0.321, 0.3344, 0.3401, 0.375]);
+    expect(formulaInt(0.375, 16)).toEqual([0.307, 0.321, 0.3344, 0.3401, 0.375]);
   });
 
   it('1/4-20 UNC-2A: allowance 0.0011, major 0.2489/0.2408, pitch 0.2164/0.2127 in', () => {
@@ -43,6 +48,10 @@ describe('unified limits of size, classes 2A/2B', () => {
     const {ext, int} = inches(geom(`${t}-2A/2B`));
     expect(ext).toEqual(v.slice(0, 4));
     expect([int[2], int[3], int[0], int[1]]).toEqual(v.slice(4, 8));
+    // and the formulas alone, where the 2B side now comes from the table (5/16-18, 3/4-10)
+    const g = geom(`${t}-2A/2B`).spec;
+    const f = formulaInt(g.nominal / 25.4, g.tpi!);
+    expect([f[2], f[3], f[0], f[1]]).toEqual(v.slice(4, 8));
   });
 
   it('#10-32 UNF-2B minor diameter 0.156/0.164 in (ASME B1.1 limits-of-size table, from memory)', () => {
@@ -74,7 +83,8 @@ describe('unified classes 1A/3A/1B/3B', () => {
   });
 
   it('provenance says the unified limits are computed from formulas', () => {
-    const g = geom('1/4-20 UNC');
+    // 5/16-24 UNF: no row in the table data
+    const g = geom('5/16-24 UNF');
     expect(g.limitsProvenance.method).toBe('formula');
     expect(g.notes.join(' ')).toMatch(/not read from the ASME B1.1 tables/);
   });
