@@ -5,7 +5,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import {z} from 'zod';
+import * as z from 'zod';
 import {FILES, fileStamp} from './paths.js';
 import {StoreError} from './errors.js';
 import {describeFsError, errCode, writeFileAtomic} from './file-ops.js';

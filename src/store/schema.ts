@@ -5,7 +5,7 @@
  *    "materials": [...], "inserts": [...]}
  * Version 1 (the earlier flat layout) is described in migrate.ts.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 import {JointInputSchema} from '../core/joint/input.js';
 import {RepairInputSchema} from '../core/repair/input.js';
 import {ScrewInputSchema} from '../core/screw/input.js';

@@ -9,7 +9,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import Conf from 'conf';
-import {z} from 'zod';
+import * as z from 'zod';
 import {StoreError} from './errors.js';
 import {FILES, fileStamp} from './paths.js';
 import {describeFsError, withLock} from './file-ops.js';

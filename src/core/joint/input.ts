@@ -3,7 +3,7 @@
  * working units (mm, N, N·m, MPa). This zod schema is the single source of truth
  * for the CLI options, the workbench fields and the preset store.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z

@@ -5,7 +5,7 @@
  * instead of reaching a calculation. Units: MPa for strengths and moduli, mm
  * for sizes.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 
 /** The one wording for a recalled material value (DEVELOPERS.md, "How to add things"). */
 export const MEMORY_WORDING = 'typical value, from memory: verify against the material certificate';

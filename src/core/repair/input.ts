@@ -9,7 +9,7 @@
  * Depths are measured from the surface of the part that carries the thread (the
  * face the clamped part sits on), along the hole axis.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 
 export const HOLE_STATES = ['intact', 'stripped'] as const;
 

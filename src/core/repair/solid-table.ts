@@ -7,7 +7,7 @@
  * "demo values: use the insert maker's data". The preset store lets users keep
  * their own table; it imports SolidInsertTableSchema from here.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 
 export const SOLID_INSERT_TYPES = ['thin-wall', 'heavy-duty'] as const;
 export type SolidInsertType = (typeof SOLID_INSERT_TYPES)[number];

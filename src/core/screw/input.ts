@@ -2,7 +2,7 @@
  * Inputs of a power-screw check (working units: mm, N, m/s, MPa).
  * Owned by the power-screw work; the preset store embeds this schema.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 
 /** Thread friction: one value, or a min..max range (raise torque at max, lowering and self-locking at min). */
 export const ScrewFrictionSchema = z.union([

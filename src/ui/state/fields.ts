@@ -3,7 +3,7 @@
  * and their accepted range (read from the zod schemas, the single source of truth).
  * Values are held in working units (mm, N, N·m, MPa); only the display converts.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 import {JointInputSchema, type JointInputDraft} from '../../core/joint/input.js';
 import {RepairInputSchema, type RepairInput} from '../../core/repair/input.js';
 import {ScrewInputSchema, END_CONDITION_IDS, type ScrewInputDraft} from '../../core/screw/input.js';

@@ -5,7 +5,7 @@
  * of truth; the values live in FormValues.notes, so they mark the preset as
  * changed, go into the draft and are saved with the preset.
  */
-import {z} from 'zod';
+import * as z from 'zod';
 import {NotesSchema, type Notes} from '../../store/schema.js';
 import type {FormValues} from './fields.js';
 import {fail, info, type WorkbenchState} from './workbench.js';
