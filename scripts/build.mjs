@@ -5,6 +5,7 @@ import {build} from 'esbuild';
 import {rmSync, chmodSync} from 'node:fs';
 import {fileURLToPath} from 'node:url';
 import path from 'node:path';
+import {startUpPlugin} from './build-support/start-up-plugin.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const at = p => path.join(root, p);
@@ -23,6 +24,7 @@ const common = {
   bundle: true,
   logLevel: 'warning',
   define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"'},
+  plugins: [startUpPlugin],
 };
 
 await build({

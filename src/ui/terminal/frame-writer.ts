@@ -13,6 +13,7 @@
  * the next frame is then painted in full.
  */
 import {EventEmitter} from 'node:events';
+import {isSurelyNarrow} from './narrow.js';
 
 const SYNC_BEGIN = '\u001B[?2026h';
 const SYNC_END = '\u001B[?2026l';
@@ -63,16 +64,6 @@ function styleOf(a: Attrs): string {
   return [...[...a.flags].sort(), a.fg, a.bg].filter(Boolean).join(';');
 }
 
-/** True for characters every terminal draws one cell wide (no wide, combining or zero-width ones). */
-function isNarrow(ch: string): boolean {
-  const c = ch.codePointAt(0) ?? 0;
-  if (c < 0x300) return c >= 0x20;
-  if (c >= 0x370 && c < 0x590) return !(c >= 0x483 && c <= 0x489);
-  if (c >= 0x2010 && c <= 0x2027) return true;
-  if (c >= 0x2030 && c <= 0x205e) return true;
-  return c >= 0x2070 && c <= 0x2bff;
-}
-
 /** Split one frame line into cells; undefined when it holds a character of uncertain width. */
 export function toCells(line: string): Cell[] | undefined {
   const attrs: Attrs = {flags: new Set(), fg: '', bg: ''};
@@ -86,7 +77,7 @@ export function toCells(line: string): Cell[] | undefined {
       continue;
     }
     const ch = m[2]!;
-    if (!isNarrow(ch)) return undefined;
+    if (!isSurelyNarrow(ch.codePointAt(0) ?? 0)) return undefined;
     cells.push({ch, style});
   }
   return cells;
