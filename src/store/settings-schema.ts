@@ -4,7 +4,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import {z} from 'zod';
+import * as z from 'zod';
 import {FILES} from './paths.js';
 
 export const SettingsSchema = z.object({
@@ -29,14 +29,27 @@ export const FIELD_RULE: Record<keyof Settings, string> = {
 export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});
 
 /**
- * The settings as stored, read without conf: defaults for a missing, damaged or
- * invalid file (the workbench's conf-backed handle reports and repairs those).
+ * The settings as stored, read without conf, and whether the file is sound: true
+ * when it is absent, or valid JSON whose every known field is accepted. A file
+ * that is not sound still gives defaults here; the conf-backed handle
+ * (settings.ts) reports it and moves a damaged file aside.
  */
-export function readSettingsQuick(dir: string): Settings {
+export function readSettingsFile(dir: string): {settings: Settings; sound: boolean} {
+  let text: string;
   try {
-    const r = SettingsSchema.safeParse(JSON.parse(fs.readFileSync(path.join(dir, FILES.settings), 'utf8')));
-    return r.success ? r.data : DEFAULT_SETTINGS;
-  } catch {
-    return DEFAULT_SETTINGS;
+    text = fs.readFileSync(path.join(dir, FILES.settings), 'utf8');
+  } catch (e) {
+    return {settings: DEFAULT_SETTINGS, sound: (e as NodeJS.ErrnoException)?.code === 'ENOENT'};
   }
+  try {
+    const r = SettingsSchema.safeParse(JSON.parse(text));
+    return r.success ? {settings: r.data, sound: true} : {settings: DEFAULT_SETTINGS, sound: false};
+  } catch {
+    return {settings: DEFAULT_SETTINGS, sound: false};
+  }
+}
+
+/** The settings as stored, read without conf: defaults for a missing, damaged or invalid file. */
+export function readSettingsQuick(dir: string): Settings {
+  return readSettingsFile(dir).settings;
 }

@@ -10,7 +10,11 @@ import {render} from 'ink';
 import type {CliIo} from '../cli/io.js';
 import {checkJoint} from '../core/joint/index.js';
 import {formatCheckText} from '../report/index.js';
-import {DEFAULT_PRESET, configDir, openSettings, resolvePreset, type SettingsHandle} from '../store/index.js';
+import {configDir} from '../store/paths.js';
+import {DEFAULT_PRESET} from '../store/shipped.js';
+import {resolvePreset} from '../store/resolve.js';
+import {readSettingsFile} from '../store/settings-schema.js';
+import type {SettingsHandle} from '../store/settings.js';
 import {LaunchUsageError, parseLaunchArgs, wantsAscii, wantsColor, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
 import {createFrameWriter} from './terminal/frame-writer.js';
 import {presetValues, realServices} from './real-services.js';
@@ -61,14 +65,19 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   const tenv: TerminalEnv = {env: io.env, stdinIsTTY: io.stdinIsTTY, stdoutIsTTY: io.stdoutIsTTY};
   const why = whyNoWorkbench(tenv);
   const dir = configDir(io.env);
-  let settings: SettingsHandle | undefined;
-  try {
-    settings = openSettings(dir);
-  } catch {
-    settings = undefined;
-  }
-  const saved = settings?.get();
-  const ascii = wantsAscii(tenv, opts.ascii || saved?.ascii === true);
+  // conf (and the JSON-schema validator it brings) is loaded only when the settings
+  // file needs repair, or at the exit to save the units: a plain read serves the start.
+  const quick = readSettingsFile(dir);
+  const openHandle = async (): Promise<SettingsHandle | undefined> => {
+    try {
+      return (await import('../store/settings.js')).openSettings(dir);
+    } catch {
+      return undefined;
+    }
+  };
+  let settings = quick.sound ? undefined : await openHandle();
+  const saved = settings ? settings.get() : quick.settings;
+  const ascii = wantsAscii(tenv, opts.ascii || saved.ascii === true);
   const presetName = opts.preset ?? DEFAULT_PRESET;
   if (why) return nonInteractive(why, presetName, io, ascii);
 
@@ -106,7 +115,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     stdout.columns = Number(io.env.COLUMNS) || 80;
     stdout.rows = Number(io.env.LINES) || 24;
   }
-  const units = opts.units ?? saved?.units ?? 'si';
+  const units = opts.units ?? saved.units ?? 'si';
   const initial = initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}});
   const theme = makeTheme(wantsColor(tenv, opts.color), ascii);
 
@@ -197,6 +206,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     if (held.length > 0 && io.env.TAPWRIGHT_DEBUG) io.err(`${held.join('\n')}\n`);
   }
   try {
+    settings ??= await openHandle();
     settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64)});
   } catch {
     // Settings are a convenience.

@@ -18,7 +18,9 @@ import {defaultSolidTable} from '../store/solid-tables.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import type {UserParentMaterial} from '../core/joint/input.js';
 import type {SolidInsertTable} from '../core/repair/index.js';
-import {DEFAULT_PRESET, clearDraft, loadDraft, openPresetStore, saveDraft, type Preset, type PresetStore} from '../store/index.js';
+import {DEFAULT_PRESET} from '../store/shipped.js';
+import {clearDraft, loadDraft, saveDraft} from '../store/draft.js';
+import {openPresetStore, type Preset, type PresetStore} from '../store/presets.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import type {FormValues, PickSource} from './state/fields.js';
 

@@ -4,6 +4,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import {openSettings, DEFAULT_SETTINGS} from '../../src/store/settings.js';
 import {configDir} from '../../src/store/paths.js';
+import {readSettingsFile} from '../../src/store/settings-schema.js';
 import {tempDir} from './helpers.js';
 
 const file = (dir: string) => path.join(dir, 'settings.json');
@@ -90,5 +91,18 @@ describe('configDir', () => {
     expect(configDir({HOME: '/Users/a'}, 'darwin')).toBe('/Users/a/Library/Preferences/tapwright');
     expect(configDir({APPDATA: 'C:\\Users\\a\\AppData\\Roaming', HOME: '/x'}, 'win32')).toMatch(/tapwright.Config$/);
     expect(configDir({TAPWRIGHT_CONFIG_DIR: '  '}, 'linux')).not.toMatch(/nodejs/);
+  });
+
+  it('the quick read (no conf) says when the file needs the repairing handle', () => {
+    const dir = tempDir('settings-quick');
+    expect(readSettingsFile(dir)).toEqual({settings: DEFAULT_SETTINGS, sound: true});
+    openSettings(dir).set({units: 'us', scatterDefault: 1.4});
+    expect(readSettingsFile(dir)).toEqual({settings: {...DEFAULT_SETTINGS, units: 'us', scatterDefault: 1.4}, sound: true});
+    for (const broken of ['{', '[]', '{"units":"metric"}', '']) {
+      fs.writeFileSync(file(dir), broken);
+      expect(readSettingsFile(dir), broken).toEqual({settings: DEFAULT_SETTINGS, sound: false});
+    }
+    fs.writeFileSync(file(dir), '{"units":"us","later":1}');
+    expect(readSettingsFile(dir).sound).toBe(true);
   });
 });
