@@ -1,11 +1,18 @@
-// Build: dist/lib (split ESM modules that resolve their packages from node_modules;
-// the workbench chunk is loaded only when the workbench starts) and
-// dist/tapwright.mjs (one self-contained file for a plant PC without a registry).
+// Build:
+//   dist/lib          split ESM modules for the commands (a command opens a handful
+//                     of files), plus one chunk holding the workbench bundle as text
+//   dist/tapwright.mjs one self-contained file for a plant PC without a registry
+// The workbench (Ink, React, the screens, the core) is bundled once more as a
+// CommonJS body and kept inside both builds as text: src/cli/workbench-loader-cached.ts
+// runs it through a V8 code cache (src/cli/code-cache.ts), so a start after the
+// first skips most of the parse and compile work. Commands never load it.
 import {build} from 'esbuild';
+import {createHash} from 'node:crypto';
 import {rmSync, chmodSync} from 'node:fs';
 import {fileURLToPath} from 'node:url';
 import path from 'node:path';
 import {startUpPlugin} from './build-support/start-up-plugin.mjs';
+import {cjsPlugin} from './build-support/cjs-plugin.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const at = p => path.join(root, p);
@@ -18,41 +25,64 @@ rmSync(outDir, {recursive: true, force: true});
 
 const common = {
   platform: 'node',
-  format: 'esm',
   target: 'node20',
   jsx: 'automatic',
   bundle: true,
+  // TAPWRIGHT_BUILD_READABLE=1 leaves the output unminified, with a comment naming
+  // each source file: for reading a CPU profile of the built app.
+  minify: process.env.TAPWRIGHT_BUILD_READABLE !== '1',
+  legalComments: 'none',
   logLevel: 'warning',
   define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"'},
-  plugins: [startUpPlugin],
+  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
 };
+
+// 1. The workbench body: CommonJS, entry src/ui/launch.ts (module.exports.launch).
+const body = await build({
+  ...common,
+  entryPoints: [at('src/ui/launch.ts')],
+  format: 'cjs',
+  write: false,
+  outfile: 'workbench.cjs',
+  plugins: [cjsPlugin, startUpPlugin],
+  define: {...common.define, 'import.meta.url': '__twImportMetaUrl'},
+  banner: {js: 'var __twImportMetaUrl = require("node:url").pathToFileURL(__filename).href;'},
+});
+const bodyText = body.outputFiles[0].text;
+const bodyHash = createHash('sha256').update(bodyText).digest('hex');
+
+// 2. The loader for that body replaces the source-mode loader (a dynamic import of
+//    src/ui/launch.ts), and the body itself is a virtual module of text.
+const workbenchPlugin = {
+  name: 'tapwright-workbench',
+  setup(b) {
+    b.onResolve({filter: /^\.\/workbench-loader\.js$/}, args => (path.resolve(args.resolveDir) === at('src/cli') ? {path: at('src/cli/workbench-loader-cached.ts')} : undefined));
+    b.onResolve({filter: /^tapwright:workbench-body$/}, () => ({path: 'workbench-body', namespace: 'tapwright'}));
+    b.onLoad({filter: /.*/, namespace: 'tapwright'}, () => ({
+      contents: `export const BODY = ${JSON.stringify(bodyText)};\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`,
+      loader: 'js',
+    }));
+  },
+};
+const requireBanner = "import {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);";
 
 await build({
   ...common,
   entryPoints: {entry: at('src/cli/entry.ts')},
+  format: 'esm',
   outdir: out('lib'),
   splitting: true,
-  minify: true,
-  legalComments: 'none',
-  // Everything is bundled, so a command opens a handful of files instead of
-  // hundreds of package modules; Ink and React sit in the workbench's own
-  // chunks and load only when the workbench starts.
   chunkNames: 'chunks/[name]-[hash]',
-  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
-  banner: {
-    js: "import {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);",
-  },
+  plugins: [workbenchPlugin, startUpPlugin],
+  banner: {js: requireBanner},
 });
 
 await build({
   ...common,
   entryPoints: [at('src/cli/entry.ts')],
+  format: 'esm',
   outfile: out('tapwright.mjs'),
-  minify: true,
-  legalComments: 'none',
-  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
-  banner: {
-    js: "#!/usr/bin/env node\nimport {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);",
-  },
+  plugins: [workbenchPlugin, startUpPlugin],
+  banner: {js: `#!/usr/bin/env node\n${requireBanner}`},
 });
 chmodSync(out('tapwright.mjs'), 0o755);

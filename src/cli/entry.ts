@@ -4,6 +4,7 @@
  */
 import {runCli} from './main.js';
 import type {CliIo} from './io.js';
+import {loadWorkbench} from './workbench-loader.js';
 
 const io: CliIo = {
   out: t => {
@@ -26,7 +27,11 @@ async function launchWorkbench(args: string[], cliIo: CliIo): Promise<number> {
   if (cliIo.stdinIsTTY && cliIo.stdoutIsTTY) {
     for (const key of ['CI', 'CONTINUOUS_INTEGRATION']) if (key in process.env) process.env[key] = 'false';
   }
-  const {launch} = await import('../ui/launch.js');
+  // A bad option or no terminal is answered here, without loading the workbench.
+  const {startWithoutWorkbench} = await import('../ui/launch-plain.js');
+  const start = startWithoutWorkbench(args, cliIo);
+  if (typeof start === 'number') return start;
+  const launch = await loadWorkbench(cliIo);
   return launch(args, cliIo);
 }
 

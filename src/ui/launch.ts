@@ -1,6 +1,6 @@
 /**
- * `tapwright` with no command: start the interactive workbench, or, where there
- * is no terminal, print the check report of the preset and point to the CLI.
+ * `tapwright` with no command: start the interactive workbench (where there is
+ * no terminal, launch-plain.ts prints the check report of the preset instead).
  * Owns the terminal while the workbench runs: the alternate screen, raw mode
  * through Ink, and its restoration on quit, Ctrl-C, SIGTERM and SIGHUP, with
  * unsaved edits kept as a draft for the next start.
@@ -8,16 +8,13 @@
 import React from 'react';
 import {render} from 'ink';
 import type {CliIo} from '../cli/io.js';
-import {checkJoint} from '../core/joint/index.js';
-import {formatCheckText} from '../report/index.js';
-import {configDir} from '../store/paths.js';
 import {DEFAULT_PRESET} from '../store/shipped.js';
-import {resolvePreset} from '../store/resolve.js';
-import {readSettingsFile} from '../store/settings-schema.js';
 import type {SettingsHandle} from '../store/settings.js';
-import {LaunchUsageError, parseLaunchArgs, wantsAscii, wantsColor, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
+import {wantsAscii, wantsColor} from './terminal/env.js';
 import {createFrameWriter} from './terminal/frame-writer.js';
-import {presetValues, realServices} from './real-services.js';
+import {yogaReady} from './terminal/yoga-ready.js';
+import {startWithoutWorkbench} from './launch-plain.js';
+import {realServices} from './real-services.js';
 import {App} from './app.js';
 import {initialState, isDirty, type Message, type WorkbenchState} from './state/workbench.js';
 import {makeTheme} from './theme.js';
@@ -33,41 +30,13 @@ const LEAVE_ALT = '\u001B[?1049l';
 const SHOW_CURSOR = '\u001B[?25h';
 const RESET_STYLE = '\u001B[0m';
 
-function nonInteractive(why: string, presetName: string, io: CliIo, ascii: boolean): number {
-  const hint =
-    `tapwright: the interactive workbench needs a terminal (${why}).\n` +
-    `For scripts and pipes use the commands: tapwright check --preset NAME (or --thread ... --engage ...),\n` +
-    `tapwright repair, tapwright presets list; see tapwright --help.\n`;
-  try {
-    const p = resolvePreset(presetName, io.env, 'joint');
-    const values = presetValues(p);
-    const report = formatCheckText(checkJoint(values.joint as never), values.joint as never, {units: 'si', ascii});
-    io.out(report.endsWith('\n') ? report : `${report}\n`);
-    io.err(`${hint}Printed above: the check report of preset "${p.name}".\n`);
-  } catch (e) {
-    io.err(`${hint}(The check report of preset "${presetName}" could not be printed: ${e instanceof Error ? e.message : String(e)})\n`);
-  }
-  return 2;
-}
-
 /** Start the workbench; resolves with the exit code. */
 export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {stdin: process.stdin, stdout: process.stdout}): Promise<number> {
-  let opts;
-  try {
-    opts = parseLaunchArgs(args);
-  } catch (e) {
-    if (e instanceof LaunchUsageError) {
-      io.err(`tapwright: ${e.message}\n`);
-      return 2;
-    }
-    throw e;
-  }
-  const tenv: TerminalEnv = {env: io.env, stdinIsTTY: io.stdinIsTTY, stdoutIsTTY: io.stdoutIsTTY};
-  const why = whyNoWorkbench(tenv);
-  const dir = configDir(io.env);
+  const start = startWithoutWorkbench(args, io);
+  if (typeof start === 'number') return start;
+  const {opts, tenv, dir, quick} = start;
   // conf (and the JSON-schema validator it brings) is loaded only when the settings
   // file needs repair, or at the exit to save the units: a plain read serves the start.
-  const quick = readSettingsFile(dir);
   const openHandle = async (): Promise<SettingsHandle | undefined> => {
     try {
       return (await import('../store/settings.js')).openSettings(dir);
@@ -79,7 +48,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   const saved = settings ? settings.get() : quick.settings;
   const ascii = wantsAscii(tenv, opts.ascii || saved.ascii === true);
   const presetName = opts.preset ?? DEFAULT_PRESET;
-  if (why) return nonInteractive(why, presetName, io, ascii);
+  await yogaReady();
 
   const svc = realServices({configDir: dir, cwd: io.cwd, now: io.now});
   const notes: string[] = [...svc.store.warnings(), ...(settings?.warnings() ?? [])];

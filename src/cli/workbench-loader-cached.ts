@@ -1,0 +1,29 @@
+/**
+ * The build's workbench loader (scripts/build.mjs puts it in place of
+ * workbench-loader.ts): the workbench bundle is kept as text and run through
+ * a V8 code cache (code-cache.ts), so a start after the first skips most of the
+ * parsing and compiling. The cache is written two seconds after the start, when
+ * the code that draws the first frame has been compiled, or at the exit if that
+ * comes first.
+ */
+import {createRequire} from 'node:module';
+import {fileURLToPath} from 'node:url';
+import type {CliIo} from './io.js';
+import {codeCacheDir, loadCachedBody} from './code-cache.js';
+import type {LaunchWorkbench} from './workbench-loader.js';
+
+export type {LaunchWorkbench} from './workbench-loader.js';
+
+const SAVE_AFTER_MS = 2000;
+
+export async function loadWorkbench(io: CliIo): Promise<LaunchWorkbench> {
+  const {BODY, BODY_HASH} = await import('tapwright:workbench-body');
+  const here = fileURLToPath(import.meta.url);
+  const body = loadCachedBody({source: BODY, hash: BODY_HASH, filename: here, cacheDir: codeCacheDir(io.env), require: createRequire(import.meta.url)});
+  if (io.env.TAPWRIGHT_DEBUG) process.once('exit', () => process.stderr.write(`tapwright: code cache ${body.cache}${body.file ? ` (${body.file})` : ''}\n`));
+  if (body.cache === 'absent' || body.cache === 'rejected') {
+    setTimeout(() => body.save(), SAVE_AFTER_MS).unref();
+    process.once('exit', () => body.save());
+  }
+  return body.exports.launch as LaunchWorkbench;
+}
