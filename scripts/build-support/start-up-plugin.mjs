@@ -16,6 +16,13 @@
 //    A fast path in front of it returns the code-point count for text made only of
 //    characters drawn one cell wide on every terminal (src/ui/terminal/narrow.ts,
 //    tested against string-width itself); any other text takes the full path.
+// 4. Ink's Output (it turns each frame's text into a grid of styled cells and back)
+//    allocated about 7 MB a frame at 80x24, which made V8 grow its young generation
+//    and the workbench's resident memory by some 30 MB while typing. The patches keep
+//    the result the same and the work smaller: the per-line caches live across frames
+//    (bounded), the blank cell is one shared frozen object, a line that fits its clip
+//    is not sliced, and ansi-tokenize skips the style diff between two cells of the
+//    same style. test/build/patches.test.ts compares patched and unpatched output.
 import {readFile} from 'node:fs/promises';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
@@ -56,12 +63,71 @@ export function patchStringWidth(source) {
   );
 }
 
+function replaceOnce(source, from, to, what) {
+  const n = source.split(from).length - 1;
+  if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from.slice(0, 60))}); update scripts/build-support/start-up-plugin.mjs`);
+  return source.replace(from, to);
+}
+
+const SHARED_CACHES = `
+const __twBlank = Object.freeze({type: 'char', value: ' ', fullWidth: false, styles: Object.freeze([])});
+let __twCaches;
+function __twSharedCaches() {
+  if (!__twCaches || __twCaches.styledChars.size + __twCaches.widths.size + __twCaches.blockWidths.size > 20000) __twCaches = new OutputCaches();
+  return __twCaches;
+}
+export default class Output {`;
+
+export function patchInkOutput(source) {
+  let s = replaceOnce(source, 'export default class Output {', SHARED_CACHES, "Ink's Output (class)");
+  s = replaceOnce(s, 'caches = new OutputCaches();', 'caches = __twSharedCaches();', "Ink's Output (caches)");
+  s = replaceOnce(
+    s,
+    `row.push({
+                    type: 'char',
+                    value: ' ',
+                    fullWidth: false,
+                    styles: [],
+                });`,
+    'row.push(__twBlank);',
+    "Ink's Output (blank cell)",
+  );
+  s = replaceOnce(s, 'return sliceAnsi(line, from, to);', 'return from === 0 && to >= width ? line : sliceAnsi(line, from, to);', "Ink's Output (clip)");
+  return s;
+}
+
+export function patchStyledChars(source) {
+  let s = replaceOnce(
+    source,
+    'ret += ansiCodesToString(diffAnsiCodes(chars[i - 1].styles, char.styles));',
+    'if (!__twSameStyles(chars[i - 1].styles, char.styles)) ret += ansiCodesToString(diffAnsiCodes(chars[i - 1].styles, char.styles));',
+    'ansi-tokenize styledCharsToString',
+  );
+  s += `
+function __twSameStyles(a, b) {
+  if (a === b) return true;
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i].code !== b[i].code || a[i].endCode !== b[i].endCode) return false;
+  return true;
+}
+`;
+  return s;
+}
+
 export const startUpPlugin = {
   name: 'tapwright-start-up',
   setup(b) {
     b.onResolve({filter: /^\.\/devtools\.js$/}, args => (/[\\/]ink[\\/]build$/.test(args.resolveDir) ? {path: DEVTOOLS_STUB} : undefined));
     b.onLoad({filter: /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/}, async args => ({
       contents: patchYogaLoader(await readFile(args.path, 'utf8')),
+      loader: 'js',
+    }));
+    b.onLoad({filter: /[\\/]ink[\\/]build[\\/]output\.js$/}, async args => ({
+      contents: patchInkOutput(await readFile(args.path, 'utf8')),
+      loader: 'js',
+    }));
+    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]styledChars\.js$/}, async args => ({
+      contents: patchStyledChars(await readFile(args.path, 'utf8')),
       loader: 'js',
     }));
     b.onLoad({filter: /[\\/]string-width[\\/]index\.js$/}, async args => ({

@@ -68,17 +68,23 @@ function styleOf(a: Attrs): string {
 export function toCells(line: string): Cell[] | undefined {
   const attrs: Attrs = {flags: new Set(), fg: '', bg: ''};
   const cells: Cell[] = [];
-  const re = /\u001B\[([0-9;]*)m|([\s\S])/gu;
   let style = '';
-  for (const m of line.matchAll(re)) {
-    if (m[1] !== undefined) {
-      applySgr(attrs, m[1]);
+  for (let i = 0; i < line.length; i++) {
+    const c = line.charCodeAt(i);
+    if (c === 0x1b) {
+      // Only colour and style sequences (ESC [ digits and ; m) can be placed cell by cell.
+      if (line.charCodeAt(i + 1) !== 0x5b) return undefined;
+      let j = i + 2;
+      for (let d = line.charCodeAt(j); (d >= 0x30 && d <= 0x39) || d === 0x3b; d = line.charCodeAt(++j));
+      if (line.charCodeAt(j) !== 0x6d) return undefined;
+      applySgr(attrs, line.slice(i + 2, j));
       style = styleOf(attrs);
+      i = j;
       continue;
     }
-    const ch = m[2]!;
-    if (!isSurelyNarrow(ch.codePointAt(0) ?? 0)) return undefined;
-    cells.push({ch, style});
+    // Surrogates (characters beyond the BMP) are never surely narrow.
+    if (!isSurelyNarrow(c)) return undefined;
+    cells.push({ch: line[i]!, style});
   }
   return cells;
 }
