@@ -1,7 +1,7 @@
 # Drive a program in a pseudo-terminal of a given size and time what it writes.
 # Used by scripts/bench.mjs (node-pty is not a dependency; Python's pty module is
 # in every CPython). Input: one JSON argument
-#   {"argv": [...], "env": {...}, "cols": 80, "rows": 24, "steps": [{"send": "...", "digit": bool}],
+#   {"argv": [...], "env": {...}, "cols": 80, "rows": 24, "steps": [{"send": "...", "digit": bool} or {"wait": seconds}],
 #    "ready": "text that marks the first full frame", "gap": seconds between keys}
 # Output: one JSON document on stdout with the timings (seconds) and byte counts.
 import json, os, pty, select, struct, sys, termios, fcntl, time
@@ -48,6 +48,9 @@ read_for(0.3)  # let the start settle (resize handling, second frame)
 
 results = []
 for step in cfg["steps"]:
+    if "wait" in step:  # only let time pass (e.g. for the code cache to be written)
+        read_for(step["wait"])
+        continue
     data = step["send"].encode()
     start = len(buf)
     t_send = time.monotonic()
