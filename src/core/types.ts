@@ -63,6 +63,9 @@ export interface InternalLimits {
   majorMin: number;
 }
 
+/** Where one side's limits of size came from: a table of the standard, or the formulas as a labelled fallback. */
+export type LimitsSideProvenance = Provenance & {method: 'table' | 'formula'};
+
 /** Full geometry of a fastener thread pair (external + internal) for its tolerance classes. */
 export interface ThreadGeometry {
   spec: ThreadSpec;
@@ -82,7 +85,8 @@ export interface ThreadGeometry {
   stressArea: number;
   /** Area at d3, mm². */
   minorArea: number;
-  limits: {external: ExternalLimits; internal: InternalLimits};
+  /** Limits of size; each side also says where its own values came from (`method`, `source`, `kind`). */
+  limits: {external: ExternalLimits & LimitsSideProvenance; internal: InternalLimits & LimitsSideProvenance};
   /** Where the limits came from: a shipped table of the standard, or the generating formulas as a fallback. */
   limitsProvenance: Provenance & {method: 'table' | 'formula'};
   /** Plain-language notes (special thread, formula fallback, ...). */

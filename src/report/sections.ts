@@ -9,6 +9,7 @@ import type {JointInput} from '../core/joint/input.js';
 import type {Flag, Range} from '../core/types.js';
 import {flagsInUnits, notesInUnits} from '../core/joint/index.js';
 import {CONVERSION, formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../core/units.js';
+import {limitsSides, limitsSummary} from '../core/threads/limits-provenance.js';
 
 export interface Row {
   label: string;
@@ -238,7 +239,8 @@ export function limitsLines(result: CheckResult, f: Fmt): string[] {
     st.limitsUsed === 'worst-case'
       ? `Shear areas at the least-material limits of size: internal minor diameter max ${q(l.knMax, 'length', f, 4)}, external pitch diameter min ${q(l.esMin, 'length', f, 4)}, external major diameter min ${q(l.dsMin, 'length', f, 4)}, internal pitch diameter max ${q(l.enMax, 'length', f, 4)}.`
       : 'Shear areas at the basic dimensions of the thread profile.',
-    `Limits of size for ${g.spec.toleranceInternal}/${g.spec.toleranceExternal}: ${g.limitsProvenance.source} (${g.limitsProvenance.method === 'table' ? 'table values' : 'generating formulas, used as a fallback'}).`,
+    // One side at a time: a pair may mix a table side and a formula side (each side's source under the sources).
+    `Limits of size: ${limitsSummary(g)}.`,
     'Tightening limit: von Mises utilisation of the bolt minimum Rp0.2 during tightening (VDI 2230 Part 1).',
   ];
 }
@@ -249,7 +251,7 @@ export function sourceLines(result: CheckResult): string[] {
     ...result.sources,
     `Bolt ${result.materials.bolt.id}: ${result.materials.bolt.provenance.source}`,
     `Internal thread ${result.materials.internal.id}: ${result.materials.internal.provenance.source}`,
-    `Thread limits: ${result.geometry.limitsProvenance.source}`,
+    ...limitsSides(result.geometry).map(s => `Thread limits, ${s.side} ${s.cls}: ${s.source}`),
   ];
   return [...new Set(all)];
 }

@@ -84,6 +84,67 @@ describe('tapwright threads', () => {
     expect(none.notes.join(' ')).toMatch(/not read from the ASME B1\.1 tables/);
   });
 
+  it('--json says per side where the limits come from, keeping the overall method and source', async () => {
+    const geometryOf = async (t: string) => JSON.parse((await run(t, '--json')).out).geometry;
+    const sides = (g: {limits: Record<'external' | 'internal', {method: string; source: string}>}) => ({
+      external: g.limits.external.method,
+      internal: g.limits.internal.method,
+    });
+    // Metric: ISO 965-1:1998 tables for 6H and 6g (the values agree with the ISO 965-2 limits, M10 above)
+    const m = await geometryOf('M10x1.5-6H/6g');
+    expect(sides(m)).toEqual({external: 'table', internal: 'table'});
+    expect(m.limits.external.source).toMatch(/^ISO 965-1:1998 tables .*class 6g.*ISO 965-2/);
+    expect(m.limits.internal.source).toMatch(/^ISO 965-1:1998 tables .*class 6H.*ISO 965-2/);
+    expect(m.limits.external.majorMax).toBe(9.968);
+    expect(m.limitsProvenance.method).toBe('table');
+    // Unified, both sides in the ASME B1.1 standard series limits table (unified-table-data.ts:
+    // 2-56 UNC and 3-48 UNC 2A and 2B rows)
+    for (const t of ['#2-56 UNC', '#3-48 UNC-2A/2B']) {
+      const u = await geometryOf(t);
+      expect(sides(u), t).toEqual({external: 'table', internal: 'table'});
+      expect(u.limits.external.source, t).toBe('ASME B1.1 standard series limits table, class 2A');
+      expect(u.limits.internal.source, t).toBe('ASME B1.1 standard series limits table, class 2B');
+      expect(u.limitsProvenance.method, t).toBe('table');
+    }
+    // 1/4-20 UNC: class 2B row in the table (D2 max 0.2224 in), class 2A from the formulas
+    const half = await geometryOf('1/4-20 UNC');
+    expect(sides(half)).toEqual({external: 'formula', internal: 'table'});
+    expect(half.limits.internal.source).toBe('ASME B1.1 standard series limits table, class 2B');
+    expect(half.limits.external.source).toMatch(/^ASME B1\.1 tolerance formulas \(from memory\) for class 2A: .*labelled fallback/);
+    expect(half.limits.internal.pitchMax).toBeCloseTo(0.2224 * 25.4, 6);
+    // the overall method keeps its meaning: 'table' only when both sides are
+    expect(half.limitsProvenance.method).toBe('formula');
+    expect(half.limitsProvenance.source).toMatch(/table for one side/);
+    // Special threads: formulas on both sides
+    const special = await geometryOf('M10x1.3');
+    expect(sides(special)).toEqual({external: 'formula', internal: 'formula'});
+    expect(special.limits.external.source).toMatch(/^ISO 965-1 generating formulas .*labelled fallback/);
+    expect(special.limits.internal.source).toMatch(/^ISO 965-1 generating formulas .*labelled fallback/);
+    const unJson = JSON.parse((await run('1/4-24 UN', '--json')).out);
+    expect(unJson.spec.isStandardPitch).toBe(false);
+    const un = unJson.geometry;
+    expect(sides(un)).toEqual({external: 'formula', internal: 'formula'});
+    expect(un.limits.internal.source).toMatch(/^ASME B1\.1 tolerance formulas \(from memory\) for class 2B: .*labelled fallback/);
+    // the contract keys are all still numbers
+    for (const g of [m, half, special, un]) {
+      for (const k of ['majorMax', 'majorMin', 'pitchMax', 'pitchMin']) expect(typeof g.limits.external[k]).toBe('number');
+      for (const k of ['minorMin', 'minorMax', 'pitchMin', 'pitchMax', 'majorMin']) expect(typeof g.limits.internal[k]).toBe('number');
+    }
+  });
+
+  it('text says per side which limits are table values and which come from the formulas', async () => {
+    const r = await run('1/4-20 UNC', '--units', 'us');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('Limits of size: 2B from the table, 2A from formulas (fallback).');
+    expect(r.out).toContain('  internal 2B [table]: ASME B1.1 standard series limits table, class 2B');
+    expect(r.out).toMatch(/^ {2}external 2A \[formula\]: ASME B1\.1 tolerance formulas/m);
+    for (const l of r.out.split('\n')) expect(l.length).toBeLessThanOrEqual(80);
+    const m = await run('M10x1.5-7H/6g');
+    expect(m.out).toContain('Limits of size: 7H from the table (from memory), 6g from the table.');
+    const both = await run('#2-56 UNC');
+    expect(both.out).toContain('Limits of size: 2B and 2A from the table.');
+  });
+
   it('a special thread says so and labels the formula limits', async () => {
     const r = await run('M10x1.3');
     expect(r.code).toBe(0);

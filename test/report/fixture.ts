@@ -47,8 +47,8 @@ export function demoResult(overrides: Partial<CheckResult> = {}): CheckResult {
       stressArea: 58,
       minorArea: 52.3,
       limits: {
-        external: {majorMax: 9.97, majorMin: 9.73, pitchMax: 8.99, pitchMin: 8.86},
-        internal: {minorMin: 8.38, minorMax: 8.68, pitchMin: 9.03, pitchMax: 9.21, majorMin: 10},
+        external: {majorMax: 9.97, majorMin: 9.73, pitchMax: 8.99, pitchMin: 8.86, method: 'table', kind: 'demo', source: 'demo limits table, class 6g'},
+        internal: {minorMin: 8.38, minorMax: 8.68, pitchMin: 9.03, pitchMax: 9.21, majorMin: 10, method: 'table', kind: 'demo', source: 'demo limits table, class 6H'},
       },
       limitsProvenance: {source: 'demo limits table', kind: 'demo', method: 'table'},
       notes: [],

@@ -28,7 +28,7 @@ export function fixtureResult(input: JointInput): CheckResult {
     geometry: {
       spec: {family: 'metric', designation: `${input.thread}-6H/6g`, sizeLabel: 'M10', nominal: 10, pitch: 1.5, isStandardPitch: true, starts: 1, lead: 1.5, toleranceExternal: '6g', toleranceInternal: '6H', toleranceDefaulted: true, series: 'coarse'},
       nominal: 10, pitch: 1.5, fundamentalHeight: 1.299, pitchDiameter: 9.026, minorDiameterExternal: 8.16, minorDiameterInternal: 8.376, stressArea: 58, minorArea: 52.3,
-      limits: {external: {majorMax: 9.968, majorMin: 9.732, pitchMax: 8.994, pitchMin: 8.862}, internal: {minorMin: 8.376, minorMax: 8.676, pitchMin: 9.026, pitchMax: 9.206, majorMin: 10}},
+      limits: {external: {majorMax: 9.968, majorMin: 9.732, pitchMax: 8.994, pitchMin: 8.862, method: 'table', kind: 'demo', source: 'fixture table, class 6g'}, internal: {minorMin: 8.376, minorMax: 8.676, pitchMin: 9.026, pitchMax: 9.206, majorMin: 10, method: 'table', kind: 'demo', source: 'fixture table, class 6H'}},
       limitsProvenance: {source: 'fixture table', kind: 'demo', method: 'table'},
       notes: [],
     },

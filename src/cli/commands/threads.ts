@@ -7,7 +7,7 @@ import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {formatOption, parseOptions, unitsOption} from '../args.js';
 import {toAscii} from '../../report/text.js';
-import {parseThread, threadGeometry, ACCEPTED_FORMS} from '../../core/threads/index.js';
+import {parseThread, threadGeometry, limitsSides, limitsSummary, ACCEPTED_FORMS} from '../../core/threads/index.js';
 import {CAUTION_SHORT} from '../../core/cautions.js';
 import type {ThreadGeometry, ThreadSpec} from '../../core/types.js';
 import type {UnitSystem} from '../../core/units.js';
@@ -41,7 +41,9 @@ Options:
 
 Shows the basic profile (d, P, H, d2, d3, D1), the tensile stress area and
 the minor-diameter area, and the limits of size of the external and internal
-thread for the tolerance classes, with the source of the limits.
+thread for the tolerance classes, and for each side (internal, external)
+whether its limits are read from a table of the standard or computed from
+the formulas as a fallback, with the source.
 `;
 
 function wrap(text: string, first: string, indent: string): string[] {
@@ -122,7 +124,9 @@ function geometryText(g: ThreadGeometry, units: UnitSystem): string[] {
   out.push(row('', 'major D', '-', len(i.majorMin, units)));
   if (s.toleranceDefaulted) out.push('  (class not fully given: default applied)');
   out.push('');
-  out.push(...wrap(`${g.limitsProvenance.source} [${g.limitsProvenance.method}]`, 'Source: ', '        '));
+  // Where the limits come from, one side at a time (a pair may mix a table side and a formula side).
+  out.push(...wrap(`${limitsSummary(g)}.`, 'Limits of size: ', '  '));
+  for (const side of limitsSides(g)) out.push(...wrap(side.source, `  ${side.side} ${side.cls} [${side.method}]: `, '    '));
   for (const n of g.notes) out.push(...wrap(n, '  - ', '    '));
   return out;
 }

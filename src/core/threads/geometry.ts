@@ -11,6 +11,7 @@ import type {ThreadGeometry, ThreadSpec} from '../types.js';
 import {metricLimits} from './metric-limits.js';
 import {unifiedLimits} from './unified-limits.js';
 import {parseMetricClass, parseUnifiedClass} from './tolerance-class.js';
+import {unifiedSideProvenance} from './limits-provenance.js';
 
 const IN = 25.4;
 
@@ -99,7 +100,10 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
   }
   return {
     ...basic(stressArea),
-    limits: {external: lim.external, internal: lim.internal},
+    limits: {
+      external: {...lim.external, ...unifiedSideProvenance(ext, lim.source.external)},
+      internal: {...lim.internal, ...unifiedSideProvenance(int, lim.source.internal)},
+    },
     limitsProvenance: fromTable
       ? {source: 'ASME B1.1 standard series limits table', kind: 'standard', method: 'table'}
       : computed.length === 2

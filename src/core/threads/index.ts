@@ -9,3 +9,4 @@ export {METRIC_SERIES, metricRow} from './metric-series.js';
 export {UNIFIED_SERIES, unifiedRow} from './unified-series.js';
 export {TRAPEZOIDAL_SERIES, ACME_SERIES} from './power-series.js';
 export {parseMetricClass, parseUnifiedClass} from './tolerance-class.js';
+export {fromWords, limitsSides, limitsSummary, methodWords, type LimitsSide} from './limits-provenance.js';

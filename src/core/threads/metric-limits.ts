@@ -11,10 +11,11 @@
  *             D2 max = D2 min + TD2, D min = D + EI
  * All in mm; deviations and tolerances in µm.
  */
-import type {ExternalLimits, InternalLimits, Provenance} from '../types.js';
+import type {ExternalLimits, InternalLimits, LimitsSideProvenance, Provenance} from '../types.js';
 import type {MetricClass} from './tolerance-class.js';
 import {formulaDeviation, formulaTd, formulaTD1, formulaTd2, formulaTD2} from './iso965-formulas.js';
 import {tableTolerances} from './iso965-tables.js';
+import {metricSideProvenance} from './limits-provenance.js';
 
 export interface MetricTolerances {
   /** Upper deviation of the external thread, µm (<= 0). */
@@ -28,8 +29,8 @@ export interface MetricTolerances {
 }
 
 export interface MetricLimitsResult {
-  external: ExternalLimits;
-  internal: InternalLimits;
+  external: ExternalLimits & LimitsSideProvenance;
+  internal: InternalLimits & LimitsSideProvenance;
   tolerances: MetricTolerances;
   provenance: Provenance & {method: 'table' | 'formula'};
   notes: string[];
@@ -43,9 +44,10 @@ export function metricTolerances(
   P: number,
   ext: MetricClass,
   int: MetricClass,
-): {tol: MetricTolerances; method: 'table' | 'formula'; source: string; checked: boolean; missing: string[]} {
+): {tol: MetricTolerances; method: 'table' | 'formula'; source: string; checked: boolean; missing: string[]; tableKeys: string[]} {
   const t = tableTolerances(d, P, ext, int);
-  if (t.complete) return {tol: t.values as MetricTolerances, method: 'table', source: t.source, checked: t.checked, missing: []};
+  const tableKeys = Object.keys(t.values);
+  if (t.complete) return {tol: t.values as MetricTolerances, method: 'table', source: t.source, checked: t.checked, missing: [], tableKeys};
   // Per value: the table where it has an entry, the generating formula where it has none.
   const v = t.values;
   const f: MetricTolerances = {
@@ -65,6 +67,7 @@ export function metricTolerances(
       : 'ISO 965-1 generating formulas (from memory of ISO 965-1), rounded to 1 µm',
     checked: false,
     missing: t.missing,
+    tableKeys,
   };
 }
 
@@ -78,28 +81,30 @@ export function metricLimits(d: number, P: number, ext: MetricClass, int: Metric
   const H = 0.8660254037844386 * P;
   const d2 = d - 0.649519052838329 * P;
   const D1 = d - 1.0825317547305482 * P;
-  const {tol, method, source, checked, missing} = metricTolerances(d, P, ext, int);
+  const {tol, method, source, checked, missing, tableKeys} = metricTolerances(d, P, ext, int);
   const es = tol.es / 1000;
   const EI = tol.EI / 1000;
   const pitchMax = r3(d2 + es);
   const pitchMinExact = d2 + es - tol.Td2 / 1000;
   const pitchMin = r3(pitchMinExact);
   const majorMax = r3(d + es);
-  const external: ExternalLimits = {
+  const external: ExternalLimits & LimitsSideProvenance = {
     majorMax,
     majorMin: r3(majorMax - tol.Td / 1000),
     pitchMax,
     pitchMin,
     minorMin: r3(pitchMinExact - 2 * (H / 2 - 0.125 * P)),
+    ...metricSideProvenance(ext, tableKeys),
   };
   const minorMin = r3(D1 + EI);
   const pitchMinI = r3(d2 + EI);
-  const internal: InternalLimits = {
+  const internal: InternalLimits & LimitsSideProvenance = {
     minorMin,
     minorMax: r3(minorMin + tol.TD1 / 1000),
     pitchMin: pitchMinI,
     pitchMax: r3(pitchMinI + tol.TD2 / 1000),
     majorMin: r3(d + EI),
+    ...metricSideProvenance(int, tableKeys),
   };
   const notes: string[] = [];
   if (method === 'formula') {

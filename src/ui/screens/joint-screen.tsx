@@ -6,6 +6,7 @@ import React from 'react';
 import {Box, Text} from 'ink';
 import type {Flag} from '../../core/types.js';
 import {formatQuantity} from '../../core/units.js';
+import {limitsSides, methodWords} from '../../core/threads/limits-provenance.js';
 import {STEPS, getValue, stepsFor, type FieldDef} from '../state/fields.js';
 import {fieldUnit, formatField} from '../state/field-text.js';
 import {currentField, currentFields, pickerItems, shownValues, type WorkbenchState} from '../state/workbench.js';
@@ -109,12 +110,18 @@ function threadInfoLines(ev: Evaluation, state: WorkbenchState, width: number, h
     `d2 ${L(g.pitchDiameter)}  d3 ${L(g.minorDiameterExternal)}`,
     `stress area As ${a(g.stressArea)}`,
     `classes ${g.spec.toleranceInternal}/${g.spec.toleranceExternal}${g.spec.toleranceDefaulted ? ' (default)' : ''}`,
-    `limits: ${g.limitsProvenance.method === 'table' ? 'table' : 'formulas'}, ${g.limitsProvenance.source}`,
-    ...g.notes,
   ];
-  return lines
-    .flatMap((l, i) => wrap(l, width - 2, 3, t.sym.ellipsis).map((w, j): Line => ({text: j ? `  ${w}` : w, color: i === 0 ? undefined : t.tone('dim')})))
-    .slice(0, height);
+  // Where the limits come from, one side at a time (a pair may mix a table side and a
+  // formula side); two lines a side when three would push the second side off the panel.
+  const sides = limitsSides(g).map(side => `${side.cls} limits: ${methodWords(side)}, ${side.source}`);
+  const sideLines = height >= lines.length + 6 ? 3 : 2;
+  const wrapped = (l: string, i: number, max: number) =>
+    wrap(l, width - 2, max, t.sym.ellipsis).map((w, j): Line => ({text: j ? `  ${w}` : w, color: i === 0 ? undefined : t.tone('dim')}));
+  return [
+    ...lines.flatMap((l, i) => wrapped(l, i, 3)),
+    ...sides.flatMap(l => wrapped(l, 1, sideLines)),
+    ...g.notes.flatMap(l => wrapped(l, 1, 3)),
+  ].slice(0, height);
 }
 
 function LeftColumn({state, ev, sev, svc, width, height}: Props) {
