@@ -50,7 +50,8 @@ const TABS: readonly {screen: Screen; key: string; title: string}[] = [
 // The header, preset line and caution change rarely: memoised, so a keystroke re-renders only what it changes.
 const Header = React.memo(function Header({screen, unitSystem, width}: {screen: Screen; unitSystem: 'si' | 'us'; width: number}) {
   const t = useTheme();
-  const units = unitSystem === 'si' ? 'Units SI' : 'Units US';
+  // The units key sits beside the units it switches, as the screen keys sit beside their tabs.
+  const units = unitSystem === 'si' ? 'u Units SI' : 'u Units US';
   return (
     <Box width={width}>
       <Text bold color={t.tone('accent')}>tapwright </Text>
@@ -163,9 +164,13 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
   const sev = state.mode === 'screw' ? evaluateScrew(shownValues(state), svc, state.units, state.ascii) : undefined;
   const height = rows - 1;
+  // The hint area keeps the height of the screen's own hints while a field is edited or a
+  // picker or question is open, so the screen below does not move by a line (and repaint).
   const hints = hintLines(contextsOf(state), t.ascii, columns);
+  const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns).length);
+  while (hints.length < hintRows) hints.push('');
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
-  const bodyH = bodyHeight({columns, rows}) - (hints.length - 1) - promptError;
+  const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;
   let body: React.ReactNode;
   switch (state.screen) {
     case 'joint':

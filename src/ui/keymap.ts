@@ -65,7 +65,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'go.presets', keys: [c('p')], context: 'screens', description: 'Presets screen: load, save, rename, import, export'},
   {command: 'go.report', keys: [c('w')], context: 'screens', description: 'Report screen: preview and write the work-order report'},
   {command: 'go.help', keys: [c('?'), c('h')], context: 'screens', description: 'This help'},
-  {command: 'units.toggle', keys: [c('u')], context: 'screens', hint: 'SI/US', description: 'Switch units between SI and US customary'},
+  {command: 'units.toggle', keys: [c('u')], context: 'screens', description: 'Switch units between SI and US customary (the key is shown in the header, beside the units)'},
 
   {command: 'field.prev', keys: [k('up')], context: 'joint', hint: 'field', description: 'Previous field'},
   {command: 'field.next', keys: [k('down')], context: 'joint', description: 'Next field'},
