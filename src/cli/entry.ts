@@ -28,9 +28,10 @@ async function launchWorkbench(args: string[], cliIo: CliIo): Promise<number> {
     for (const key of ['CI', 'CONTINUOUS_INTEGRATION']) if (key in process.env) process.env[key] = 'false';
   }
   // A bad option or no terminal is answered here, without loading the workbench.
-  const {startWithoutWorkbench} = await import('../ui/launch-plain.js');
-  const start = startWithoutWorkbench(args, cliIo);
-  if (typeof start === 'number') return start;
+  const {checkStart, printWithoutTerminal} = await import('../ui/launch-plain.js');
+  const start = checkStart(args, cliIo);
+  if ('code' in start) return start.code;
+  if (start.why) return printWithoutTerminal(start.why, start.opts, start.tenv, cliIo);
   const launch = await loadWorkbench(cliIo);
   return launch(args, cliIo);
 }

@@ -3,48 +3,44 @@
  * loaded: the options are checked, and where there is no terminal for the
  * workbench (piped, cron, CI, TERM=dumb) the check report of the preset is
  * printed with a pointer to the commands, exit 2. Nothing here loads Ink or
- * React, so the bin decides this before it loads the workbench bundle.
+ * React, and the report's modules load only when the report is printed, so the
+ * bin decides cheaply before it loads the workbench bundle.
  */
 import type {CliIo} from '../cli/io.js';
-import {checkJoint} from '../core/joint/index.js';
-import {formatCheckText} from '../report/index.js';
-import {configDir} from '../store/paths.js';
-import {DEFAULT_PRESET} from '../store/shipped.js';
-import {resolvePreset} from '../store/resolve.js';
-import {readSettingsFile, type Settings} from '../store/settings-schema.js';
-import {LaunchUsageError, parseLaunchArgs, wantsAscii, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
-import {presetValues} from './real-services.js';
+import {LaunchUsageError, parseLaunchArgs, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
 
-export interface WorkbenchStart {
-  opts: ReturnType<typeof parseLaunchArgs>;
-  tenv: TerminalEnv;
-  /** The config folder. */
-  dir: string;
-  /** The settings as read without conf, and whether the file is sound. */
-  quick: {settings: Settings; sound: boolean};
-}
+export type LaunchOptions = ReturnType<typeof parseLaunchArgs>;
 
-/** An exit code when the workbench must not start (bad option, no terminal), else what it starts with. */
-export function startWithoutWorkbench(args: string[], io: CliIo): number | WorkbenchStart {
+/** An exit code for a bad option; otherwise the options, and why there is no workbench (if so). */
+export function checkStart(args: string[], io: CliIo): {code: number} | {opts: LaunchOptions; tenv: TerminalEnv; why: string | undefined} {
   let opts;
   try {
     opts = parseLaunchArgs(args);
   } catch (e) {
     if (e instanceof LaunchUsageError) {
       io.err(`tapwright: ${e.message}\n`);
-      return 2;
+      return {code: 2};
     }
     throw e;
   }
   const tenv: TerminalEnv = {env: io.env, stdinIsTTY: io.stdinIsTTY, stdoutIsTTY: io.stdoutIsTTY};
-  const dir = configDir(io.env);
-  const quick = readSettingsFile(dir);
-  const why = whyNoWorkbench(tenv);
-  if (why) return nonInteractive(why, opts.preset ?? DEFAULT_PRESET, io, wantsAscii(tenv, opts.ascii || quick.settings.ascii === true));
-  return {opts, tenv, dir, quick};
+  return {opts, tenv, why: whyNoWorkbench(tenv)};
 }
 
-function nonInteractive(why: string, presetName: string, io: CliIo, ascii: boolean): number {
+/** No terminal for the workbench: print the check report of the preset and point to the commands; exit 2. */
+export async function printWithoutTerminal(why: string, opts: LaunchOptions, tenv: TerminalEnv, io: CliIo): Promise<number> {
+  const [{checkJoint}, {formatCheckText}, {configDir}, {DEFAULT_PRESET}, {resolvePreset}, {readSettingsQuick}, {wantsAscii}, {presetValues}] = await Promise.all([
+    import('../core/joint/index.js'),
+    import('../report/index.js'),
+    import('../store/paths.js'),
+    import('../store/shipped.js'),
+    import('../store/resolve.js'),
+    import('../store/settings-schema.js'),
+    import('./terminal/env.js'),
+    import('./real-services.js'),
+  ]);
+  const presetName = opts.preset ?? DEFAULT_PRESET;
+  const ascii = wantsAscii(tenv, opts.ascii || readSettingsQuick(configDir(io.env)).ascii === true);
   const hint =
     `tapwright: the interactive workbench needs a terminal (${why}).\n` +
     `For scripts and pipes use the commands: tapwright check --preset NAME (or --thread ... --engage ...),\n` +
@@ -60,4 +56,3 @@ function nonInteractive(why: string, presetName: string, io: CliIo, ascii: boole
   }
   return 2;
 }
-

@@ -13,7 +13,9 @@ import type {SettingsHandle} from '../store/settings.js';
 import {wantsAscii, wantsColor} from './terminal/env.js';
 import {createFrameWriter} from './terminal/frame-writer.js';
 import {yogaReady} from './terminal/yoga-ready.js';
-import {startWithoutWorkbench} from './launch-plain.js';
+import {checkStart, printWithoutTerminal} from './launch-plain.js';
+import {configDir} from '../store/paths.js';
+import {readSettingsFile} from '../store/settings-schema.js';
 import {realServices} from './real-services.js';
 import {App} from './app.js';
 import {initialState, isDirty, type Message, type WorkbenchState} from './state/workbench.js';
@@ -32,9 +34,12 @@ const RESET_STYLE = '\u001B[0m';
 
 /** Start the workbench; resolves with the exit code. */
 export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {stdin: process.stdin, stdout: process.stdout}): Promise<number> {
-  const start = startWithoutWorkbench(args, io);
-  if (typeof start === 'number') return start;
-  const {opts, tenv, dir, quick} = start;
+  const start = checkStart(args, io);
+  if ('code' in start) return start.code;
+  const {opts, tenv} = start;
+  if (start.why) return printWithoutTerminal(start.why, opts, tenv, io);
+  const dir = configDir(io.env);
+  const quick = readSettingsFile(dir);
   // conf (and the JSON-schema validator it brings) is loaded only when the settings
   // file needs repair, or at the exit to save the units: a plain read serves the start.
   const openHandle = async (): Promise<SettingsHandle | undefined> => {
