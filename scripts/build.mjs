@@ -9,6 +9,8 @@
 import {build} from 'esbuild';
 import {createHash} from 'node:crypto';
 import {rmSync, chmodSync} from 'node:fs';
+import {spawnSync} from 'node:child_process';
+import {tmpdir} from 'node:os';
 import {fileURLToPath} from 'node:url';
 import path from 'node:path';
 import {startUpPlugin} from './build-support/start-up-plugin.mjs';
@@ -23,6 +25,16 @@ const outDir = outIndex > 0 ? path.resolve(process.argv[outIndex + 1]) : at('dis
 const out = p => path.join(outDir, p);
 rmSync(outDir, {recursive: true, force: true});
 
+// 0. The shipped data is checked here, once, so the bundle need not check it at
+//    every start (src/core/materials/index.ts).
+{
+  const check = path.join(tmpdir(), `tapwright-check-data-${process.pid}.mjs`);
+  await build({entryPoints: [at('scripts/build-support/check-shipped-data.ts')], bundle: true, platform: 'node', format: 'esm', outfile: check, logLevel: 'warning'});
+  const r = spawnSync(process.execPath, [check], {stdio: 'inherit', cwd: root});
+  rmSync(check, {force: true});
+  if (r.status !== 0) process.exit(1);
+}
+
 const common = {
   platform: 'node',
   target: 'node20',
@@ -33,7 +45,7 @@ const common = {
   minify: process.env.TAPWRIGHT_BUILD_READABLE !== '1',
   legalComments: 'none',
   logLevel: 'warning',
-  define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"'},
+  define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"', __TAPWRIGHT_DATA_CHECKED__: 'true'},
   alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
 };
 
