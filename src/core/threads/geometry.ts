@@ -89,13 +89,13 @@ export function threadGeometry(spec: ThreadSpec): ThreadGeometry {
     notes.push(`Limits of size ${ext.text}/${int.text} read from the ASME B1.1 standard series limits table.`);
   } else if (computed.length === 2) {
     notes.push(
-      'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by 0.0001 in.',
+      'Limits of size computed from the ASME B1.1 tolerance formulas with the tables\' rounding to 0.0001 in (0.001 in for the 2B minor diameter); not read from the ASME B1.1 tables, so a value may differ by a few 0.0001 in (0.0002 in at 2-1/2-4 UNC against the table as reprinted in Machinery\'s Handbook, 27th ed.).',
     );
   } else {
     const t = lim.source.external === 'table' ? ext : int;
     const c = lim.source.external === 'table' ? int : ext;
     notes.push(
-      `Class ${t.text} limits read from the ASME B1.1 standard series limits table; class ${c.text} computed from the ASME B1.1 tolerance formulas (not read from the tables, so a value may differ by 0.0001 in).`,
+      `Class ${t.text} limits read from the ASME B1.1 standard series limits table; class ${c.text} computed from the ASME B1.1 tolerance formulas (not read from the tables, so a value may differ by a few 0.0001 in).`,
     );
   }
   return {
