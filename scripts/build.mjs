@@ -8,7 +8,7 @@
 // first skips most of the parse and compile work. Commands never load it.
 import {build} from 'esbuild';
 import {createHash} from 'node:crypto';
-import {rmSync, chmodSync} from 'node:fs';
+import {rmSync, chmodSync, writeFileSync} from 'node:fs';
 import {spawnSync} from 'node:child_process';
 import {tmpdir} from 'node:os';
 import {fileURLToPath} from 'node:url';
@@ -64,37 +64,46 @@ const bodyText = body.outputFiles[0].text;
 const bodyHash = createHash('sha256').update(bodyText).digest('hex');
 
 // 2. The loader for that body replaces the source-mode loader (a dynamic import of
-//    src/ui/launch.ts), and the body itself is a virtual module of text.
-const workbenchPlugin = {
+//    src/ui/launch.ts), and the body is a virtual module: text inside the one-file
+//    build; a file beside its chunk in the split build (read, not parsed as a string).
+const BODY_FILE = 'workbench-body.cjs';
+const workbenchPlugin = embed => ({
   name: 'tapwright-workbench',
   setup(b) {
     b.onResolve({filter: /^\.\/workbench-loader\.js$/}, args => (path.resolve(args.resolveDir) === at('src/cli') ? {path: at('src/cli/workbench-loader-cached.ts')} : undefined));
     b.onResolve({filter: /^tapwright:workbench-body$/}, () => ({path: 'workbench-body', namespace: 'tapwright'}));
     b.onLoad({filter: /.*/, namespace: 'tapwright'}, () => ({
-      contents: `export const BODY = ${JSON.stringify(bodyText)};\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`,
+      contents: embed
+        ? `const BODY = ${JSON.stringify(bodyText)};\nexport function readBody() { return BODY; }\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`
+        : `import {readFileSync} from 'node:fs';\nexport function readBody() { return readFileSync(new URL(${JSON.stringify(`./${BODY_FILE}`)}, import.meta.url), 'utf8'); }\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`,
       loader: 'js',
     }));
   },
-};
+});
 const requireBanner = "import {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);";
 
-await build({
+const split = await build({
   ...common,
   entryPoints: {entry: at('src/cli/entry.ts')},
   format: 'esm',
   outdir: out('lib'),
   splitting: true,
   chunkNames: 'chunks/[name]-[hash]',
-  plugins: [workbenchPlugin, startUpPlugin],
+  metafile: true,
+  plugins: [workbenchPlugin(false), startUpPlugin],
   banner: {js: requireBanner},
 });
+// The body file goes beside the chunk that reads it.
+const reader = Object.entries(split.metafile.outputs).find(([, o]) => Object.keys(o.inputs).some(i => i.includes('workbench-body')));
+if (!reader) throw new Error('build: the chunk that reads the workbench body was not found');
+writeFileSync(path.join(path.dirname(path.resolve(root, reader[0])), BODY_FILE), bodyText);
 
 await build({
   ...common,
   entryPoints: [at('src/cli/entry.ts')],
   format: 'esm',
   outfile: out('tapwright.mjs'),
-  plugins: [workbenchPlugin, startUpPlugin],
+  plugins: [workbenchPlugin(true), startUpPlugin],
   banner: {js: `#!/usr/bin/env node\n${requireBanner}`},
 });
 chmodSync(out('tapwright.mjs'), 0o755);

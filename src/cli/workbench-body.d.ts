@@ -1,7 +1,7 @@
-/** The workbench bundle, as text, made by scripts/build.mjs (see workbench-loader-cached.ts). */
+/** The workbench bundle, made by scripts/build.mjs (see workbench-loader-cached.ts). */
 declare module 'tapwright:workbench-body' {
-  /** CommonJS source of the workbench (entry src/ui/launch.ts). */
-  export const BODY: string;
-  /** sha256 of BODY, hex. */
+  /** CommonJS source of the workbench (entry src/ui/launch.ts): kept as text in the one-file build, read from a file beside the split build's chunk. */
+  export function readBody(): string;
+  /** sha256 of the body, hex. */
   export const BODY_HASH: string;
 }

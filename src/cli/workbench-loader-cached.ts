@@ -17,9 +17,9 @@ export type {LaunchWorkbench} from './workbench-loader.js';
 const SAVE_AFTER_MS = 2000;
 
 export async function loadWorkbench(io: CliIo): Promise<LaunchWorkbench> {
-  const {BODY, BODY_HASH} = await import('tapwright:workbench-body');
+  const {readBody, BODY_HASH} = await import('tapwright:workbench-body');
   const here = fileURLToPath(import.meta.url);
-  const body = loadCachedBody({source: BODY, hash: BODY_HASH, filename: here, cacheDir: codeCacheDir(io.env), require: createRequire(import.meta.url)});
+  const body = loadCachedBody({source: readBody(), hash: BODY_HASH, filename: here, cacheDir: codeCacheDir(io.env), require: createRequire(import.meta.url)});
   if (io.env.TAPWRIGHT_DEBUG) process.once('exit', () => process.stderr.write(`tapwright: code cache ${body.cache}${body.file ? ` (${body.file})` : ''}\n`));
   if (body.cache === 'absent' || body.cache === 'rejected') {
     setTimeout(() => body.save(), SAVE_AFTER_MS).unref();
