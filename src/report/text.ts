@@ -63,19 +63,22 @@ function rowLines(r: Row, wrap: Wrap): string[] {
   return out;
 }
 
+// Written as escapes (middle dot, times, superscript 2 and 3, >=, <=, en and em dash,
+// micro and mu, degree, quotes, ellipsis) so the bundle stays ASCII and V8 keeps its
+// source as one byte a character.
 const ASCII_MAP: [RegExp, string][] = [
-  [/·/g, '*'],
-  [/×/g, 'x'],
-  [/²/g, '^2'],
-  [/³/g, '^3'],
-  [/≥/g, '>='],
-  [/≤/g, '<='],
-  [/[–—]/g, '-'],
-  [/[µμ]/g, 'u'],
-  [/°/g, ' deg'],
-  [/[‘’]/g, "'"],
-  [/[“”]/g, '"'],
-  [/…/g, '...'],
+  [/\u00b7/g, '*'],
+  [/\u00d7/g, 'x'],
+  [/\u00b2/g, '^2'],
+  [/\u00b3/g, '^3'],
+  [/\u2265/g, '>='],
+  [/\u2264/g, '<='],
+  [/[\u2013\u2014]/g, '-'],
+  [/[\u00b5\u03bc]/g, 'u'],
+  [/\u00b0/g, ' deg'],
+  [/[\u2018\u2019]/g, "'"],
+  [/[\u201c\u201d]/g, '"'],
+  [/\u2026/g, '...'],
 ];
 
 /** Replace the few non-ASCII symbols a report uses, and anything else left, with ASCII. */

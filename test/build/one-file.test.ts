@@ -1,6 +1,6 @@
 import {describe, expect, it, beforeAll} from 'vitest';
 import {execFileSync, spawnSync} from 'node:child_process';
-import {mkdtempSync, copyFileSync, rmSync} from 'node:fs';
+import {mkdtempSync, copyFileSync, rmSync, readFileSync} from 'node:fs';
 import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
@@ -45,6 +45,10 @@ describe('one-file build (dist/tapwright.mjs)', () => {
     expect(j.geometry.nominal).toBe(10);
     // ISO 261/262: M10 coarse pitch 1.5 mm.
     expect(j.geometry.pitch).toBe(1.5);
+  });
+  it('is ASCII throughout, so V8 keeps the code and the workbench text one byte a character', () => {
+    const bytes = readFileSync(file);
+    expect(bytes.findIndex(b => b > 0x7f)).toBe(-1);
   });
   it('does not start the workbench without a terminal', () => {
     const r = run([]);

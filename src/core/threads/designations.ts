@@ -76,7 +76,7 @@ export function listDesignations(family?: ThreadFamily): readonly string[] {
 }
 
 function normalize(s: string): string {
-  return s.toLowerCase().replace(/×/g, 'x').replace(/\s+/g, '');
+  return s.toLowerCase().replace(/\u00d7/g, 'x').replace(/\s+/g, '');
 }
 
 /** Drop a trailing tolerance class so "M10x1.6-6g" compares as "m10x1.6". */

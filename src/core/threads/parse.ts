@@ -25,7 +25,7 @@ const METRIC_P = {min: 0.2, max: 8};
  * values, and the nearest standard designations.
  */
 export function parseThread(text: string): Parsed<ThreadSpec> {
-  const raw = (text ?? '').replace(/×/g, 'x').replace(/\s+/g, ' ').trim();
+  const raw = (text ?? '').replace(/\u00d7/g, 'x').replace(/\s+/g, ' ').trim();
   if (raw === '') return {ok: false, error: `designation is empty; accepted forms: ${ACCEPTED_FORMS}`};
   if (/^tr\s*\d/i.test(raw)) return parseTrapezoidal(raw);
   if (/acme/i.test(raw)) return parseAcme(raw);
