@@ -1,6 +1,7 @@
 import {EventEmitter} from 'node:events';
 import {describe, expect, it} from 'vitest';
-import {createFrameWriter, diffFrames, toCells} from '../../src/ui/terminal/frame-writer.js';
+import fc from 'fast-check';
+import {createFrameWriter, diffFrames, paintFrame, toCells} from '../../src/ui/terminal/frame-writer.js';
 import {VirtualTerminal} from '../support/virtual-terminal.js';
 
 function fakeOut(term: VirtualTerminal) {
@@ -83,5 +84,35 @@ describe('frame writer', () => {
     out.emit('resize');
     w.write(inkWrite('one\nthree', 3));
     expect(term.text()).toBe('one\nthree');
+  });
+
+  it('any frame followed by any other leaves exactly the other on screen (cursor moves relative and absolute)', () => {
+    const piece = fc.constantFrom('a', 'b', ' ', '        ', '1.25', 'kN', '\u00b7', '\u2588', '\u2192', '\u001B[1m', '\u001B[22m', '\u001B[31m', '\u001B[39m', '\u4e2d');
+    const line = fc.array(piece, {maxLength: 30}).map(p => p.join(''));
+    const frame = fc.array(line, {minLength: 1, maxLength: 12});
+    const plain = (l: string) => l.replace(/\u001B\[[0-9;]*m/g, '');
+    fc.assert(
+      fc.property(frame, frame, (a, b) => {
+        const term = new VirtualTerminal(120, 24);
+        term.write(paintFrame(a));
+        term.write(diffFrames(a, b, 120));
+        expect(term.text()).toBe(b.map(l => plain(l).trimEnd()).join('\n').replace(/\n+$/, ''));
+      }),
+      {numRuns: 400},
+    );
+  });
+
+  it('moves the cursor right on a line, or to the next line, in fewer bytes than an absolute position', () => {
+    const pad = ' '.repeat(10);
+    const a = Array.from({length: 12}, (_, i) => `row ${i}`).concat([`Stripping  bolt 64.5 kN, weaker side:${pad}hole 24.7 kN`, 'x']);
+    const b = [...a.slice(0, 12), `Stripping  bolt 58.2 kN, weaker side:${pad}hole 22.3 kN`, 'y'];
+    const bytes = diffFrames(a, b, 80);
+    expect(bytes).toContain('\u001B[13;17H'); // the first change: an absolute position
+    expect(bytes).toMatch(/^\u001B\[13;17H58\.2\u001B\[\d+C2\.3/); // then a move right on the same line
+    expect(bytes).toContain('\r\ny'); // then the start of the next line
+    const term = new VirtualTerminal();
+    term.write(paintFrame(a));
+    term.write(bytes);
+    expect(term.text()).toBe(b.join('\n'));
   });
 });

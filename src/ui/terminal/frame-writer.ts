@@ -92,10 +92,34 @@ export function toCells(line: string): Cell[] | undefined {
 const at = (row: number, col: number) => `\u001B[${row};${col}H`;
 const sgr = (style: string) => (style === '' ? '\u001B[0m' : `\u001B[0;${style}m`);
 
-/** The bytes that turn `prev` (on screen) into `next`, both lists of frame lines. */
-export function diffFrames(prev: readonly string[], next: readonly string[]): string {
+/**
+ * The bytes that turn `prev` (on screen) into `next`, both lists of frame lines,
+ * on a terminal `columns` wide. The cursor is moved by whichever is shorter: an
+ * absolute position, a move right on the same line, or CR LF to the next line.
+ */
+export function diffFrames(prev: readonly string[], next: readonly string[], columns = Number.POSITIVE_INFINITY): string {
   let out = '';
   let pen = '';
+  // Where the cursor is (0-based), or -1 when not known.
+  let curRow = -1;
+  let curCol = -1;
+  const moveTo = (r: number, c: number) => {
+    const abs = at(r + 1, c + 1);
+    let best = abs;
+    if (r === curRow && curCol >= 0 && curCol < columns) {
+      if (c === curCol) best = '';
+      else if (c > curCol) {
+        const right = `\u001B[${c - curCol}C`;
+        if (right.length < best.length) best = right;
+      }
+    } else if (curRow >= 0 && r === curRow + 1) {
+      const down = c === 0 ? '\r\n' : `\r\n\u001B[${c}C`;
+      if (down.length < best.length) best = down;
+    }
+    out += best;
+    curRow = r;
+    curCol = c;
+  };
   const setPen = (style: string) => {
     if (style !== pen) {
       out += sgr(style);
@@ -110,7 +134,9 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
     const cb = toCells(b);
     if (!ca || !cb) {
       setPen('');
-      out += `${at(r + 1, 1)}${b}\u001B[0m\u001B[K`;
+      moveTo(r, 0);
+      out += `${b}\u001B[0m\u001B[K`;
+      curRow = -1; // the width of what was written is not known
       continue;
     }
     const blank: Cell = {ch: ' ', style: ''};
@@ -128,7 +154,7 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
         continue;
       }
       // A run of changes; a stretch of equal cells inside it is rewritten when
-      // that is cheaper than a jump (a cursor position costs about 8 bytes).
+      // that is cheaper than a jump (a move right costs 4 or 5 bytes).
       let end = i + 1;
       let gapBytes = 0;
       for (let j = end; j < cb.length; j++) {
@@ -137,10 +163,10 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
           gapBytes = 0;
         } else {
           gapBytes += cost(j);
-          if (gapBytes > 8) break;
+          if (gapBytes > 5) break;
         }
       }
-      out += at(r + 1, i + 1);
+      moveTo(r, i);
       let k = i;
       while (k < end) {
         // Blank stretches are erased (ECH) rather than written as spaces.
@@ -150,11 +176,15 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
           setPen('');
           out += `\u001B[${blanks}X`;
           k += blanks;
-          if (k < end) out += `\u001B[${blanks}C`;
+          if (k < end) {
+            out += `\u001B[${blanks}C`;
+            curCol += blanks;
+          }
           continue;
         }
         setPen(cb[k]!.style);
         out += cb[k]!.ch;
+        curCol++;
         k++;
       }
       i = end;
@@ -164,13 +194,15 @@ export function diffFrames(prev: readonly string[], next: readonly string[]): st
       for (let k = cb.length; k < width; k++) if (!same(k)) tailDiffers = true;
       if (tailDiffers) {
         setPen('');
-        out += `${at(r + 1, cb.length + 1)}\u001B[K`;
+        moveTo(r, cb.length);
+        out += '\u001B[K';
       }
     }
   }
   if (prev.length > next.length) {
     setPen('');
-    out += `${at(next.length + 1, 1)}\u001B[J`;
+    moveTo(next.length, 0);
+    out += '\u001B[J';
   }
   setPen('');
   return out;
@@ -231,7 +263,7 @@ export function createFrameWriter(out: NodeJS.WriteStream): FrameWriter {
       return send(before + data);
     }
     const lines = body.slice(0, -1).split('\n');
-    const bytes = screen ? diffFrames(screen, lines) : paintFrame(lines);
+    const bytes = screen ? diffFrames(screen, lines, out.columns || Number.POSITIVE_INFINITY) : paintFrame(lines);
     screen = lines;
     // The cursor is hidden, so it may stay where the last change left it; it is put back
     // where Ink believes it is (the line below the frame) before any write of Ink's own.
