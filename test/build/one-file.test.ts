@@ -50,6 +50,14 @@ describe('one-file build (dist/tapwright.mjs)', () => {
     const bytes = readFileSync(file);
     expect(bytes.findIndex(b => b > 0x7f)).toBe(-1);
   });
+  it('keeps settings through conf (built without the schema validator conf leaves unused)', () => {
+    const set = run(['settings', 'set', 'units', 'us']);
+    expect(set.status).toBe(0);
+    expect(set.stderr).toMatch(/units set to us/);
+    const show = run(['settings']);
+    expect(show.status).toBe(0);
+    expect(show.stdout).toMatch(/units\s+us/);
+  });
   it('does not start the workbench without a terminal', () => {
     const r = run([]);
     expect(r.status).toBe(2);
