@@ -41,9 +41,23 @@ def read_for(seconds, until=None):
         if until is not None and until(bytes(buf[start:])):
             return bytes(buf[start:]), time.monotonic()
 
+def cpu_seconds():
+    """CPU time of the program so far: its main thread, and all its threads (Linux schedstat)."""
+    try:
+        with open(f"/proc/{pid}/schedstat") as f:
+            main = int(f.read().split()[0]) / 1e9
+        total = 0.0
+        for t in os.listdir(f"/proc/{pid}/task"):
+            with open(f"/proc/{pid}/task/{t}/schedstat") as f:
+                total += int(f.read().split()[0]) / 1e9
+        return main, total
+    except (OSError, ValueError, IndexError):
+        return None, None
+
 ready = cfg["ready"].encode()
 _, t_ready = read_for(20, lambda b: ready in b and b.rstrip().endswith(ESU))
 first_frame = (t_ready - t0) if t_ready else None
+first_frame_cpu = cpu_seconds() if t_ready else (None, None)
 read_for(0.3)  # let the start settle (resize handling, second frame)
 
 results = []
@@ -79,4 +93,4 @@ try:
     code = os.waitstatus_to_exitcode(st)
 except ChildProcessError:
     code = None
-print(json.dumps({"firstFrame": first_frame, "steps": results, "total": len(buf), "mem": mem, "exitCode": code}))
+print(json.dumps({"firstFrame": first_frame, "firstFrameCpuMain": first_frame_cpu[0], "firstFrameCpuAll": first_frame_cpu[1], "steps": results, "total": len(buf), "mem": mem, "exitCode": code}))
