@@ -74,8 +74,8 @@ const workbenchPlugin = embed => ({
     b.onResolve({filter: /^tapwright:workbench-body$/}, () => ({path: 'workbench-body', namespace: 'tapwright'}));
     b.onLoad({filter: /.*/, namespace: 'tapwright'}, () => ({
       contents: embed
-        ? `const BODY = ${JSON.stringify(bodyText)};\nexport function readBody() { return BODY; }\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`
-        : `import {readFileSync} from 'node:fs';\nexport function readBody() { return readFileSync(new URL(${JSON.stringify(`./${BODY_FILE}`)}, import.meta.url), 'utf8'); }\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`,
+        ? `const BODY = ${JSON.stringify(bodyText)};\nexport function readBody() { return BODY; }\nexport const BODY_FILE = undefined;\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`
+        : `import {readFileSync} from 'node:fs';\nimport {fileURLToPath} from 'node:url';\nexport const BODY_FILE = fileURLToPath(new URL(${JSON.stringify(`./${BODY_FILE}`)}, import.meta.url));\nexport function readBody() { return readFileSync(BODY_FILE, 'utf8'); }\nexport const BODY_HASH = ${JSON.stringify(bodyHash)};\n`,
       loader: 'js',
     }));
   },

@@ -24,9 +24,10 @@ export async function loadWorkbench(io: CliIo): Promise<LaunchWorkbench> {
   // typing, for a scavenge of well under a millisecond more per key (npm run bench).
   // Set before the body is compiled: V8 keys its code cache to the flags.
   v8.setFlagsFromString('--semi-space-growth-factor=1');
-  const {readBody, BODY_HASH} = await import('tapwright:workbench-body');
-  const here = fileURLToPath(import.meta.url);
-  const body = loadCachedBody({source: readBody(), hash: BODY_HASH, filename: here, cacheDir: codeCacheDir(io.env), require: createRequire(import.meta.url)});
+  const {readBody, BODY_FILE, BODY_HASH} = await import('tapwright:workbench-body');
+  // Stack traces and profiles name the body's own file, or the one-file build's file with #workbench.
+  const filename = BODY_FILE ?? `${fileURLToPath(import.meta.url)}#workbench`;
+  const body = loadCachedBody({source: readBody(), hash: BODY_HASH, filename, cacheDir: codeCacheDir(io.env), require: createRequire(import.meta.url)});
   if (io.env.TAPWRIGHT_DEBUG) process.once('exit', () => process.stderr.write(`tapwright: code cache ${body.cache}${body.file ? ` (${body.file})` : ''}\n`));
   if (body.cache === 'absent' || body.cache === 'rejected') {
     setTimeout(() => body.save(), SAVE_AFTER_MS).unref();
