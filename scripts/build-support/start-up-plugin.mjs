@@ -20,10 +20,16 @@
 //    allocated about 7 MB a frame at 80x24, which made V8 grow its young generation
 //    and the workbench's resident memory by some 30 MB while typing. The patches keep
 //    the result the same and the work smaller: the per-line caches live across frames
-//    (bounded), the blank cell is one shared frozen object, a line that fits its clip
-//    is not sliced, and ansi-tokenize skips the style diff between two cells of the
+//    (bounded), the blank cell is one shared frozen object, a line of simple text that
+//    fits its clip is not sliced, and ansi-tokenize skips the style diff between two cells of the
 //    same style. test/build/patches.test.ts compares patched and unpatched output.
-// 5. conf imports ajv, ajv-formats and semver for its `schema` and `migrations`
+// 5. Intl.Segmenter: string-width, slice-ansi and ansi-tokenize each make one when
+//    they load, and the first costs about 20 ms (ICU's break data). They are made
+//    on first use instead, and ansi-tokenize (which splits every line Ink draws into
+//    graphemes) splits text whose every character is its own grapheme
+//    (isSimpleText in src/ui/terminal/narrow.ts) without one, so the workbench's
+//    own text never needs ICU at all.
+// 6. conf imports ajv, ajv-formats and semver for its `schema` and `migrations`
 //    options, which tapwright never passes (conf-unused-stub.js says why); they are
 //    left out, about 180 KB less to load.
 import {readFile} from 'node:fs/promises';
@@ -54,9 +60,10 @@ const WIDTH_EXPORT = 'export default function stringWidth(';
 export function patchStringWidth(source) {
   const n = source.split(WIDTH_EXPORT).length - 1;
   if (n !== 1) throw new Error(`build: string-width changed (its default export was found ${n} times, expected once); update scripts/build-support/start-up-plugin.mjs`);
+  const lazy = patchSegmenter(source, 'const segmenter = new Intl.Segmenter();', 'segmenter', '', 'string-width (segmenter)', true);
   return (
     `import {visibleNarrowWidth as __twNarrowWidth} from ${JSON.stringify(NARROW)};\n` +
-    source.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
+    lazy.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
     '\nexport default function stringWidth(input, options) {\n' +
     "  if (typeof input === 'string' && (options === undefined || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes))) {\n" +
     '    const n = __twNarrowWidth(input);\n' +
@@ -96,8 +103,8 @@ export function patchInkOutput(source) {
     'row.push(__twBlank);',
     "Ink's Output (blank cell)",
   );
-  s = replaceOnce(s, 'return sliceAnsi(line, from, to);', 'return from === 0 && to >= width ? line : sliceAnsi(line, from, to);', "Ink's Output (clip)");
-  return s;
+  s = replaceOnce(s, 'return sliceAnsi(line, from, to);', 'return from === 0 && to >= width && __twSimpleText(line) ? line : sliceAnsi(line, from, to);', "Ink's Output (clip)");
+  return NARROW_IMPORT + s;
 }
 
 export function patchStyledChars(source) {
@@ -118,6 +125,21 @@ function __twSameStyles(a, b) {
   return s;
 }
 
+const LAZY_SEGMENTER = (name, args, fast) =>
+  `let ${name}Real;\n` +
+  (fast ? `function* ${name}Chars(s) { for (let i = 0; i < s.length; i++) yield {segment: s[i], index: i, input: s}; }\n` : '') +
+  `const ${name} = {segment: s => (${fast ? `__twSimpleText(s) ? ${name}Chars(s) : ` : ''}(${name}Real ??= new Intl.Segmenter(${args})).segment(s))};`;
+const NARROW_IMPORT = `import {isSimpleText as __twSimpleText} from ${JSON.stringify(NARROW)};\n`;
+
+/**
+ * Replace `const NAME = new Intl.Segmenter(ARGS);` with a segmenter made on first use;
+ * with `fast`, text whose characters are each a grapheme is split without one (only
+ * for code that just iterates the segments: the fast path has no .containing()).
+ */
+export function patchSegmenter(source, declaration, name, args, what, fast = false) {
+  return NARROW_IMPORT + replaceOnce(source, declaration, LAZY_SEGMENTER(name, args, fast), what);
+}
+
 export const startUpPlugin = {
   name: 'tapwright-start-up',
   setup(b) {
@@ -133,6 +155,14 @@ export const startUpPlugin = {
     }));
     b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]styledChars\.js$/}, async args => ({
       contents: patchStyledChars(await readFile(args.path, 'utf8')),
+      loader: 'js',
+    }));
+    b.onLoad({filter: /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/}, async args => ({
+      contents: patchSegmenter(await readFile(args.path, 'utf8'), "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}", 'slice-ansi (segmenter)'),
+      loader: 'js',
+    }));
+    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/}, async args => ({
+      contents: patchSegmenter(await readFile(args.path, 'utf8'), 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', 'undefined, { granularity: "grapheme" }', 'ansi-tokenize (segmenter)', true),
       loader: 'js',
     }));
     b.onLoad({filter: /[\\/]string-width[\\/]index\.js$/}, async args => ({

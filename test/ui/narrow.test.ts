@@ -4,7 +4,7 @@
 import {describe, expect, it} from 'vitest';
 import fc from 'fast-check';
 import stringWidth from 'string-width';
-import {isSurelyNarrow, narrowWidth, visibleNarrowWidth} from '../../src/ui/terminal/narrow.js';
+import {isSimpleText, isSurelyNarrow, narrowWidth, visibleNarrowWidth} from '../../src/ui/terminal/narrow.js';
 
 const ALL_BMP = Array.from({length: 0x3000}, (_, i) => i);
 
@@ -45,5 +45,19 @@ describe('surely-narrow characters', () => {
     expect(visibleNarrowWidth('\u001b[38;5;208mx\u001b[0m')).toBe(1);
     expect(visibleNarrowWidth('\u001b]8;;http://x\u0007link')).toBeUndefined();
     expect(visibleNarrowWidth('\u001b[2Kx')).toBeUndefined();
+  });
+
+  it('simple text splits into graphemes exactly as into characters (Intl.Segmenter, UAX #29)', () => {
+    const simple = [...ALL_BMP.filter(isSurelyNarrow).map(cp => String.fromCodePoint(cp)), '\u001b'];
+    const seg = new Intl.Segmenter(undefined, {granularity: 'grapheme'});
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(...simple), {maxLength: 40}), a => {
+        const s = a.join('');
+        expect(isSimpleText(s)).toBe(true);
+        expect([...seg.segment(s)].map(x => x.segment)).toEqual([...s]);
+      }),
+      {numRuns: 300},
+    );
+    for (const s of ['a\r\nb', 'e\u0301', '\u{1F600}', '\u1100\u1161', 'a\u200db', 'x\tx']) expect(isSimpleText(s), JSON.stringify(s)).toBe(false);
   });
 });

@@ -100,3 +100,19 @@ export function visibleNarrowWidth(s: string): number | undefined {
   }
   return n;
 }
+
+/**
+ * True when every character of `s` is its own grapheme cluster: printable ASCII,
+ * ESC, or a surely-narrow character. None of these combines with a neighbour under
+ * the grapheme rules of Unicode Standard Annex #29 (no extenders, joiners, spacing
+ * marks, prepends, regional indicators, Hangul or CR LF), so splitting such text
+ * into graphemes is splitting it into characters.
+ */
+export function isSimpleText(s: string): boolean {
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if ((c >= 0x20 && c <= 0x7e) || c === 0x1b) continue;
+    if (!isSurelyNarrow(c)) return false;
+  }
+  return true;
+}
