@@ -56,18 +56,7 @@ export function isSurelyNarrow(cp: number): boolean {
  * number of code points), or undefined when it holds any other character.
  */
 export function narrowWidth(s: string): number | undefined {
-  let n = 0;
-  for (let i = 0; i < s.length; i++) {
-    const c = s.charCodeAt(i);
-    if (c >= 0x20 && c <= 0x7e) {
-      n++;
-      continue;
-    }
-    // Surrogates (astral characters) are never in the narrow set.
-    if (!isSurelyNarrow(c)) return undefined;
-    n++;
-  }
-  return n;
+  return s.includes('\u001b') ? undefined : visibleNarrowWidth(s);
 }
 
 /**
