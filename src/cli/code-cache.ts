@@ -99,7 +99,7 @@ export function loadCachedBody(o: BodyOptions): LoadedBody {
       done = true;
       try {
         const data = script.createCachedData();
-        fs.mkdirSync(path.dirname(file), {recursive: true});
+        fs.mkdirSync(path.dirname(file), {recursive: true, mode: 0o700});
         const tmp = `${file}.${process.pid}.tmp`;
         fs.writeFileSync(tmp, data);
         fs.renameSync(tmp, file);
