@@ -20,15 +20,17 @@
 //    allocated about 7 MB a frame at 80x24, which made V8 grow its young generation
 //    and the workbench's resident memory by some 30 MB while typing. The patches keep
 //    the result the same and the work smaller: the per-line caches live across frames
-//    (bounded), the blank cell is one shared frozen object, a line of simple text that
-//    fits its clip is not sliced, and ansi-tokenize skips the style diff between two cells of the
-//    same style. test/build/patches.test.ts compares patched and unpatched output.
+//    (bounded), the blank cell is one shared frozen object, a line of simple text
+//    that fits its clip is not sliced, and ansi-tokenize skips the style diff
+//    between two cells of the same style. test/build/patches.test.ts compares
+//    patched and unpatched output.
 // 5. Intl.Segmenter: string-width, slice-ansi and ansi-tokenize each make one when
 //    they load, and the first costs about 20 ms (ICU's break data). They are made
 //    on first use instead, and ansi-tokenize (which splits every line Ink draws into
-//    graphemes) splits text whose every character is its own grapheme
-//    (isSimpleText in src/ui/terminal/narrow.ts) without one, so the workbench's
-//    own text never needs ICU at all.
+//    graphemes) and string-width split text whose every character is its own
+//    grapheme (isSimpleText in src/ui/terminal/narrow.ts) without one, so the
+//    workbench's own text needs no ICU (slice-ansi, used only to cut a line at a
+//    clip, still makes its segmenter when it first does that).
 // 6. conf imports ajv, ajv-formats and semver for its `schema` and `migrations`
 //    options, which tapwright never passes (conf-unused-stub.js says why); they are
 //    left out, about 180 KB less to load.
@@ -48,11 +50,7 @@ export const YOGA_FETCH = {
 };
 
 export function patchYogaLoader(source) {
-  const n = source.split(YOGA_FETCH.from).length - 1;
-  if (n !== 1) {
-    throw new Error(`build: yoga-layout's wasm loader changed (the fetch branch was found ${n} times, expected once); update scripts/build-support/start-up-plugin.mjs`);
-  }
-  return source.replace(YOGA_FETCH.from, YOGA_FETCH.to);
+  return replaceOnce(source, YOGA_FETCH.from, YOGA_FETCH.to, "yoga-layout's wasm loader (fetch branch)");
 }
 
 const WIDTH_EXPORT = 'export default function stringWidth(';
