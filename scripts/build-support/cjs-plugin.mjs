@@ -9,12 +9,7 @@
 //   awaits it before the first render (src/ui/terminal/yoga-ready.ts).
 // Each patch fails the build when the text it replaces is not found exactly once.
 import {readFile} from 'node:fs/promises';
-
-function replaceOnce(source, from, to, what) {
-  const n = source.split(from).length - 1;
-  if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from)}); update scripts/build-support/cjs-plugin.mjs`);
-  return source.replace(from, to);
-}
+import {replaceOnce} from './start-up-plugin.mjs';
 
 export function patchInkReconciler(source) {
   let s = replaceOnce(source, "await import('./devtools.js');", 'void 0;', "Ink's reconciler (DevTools import)");
