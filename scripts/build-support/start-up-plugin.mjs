@@ -75,7 +75,7 @@ export function patchStringWidth(source) {
 /** `source` with `from` replaced by `to`; the build fails when `from` is not there exactly once. */
 export function replaceOnce(source, from, to, what) {
   const n = source.split(from).length - 1;
-  if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from.slice(0, 60))}); update scripts/build-support/start-up-plugin.mjs`);
+  if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from.slice(0, 60))}); update the patch in scripts/build-support/`);
   return source.replace(from, to);
 }
 
