@@ -2,9 +2,10 @@
 # Used by scripts/bench.mjs (node-pty is not a dependency; Python's pty module is
 # in every CPython). Input: one JSON argument
 #   {"argv": [...], "env": {...}, "cols": 80, "rows": 24, "steps": [{"send": "...", "digit": bool} or {"wait": seconds}],
-#    "ready": "text that marks the first full frame", "gap": seconds between keys}
+#    "ready": "text that marks the first full frame", "gap": seconds between keys,
+#    "raw": true to return what was written (base64): before the first key, and for each key}
 # Output: one JSON document on stdout with the timings (seconds) and byte counts.
-import json, os, pty, select, struct, sys, termios, fcntl, time
+import base64, json, os, pty, select, struct, sys, termios, fcntl, time
 
 cfg = json.loads(sys.argv[1])
 ESU = b"\x1b[?2026l"
@@ -61,6 +62,8 @@ first_frame_cpu = cpu_seconds() if t_ready else (None, None)
 read_for(0.3)  # let the start settle (resize handling, second frame)
 
 results = []
+raw = cfg.get("raw", False)
+start_bytes = bytes(buf)
 for step in cfg["steps"]:
     if "wait" in step:  # only let time pass (e.g. for the code cache to be written)
         read_for(step["wait"])
@@ -72,6 +75,8 @@ for step in cfg["steps"]:
     _, t_done = read_for(2, lambda b: ESU in b)
     read_for(cfg.get("gap", 0.12))  # until quiet: every byte this key caused
     results.append({"digit": step.get("digit", False), "first": step.get("first", False), "latency": (t_done - t_send) if t_done else None, "bytes": len(buf) - start})
+    if raw:
+        results[-1]["data"] = base64.b64encode(bytes(buf[start:])).decode()
 
 def status():
     out = {}
@@ -93,4 +98,4 @@ try:
     code = os.waitstatus_to_exitcode(st)
 except ChildProcessError:
     code = None
-print(json.dumps({"firstFrame": first_frame, "firstFrameCpuMain": first_frame_cpu[0], "firstFrameCpuAll": first_frame_cpu[1], "steps": results, "total": len(buf), "mem": mem, "exitCode": code}))
+print(json.dumps({**({"start": base64.b64encode(start_bytes).decode()} if raw else {}), "firstFrame": first_frame, "firstFrameCpuMain": first_frame_cpu[0], "firstFrameCpuAll": first_frame_cpu[1], "steps": results, "total": len(buf), "mem": mem, "exitCode": code}))
