@@ -55,11 +55,12 @@ export class VirtualTerminal {
   blankRow() {
     return Array(this.columns).fill(' ');
   }
-  /** Erase cells [from, to) of the cursor's row (erased cells take the default style). */
+  /** Erase cells [from, to) of a row. Erased cells keep the pen's background, as xterm does (bce). */
   eraseLine(from, to, row = this.row) {
+    const bg = this.pen.split(' ').filter(p => p.startsWith('bg=')).join(' ');
     for (let c = from; c < to; c++) {
       this.grid[row][c] = ' ';
-      this.styles[row][c] = blankStyle;
+      this.styles[row][c] = bg;
     }
   }
   scroll() {

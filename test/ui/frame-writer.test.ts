@@ -102,6 +102,53 @@ describe('frame writer', () => {
     );
   });
 
+  it('any frame followed by any other leaves the same characters, colours and styles as painting it afresh', () => {
+    const sgr = ['\u001B[0m', '\u001B[1m', '\u001B[22m', '\u001B[2m', '\u001B[4m', '\u001B[24m', '\u001B[31m', '\u001B[39m', '\u001B[90m', '\u001B[1;33m', '\u001B[42m', '\u001B[49m', '\u001B[38;5;208m', '\u001B[7m'];
+    const piece = fc.constantFrom('a', 'b', ' ', '      ', '12.5', '\u00b7', '\u2588', ...sgr);
+    const line = fc.array(piece, {maxLength: 30}).map(p => p.join(''));
+    const frame = fc.array(line, {minLength: 1, maxLength: 10});
+    fc.assert(
+      fc.property(frame, frame, fc.integer({min: 20, max: 120}), (a, b, columns) => {
+        const fit = (f: string[]) => f.map(l => Array.from(l).length <= columns ? l : '');
+        const [x, y] = [fit(a), fit(b)];
+        const diffed = new VirtualTerminal(columns, 24);
+        diffed.write(paintFrame(x));
+        diffed.write(diffFrames(x, y, columns));
+        const fresh = new VirtualTerminal(columns, 24);
+        fresh.write(paintFrame(y));
+        expect(diffed.styledRows()).toEqual(fresh.styledRows());
+        // and the writer leaves the pen reset, so whatever Ink writes next is unstyled
+        expect(diffed.pen).toBe('');
+      }),
+      {numRuns: 600},
+    );
+  });
+
+  it('changes colour by the parts that differ, and resets only when an attribute goes off', () => {
+    const red = '\u001B[31m';
+    const boldRed = '\u001B[1;31m';
+    // plain to red: no reset needed
+    expect(diffFrames(['ab'], [`a${red}b`])).toContain('\u001B[31mb');
+    // bold red to red: bold must go, so a reset and the colour again
+    expect(diffFrames(['xy'], [`${boldRed}a\u001B[22mb`])).toBe('\u001B[H\u001B[1;31ma\u001B[0;31mb\u001B[m');
+    // red to bold red: only the bold is added
+    expect(diffFrames(['xy'], [`${red}a\u001B[1mb`])).toBe('\u001B[H\u001B[31ma\u001B[1mb\u001B[m');
+    // the pen ends reset with the short form
+    expect(diffFrames(['ab'], [`a${red}b`]).endsWith('\u001B[m')).toBe(true);
+  });
+
+  it('moves the cursor down or left relative to where it is when that is shorter', () => {
+    const a = ['Preload    10.6 kN', 'Torque     18.0 N m', 'x'];
+    const b = ['Preload    12.6 kN', 'Torque     19.0 N m', 'x'];
+    const bytes = diffFrames(a, b, 80);
+    // the second change is one line down, same column: a move down, not a position
+    expect(bytes).toBe('\u001B[1;13H2\u001B[B\b9');
+    const term = new VirtualTerminal();
+    term.write(paintFrame(a));
+    term.write(bytes);
+    expect(term.text()).toBe(b.join('\n'));
+  });
+
   it('moves the cursor right on a line, or to the next line, in fewer bytes than an absolute position', () => {
     const pad = ' '.repeat(10);
     const a = Array.from({length: 12}, (_, i) => `row ${i}`).concat([`Stripping  bolt 64.5 kN, weaker side:${pad}hole 24.7 kN`, 'x']);

@@ -60,8 +60,33 @@ function applySgr(a: Attrs, params: string): void {
   }
 }
 
+/** The parts of each style key seen, to go from one style to another without a full reset. */
+const styleParts = new Map<string, {flags: string[]; fg: string; bg: string}>([['', {flags: [], fg: '', bg: ''}]]);
+
 function styleOf(a: Attrs): string {
-  return [...[...a.flags].sort(), a.fg, a.bg].filter(Boolean).join(';');
+  const flags = [...a.flags].sort();
+  const key = [...flags, a.fg, a.bg].filter(Boolean).join(';');
+  if (!styleParts.has(key)) styleParts.set(key, {flags, fg: a.fg, bg: a.bg});
+  return key;
+}
+
+/**
+ * The shortest SGR that turns style `from` into style `to` (both keys from
+ * styleOf): only the parts that change when no attribute has to be turned off,
+ * otherwise a reset followed by the whole of `to`.
+ */
+export function sgrBetween(from: string, to: string): string {
+  if (from === to) return '';
+  if (to === '') return '\u001B[m';
+  const reset = `\u001B[0;${to}m`;
+  const a = styleParts.get(from);
+  const b = styleParts.get(to);
+  if (!a || !b || a.flags.some(f => !b.flags.includes(f))) return from === '' ? `\u001B[${to}m` : reset;
+  const params = b.flags.filter(f => !a.flags.includes(f));
+  if (a.fg !== b.fg) params.push(b.fg === '' ? '39' : b.fg);
+  if (a.bg !== b.bg) params.push(b.bg === '' ? '49' : b.bg);
+  const step = `\u001B[${params.join(';')}m`;
+  return step.length < reset.length ? step : reset;
 }
 
 /** Split one frame line into cells; undefined when it holds a character of uncertain width. */
@@ -89,8 +114,19 @@ export function toCells(line: string): Cell[] | undefined {
   return cells;
 }
 
-const at = (row: number, col: number) => `\u001B[${row};${col}H`;
-const sgr = (style: string) => (style === '' ? '\u001B[0m' : `\u001B[0;${style}m`);
+/** An absolute position (1-based); a column of 1 may be left out. */
+const at = (row: number, col: number) => (col === 1 ? (row === 1 ? '\u001B[H' : `\u001B[${row}H`) : `\u001B[${row};${col}H`);
+/** A move right or left by n on the same line (n > 0 is right). Backspaces for one or two to the left. */
+const horizontal = (n: number) => (n === 0 ? '' : n > 0 ? (n === 1 ? '\u001B[C' : `\u001B[${n}C`) : n >= -2 ? '\b'.repeat(-n) : `\u001B[${-n}D`);
+/**
+ * Bytes a move costs on the wire. A line feed counts twice: the terminal driver's
+ * output mapping (ONLCR, which Node's raw mode keeps on) sends it as CR LF.
+ */
+const wireLength = (s: string) => {
+  let n = s.length;
+  for (let i = s.indexOf('\n'); i >= 0; i = s.indexOf('\n', i + 1)) n++;
+  return n;
+};
 
 /**
  * The bytes that turn `prev` (on screen) into `next`, both lists of frame lines,
@@ -104,27 +140,27 @@ export function diffFrames(prev: readonly string[], next: readonly string[], col
   let curRow = -1;
   let curCol = -1;
   const moveTo = (r: number, c: number) => {
-    const abs = at(r + 1, c + 1);
-    let best = abs;
-    if (r === curRow && curCol >= 0 && curCol < columns) {
-      if (c === curCol) best = '';
-      else if (c > curCol) {
-        const right = `\u001B[${c - curCol}C`;
-        if (right.length < best.length) best = right;
+    const options = [at(r + 1, c + 1)];
+    // Relative moves need a known cursor that is not past the last column (where a
+    // terminal holds a pending wrap and moves differ).
+    if (curRow >= 0 && curCol >= 0 && curCol < columns) {
+      const fromStart = c === 0 ? '' : horizontal(c);
+      if (r === curRow) options.push(horizontal(c - curCol), `\r${fromStart}`);
+      else if (r > curRow) {
+        const down = r - curRow === 1 ? '\u001B[B' : `\u001B[${r - curRow}B`;
+        options.push(down + horizontal(c - curCol), `\r${down}${fromStart}`);
+        if (r - curRow === 1) options.push(`\r\n${fromStart}`);
       }
-    } else if (curRow >= 0 && r === curRow + 1) {
-      const down = c === 0 ? '\r\n' : `\r\n\u001B[${c}C`;
-      if (down.length < best.length) best = down;
     }
+    let best = options[0]!;
+    for (const o of options) if (wireLength(o) < wireLength(best)) best = o;
     out += best;
     curRow = r;
     curCol = c;
   };
   const setPen = (style: string) => {
-    if (style !== pen) {
-      out += sgr(style);
-      pen = style;
-    }
+    out += sgrBetween(pen, style);
+    pen = style;
   };
   for (let r = 0; r < next.length; r++) {
     const a = prev[r] ?? '';
