@@ -7,8 +7,8 @@ import React, {useEffect, useMemo, useRef, useState} from 'react';
 import {Box, Text, useApp, useInput, useStdout} from 'ink';
 import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
 import {normaliseKey} from './keys.js';
-import {hintLines} from './keymap.js';
-import {contextsOf, isDirty, shownValues, snapshot, type Screen, type WorkbenchState} from './state/workbench.js';
+import {hintLines, type HintCondition} from './keymap.js';
+import {contextsOf, currentField, isDirty, shownValues, snapshot, type Screen, type WorkbenchState} from './state/workbench.js';
 import {handleKeys} from './state/handle-key.js';
 import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
 import {formatField} from './state/field-text.js';
@@ -166,8 +166,10 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const height = rows - 1;
   // The hint area keeps the height of the screen's own hints while a field is edited or a
   // picker or question is open, so the screen below does not move by a line (and repaint).
-  const hints = hintLines(contextsOf(state), t.ascii, columns);
-  const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns).length);
+  const holds = new Set<HintCondition>(state.screen === 'joint' && currentField(state)?.table ? ['field-has-table'] : []);
+  const hints = hintLines(contextsOf(state), t.ascii, columns, holds);
+  // (counted with every conditional key shown, so moving between fields does not change it)
+  const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns, new Set<HintCondition>(['field-has-table'])).length);
   while (hints.length < hintRows) hints.push('');
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
   const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;

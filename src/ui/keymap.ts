@@ -19,6 +19,9 @@ export type Context =
   | 'confirm'
   | 'draft';
 
+/** Conditions the hint line can check (worked out from the state by the app). */
+export type HintCondition = 'field-has-table';
+
 export interface KeySpec {
   name: KeyName;
   char?: string;
@@ -36,6 +39,8 @@ export interface Binding {
   context: Context;
   /** Short word for the hint line; no hint when absent. */
   hint?: string;
+  /** Shown on the hint line only when this holds for the field under the cursor. */
+  hintWhen?: HintCondition;
   description: string;
 }
 
@@ -74,7 +79,7 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
   {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
   {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},
-  {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', description: 'On a friction field of the power screw: pick a row of the published friction table'},
+  {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', hintWhen: 'field-has-table', description: 'On a friction field of the power screw: pick a row of the published friction table'},
   {command: 'mode.toggle', keys: [c('m')], context: 'joint', hint: 'joint/screw', description: 'Switch between a threaded joint and a power screw (lead screw and nut)'},
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},
@@ -180,13 +185,16 @@ export function keyLabel(spec: KeySpec, ascii: boolean): string {
   return spec.ctrl ? `Ctrl-${(spec.char ?? '').toUpperCase()}` : (spec.char ?? '');
 }
 
-/** The hint lines (one, or two when the keys do not fit): the keys that work now, most specific context first. */
-export function hintLines(contexts: readonly Context[], ascii: boolean, width: number): string[] {
+/**
+ * The hint lines (one, or two when the keys do not fit): the keys that work now, most
+ * specific context first. A key with a condition is shown only when `holds` has it.
+ */
+export function hintLines(contexts: readonly Context[], ascii: boolean, width: number, holds: ReadonlySet<HintCondition> = new Set()): string[] {
   const parts: string[] = [];
   const seen = new Set<string>();
   for (const ctx of contexts) {
     for (const b of KEYMAP) {
-      if (b.context !== ctx || !b.hint || seen.has(b.command)) continue;
+      if (b.context !== ctx || !b.hint || seen.has(b.command) || (b.hintWhen && !holds.has(b.hintWhen))) continue;
       seen.add(b.command);
       const same = KEYMAP.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
       const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);

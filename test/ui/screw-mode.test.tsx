@@ -25,6 +25,20 @@ describe('power-screw mode', () => {
     app.unmount();
   });
 
+  it('shows "t table" on the hint line only on a field that has a published table', async () => {
+    const app = startApp();
+    // the joint's designation field has no table to pick from
+    expect(app.frame()).toContain('q quit');
+    expect(app.frame()).not.toContain('t table');
+    await app.press(['m', KEY.right, KEY.right], '> Thread friction');
+    expect(app.frame()).toContain('t table');
+    await app.press(KEY.down, '> Collar friction');
+    expect(app.frame()).toContain('t table');
+    await app.press(KEY.left, '> Axial load');
+    expect(app.frame()).not.toContain('t table');
+    app.unmount();
+  });
+
   it('names the field and range on bad input', async () => {
     const app = startApp();
     await app.press(['m', KEY.right, KEY.down, KEY.down], '> Nut length');
