@@ -10,6 +10,9 @@ import {cleanup} from 'ink-testing-library';
 import {startApp} from '../support/start-app.js';
 import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {checkJoint} from '../../src/core/joint/index.js';
+import {wholeItems} from '../../src/ui/screens/joint-screen.js';
+import {makeTheme} from '../../src/ui/theme.js';
+import type {Line} from '../../src/ui/components/lines.js';
 
 afterEach(() => cleanup());
 
@@ -60,5 +63,35 @@ describe('thread panel: limits of size per side', () => {
       expect(frame).toContain('6g limits: table, ISO 965-1:1998');
       for (const l of frame.split('\n')) expect(l.length).toBeLessThanOrEqual(size.columns);
     }
+  });
+});
+
+describe('thread panel: whole notes only', () => {
+  const t = makeTheme(false, true);
+  const text = (l: Line) => (typeof l === 'string' ? l : Array.isArray(l) ? l.map(x => x.text).join('') : l.text);
+  const item = (name: string, n: number) => Array.from({length: n}, (_, i) => ({text: `${name} ${i + 1}/${n}`}));
+
+  it('leaves out a note that does not fit whole, and says so when a line is free', () => {
+    const items = [item('a', 1), item('b', 2), item('c', 3), item('d', 1)];
+    // 5 lines: a and b fit (3 lines); c (3 lines) does not, so it and d are left out
+    expect(wholeItems(items, 5, 34, t).map(text)).toEqual(['a 1/1', 'b 1/2', 'b 2/2', '+2 more in the report (w)']);
+    // exactly full: no room for the note line, and still nothing cut in half
+    expect(wholeItems(items, 3, 34, t).map(text)).toEqual(['a 1/1', 'b 1/2', 'b 2/2']);
+    // room for all: all of them, no note line
+    expect(wholeItems(items, 7, 34, t)).toHaveLength(7);
+  });
+
+  it('a panel too short for the notes ends on a whole line and points to the report', async () => {
+    let pointed = 0;
+    for (const rows of [24, 25, 26, 27]) {
+      const frame = await panelFor('3/8-16 UNC', {columns: 80, rows});
+      if (/\+\d+ more in the report \(w\)/.test(frame)) pointed++;
+      expect(frame).toContain('2A limits: formulas (fallback),');
+      // the note on where the 2B limits come from is never shown cut to its first words
+      const lines = frame.split('\n');
+      const start = lines.findIndex(l => l.startsWith('Class 2B limits read from'));
+      if (start >= 0) expect(lines[start + 1]!.startsWith('  '), frame).toBe(true);
+    }
+    expect(pointed).toBeGreaterThan(0);
   });
 });

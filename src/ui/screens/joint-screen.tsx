@@ -117,11 +117,25 @@ function threadInfoLines(ev: Evaluation, state: WorkbenchState, width: number, h
   const sideLines = height >= lines.length + 6 ? 3 : 2;
   const wrapped = (l: string, i: number, max: number) =>
     wrap(l, width - 2, max, t.sym.ellipsis).map((w, j): Line => ({text: j ? `  ${w}` : w, color: i === 0 ? undefined : t.tone('dim')}));
-  return [
-    ...lines.flatMap((l, i) => wrapped(l, i, 3)),
-    ...sides.flatMap(l => wrapped(l, 1, sideLines)),
-    ...g.notes.flatMap(l => wrapped(l, 1, 3)),
-  ].slice(0, height);
+  return wholeItems([...lines.map((l, i) => wrapped(l, i, 3)), ...sides.map(l => wrapped(l, 1, sideLines)), ...g.notes.map(l => wrapped(l, 1, 3))], height, width, t);
+}
+
+/**
+ * As many whole items (each one or more lines) as fit in `height` lines, never the
+ * first lines of one cut off mid-sentence; when some are left out and a line is
+ * free, it says how many and that the report has them all.
+ */
+export function wholeItems(items: readonly Line[][], height: number, width: number, t: Theme): Line[] {
+  const out: Line[] = [];
+  let shown = 0;
+  for (const it of items) {
+    if (out.length + it.length > height) break;
+    out.push(...it);
+    shown++;
+  }
+  const left = items.length - shown;
+  if (left > 0 && out.length < height) out.push({text: fit(`+${left} more in the report (w)`, width, t.sym.ellipsis), color: t.tone('dim')});
+  return out;
 }
 
 function LeftColumn({state, ev, sev, svc, width, height}: Props) {
