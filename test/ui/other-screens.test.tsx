@@ -1,8 +1,10 @@
 import {afterEach, describe, expect, it} from 'vitest';
 import {cleanup} from 'ink-testing-library';
 import {startApp} from '../support/start-app.js';
-import {FIXTURE_PLAN, fixtureServices} from '../support/fixture-services.js';
+import {FIXTURE_PLAN, FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {KEY} from '../support/keys.js';
+import {checkJoint} from '../../src/core/joint/index.js';
+import {planRepairs} from '../../src/core/repair/index.js';
 import {KEYMAP} from '../../src/ui/keymap.js';
 import {helpLines} from '../../src/ui/screens/help-screen.js';
 import {CAUTION_LINES} from '../../src/core/cautions.js';
@@ -45,6 +47,23 @@ describe('repairs screen', () => {
     expect(app.frame()).toContain('work E2 deepen: drill and tap deeper');
     await app.press([KEY.down, KEY.down], 'Through-bolt with a nut: cannot be done here: the hole is blind');
     await app.press(KEY.enter, '> Hole');
+    app.unmount();
+  });
+
+  it('at 80 columns the tap column is not cut: the insert tap of a 3/8-16 hole shows whole', async () => {
+    // The real check and planner on a grey cast-iron part (a shipped material).
+    const withIron = <T,>(joint: T) => ({...joint, parent: 'EN-GJL-250'});
+    const svc = fixtureServices({check: input => checkJoint(withIron(input)), repairs: (joint, hole, units) => planRepairs(withIron(joint), hole, undefined, units ?? 'si')});
+    const values = structuredClone(FIXTURE_VALUES);
+    values.joint.thread = '3/8-16 UNC';
+    const app = startApp({svc, state: {values} as never});
+    await app.press('r', 'Repairs for: 3/8-16 UNC');
+    const rows = app.frame().split('\n').filter(l => /^.\s*\d+ /.test(l));
+    expect(rows.some(l => l.includes('helical insert'))).toBe(true);
+    // The tap for a helical coil insert hole is marked "STI" (screw thread insert), as in
+    // ASME B18.29.1 (from memory); the planner's own text, checked here only for not being cut.
+    for (const l of rows.filter(r => r.includes('helical insert'))) expect(l.trimEnd()).toMatch(/3\/8-16 UNC STI$/);
+    for (const l of rows) expect(l).not.toMatch(/[~]|\.\.\.$/);
     app.unmount();
   });
 

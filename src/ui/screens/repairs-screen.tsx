@@ -35,6 +35,9 @@ export function RepairsScreen({rep, index, units, holeSummary, width, height}: P
   const listRows = Math.min(rows.length, Math.max(3, height - 8));
   const start = Math.max(0, Math.min(idx - Math.floor(listRows / 2), rows.length - listRows));
   const marked = rows[idx];
+  // The repair column is as wide as its longest name (at most 24), so the tap column keeps its room.
+  const nameW = Math.min(24, Math.max(6, ...rows.map(r => Array.from(r.label).length)));
+  const e = t.sym.ellipsis;
   const detail = marked
     ? [
         `${marked.label}: ${!marked.feasible ? 'cannot be done here' : marked.meetsMargin ? 'meets the required margin' : 'can be done, short of the margin'}${marked.reason ? `: ${marked.reason}` : ''}`,
@@ -49,13 +52,13 @@ export function RepairsScreen({rep, index, units, holeSummary, width, height}: P
   return (
     <Box flexDirection="column" width={width} height={height}>
       <Text bold>{fit(`Repairs for: ${holeSummary}`, width, t.sym.ellipsis)}</Text>
-      <Text color={t.tone('dim')}>{pad(`  # ${pad('Repair', 24)} ${pad('State', 6)} ${pad('Strip', 6)} ${pad('Bolt-1st', 8)} ${pad('Work', 4)} ${pad('Drill', 9)} Tap`, width)}</Text>
+      <Text color={t.tone('dim')}>{pad(`  # ${pad('Repair', nameW)} ${pad('State', 6)} ${pad('Strip', 6)} ${pad('Bolt-1st', 8)} ${pad('Work', 4)} ${pad('Drill', 9)} Tap`, width, e)}</Text>
       {rows.slice(start, start + listRows).map((r, j) => {
         const i = start + j;
         const tone = !r.feasible ? t.tone('dim') : r.meetsMargin ? t.tone('ok') : t.tone('watch');
         return (
           <Text key={`${r.kind}${i}`} inverse={i === idx} color={tone}>
-            {pad(`${i === idx ? t.sym.select : ' '}${String(r.rank).padStart(2)} ${pad(r.label, 24)} ${pad(status(r), 6)} ${pad(m(r.margin.stripping), 6)} ${pad(m(r.margin.boltBreaksFirst), 8)} ${pad(`E${r.effort.grade}`, 4)} ${pad(L(r.drill), 9)} ${r.tapThread ?? '-'}`, width)}
+            {pad(`${i === idx ? t.sym.select : ' '}${String(r.rank).padStart(2)} ${pad(r.label, nameW, e)} ${pad(status(r), 6)} ${pad(m(r.margin.stripping), 6)} ${pad(m(r.margin.boltBreaksFirst), 8)} ${pad(`E${r.effort.grade}`, 4)} ${pad(L(r.drill), 9)} ${r.tapThread ?? '-'}`, width, e)}
           </Text>
         );
       })}
