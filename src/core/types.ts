@@ -98,6 +98,11 @@ export interface Flag {
   code: string;
   level: 'info' | 'watch' | 'fail';
   message: string;
+  /**
+   * The same finding in one short line (about 65 characters) keeping its key numbers,
+   * for a one-line display such as the workbench at 80 columns; `message` has it all.
+   */
+  summary?: string;
 }
 
 /** A value with a min..max range (friction, etc.). min <= max. */

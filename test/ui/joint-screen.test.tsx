@@ -2,6 +2,8 @@ import {afterEach, describe, expect, it} from 'vitest';
 import {cleanup} from 'ink-testing-library';
 import {startApp} from '../support/start-app.js';
 import {KEY} from '../support/keys.js';
+import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
+import {checkJoint} from '../../src/core/joint/index.js';
 
 afterEach(() => cleanup());
 
@@ -15,6 +17,24 @@ describe('joint screen', () => {
     expect(app.frame()).toContain('Estimates only. Follow the equipment maker, local codes and licensed');
     expect(app.frame()).toContain('q quit');
     expect(app.frame()).toContain('Preset: demo-fixture (shipped demo, read-only)  saved');
+    app.unmount();
+  });
+});
+
+describe('flag lines at 80 columns', () => {
+  it('a message too long for its line shows as its summary, numbers kept, with (f) for the whole', async () => {
+    // The real check on a grey cast-iron part with a short engagement (invented demo values).
+    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
+    const values = structuredClone(FIXTURE_VALUES);
+    values.joint.engagement = 4;
+    const app = startApp({svc, state: {values} as never});
+    await app.see('Thread strips first:');
+    const line = app.frame().split('\n').find(l => l.startsWith('FAIL  Thread strips first:'))!;
+    expect(line).toMatch(/^FAIL {2}Thread strips first: hole \d+(\.\d+)? kN < bolt break \d+(\.\d+)? kN \((f|\+\d+, f: all)\)$/);
+    // f shows the whole message
+    await app.press('f', 'All flags');
+    expect(app.frame()).toContain('FAIL strips-before-break: Thread strips');
+    expect(app.frame()).toContain('strips at 19.3 kN, the bolt breaks at 46.4');
     app.unmount();
   });
 });

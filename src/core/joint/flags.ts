@@ -67,6 +67,11 @@ function side(c: FlagContext): string {
   return c.weaker === 'external' ? 'the bolt thread' : c.internalKind === 'nut' ? 'the nut thread' : 'the tapped thread';
 }
 
+/** The weaker side in one word or two, for a summary line. */
+function sideShort(c: FlagContext): string {
+  return c.weaker === 'external' ? 'bolt thread' : c.internalKind === 'nut' ? 'nut' : 'hole';
+}
+
 export function stripsAtPreload(c: FlagContext): Flag | undefined {
   const load = c.maxPreload + c.serviceLoad;
   const allowed = c.weakerForce / c.requiredMargin;
@@ -77,6 +82,7 @@ export function stripsAtPreload(c: FlagContext): Flag | undefined {
     code: 'strips-at-preload',
     level: 'fail',
     message: `Strips while tightening: up to ${force(c, c.maxPreload)} preload${service} against ${force(c, c.weakerForce)} to strip ${side(c)}${margin}.`,
+    summary: `Strips while tightening: load ${force(c, load)} > ${sideShort(c)} ${force(c, c.weakerForce)}`,
   };
 }
 
@@ -86,6 +92,7 @@ export function shortEngagement(c: FlagContext): Flag | undefined {
     code: 'short-engagement',
     level: 'watch',
     message: `Only ${c.engagedThreads.toFixed(1)} full threads engaged (fewer than ${SHORT_ENGAGEMENT_THREADS}): the first thread takes about ${pct(c.firstShare)} of the load; the 38 % figure for long engagements is not conservative here.`,
+    summary: `Only ${c.engagedThreads.toFixed(1)} full threads engaged: the first takes about ${pct(c.firstShare)}`,
   };
 }
 
@@ -96,6 +103,7 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
       code: 'strips-before-break',
       level: 'fail',
       message: `Thread strips before the bolt breaks: ${side(c)} strips at ${force(c, c.weakerForce)}, the bolt breaks at ${force(c, c.boltBreakForce)} (ratio ${ratio.toFixed(2)}, required ${c.requiredMargin}).`,
+      summary: `Thread strips first: ${sideShort(c)} ${force(c, c.weakerForce)} < bolt break ${force(c, c.boltBreakForce)}`,
     };
   }
   if (c.effectiveEngagement < c.requiredAlexander) {
@@ -103,6 +111,7 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
       code: 'strips-before-break',
       level: 'watch',
       message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
+      summary: `Alexander/VDI 2230 wants ${len(c, c.requiredAlexander)} full thread; ${len(c, c.effectiveEngagement)} engaged`,
     };
   }
   // Formula 1 takes the shear area as twice the stress area (shear strength about
@@ -112,6 +121,7 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
       code: 'strips-before-break',
       level: 'watch',
       message: `FED-STD-H28 Formula 1 calls for ${len(c, c.requiredFedStd)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged. The stripping forces still put the bolt first (ratio ${ratio.toFixed(2)}), but only because of the shear strengths assumed: confirm them or engage more thread.`,
+      summary: `FED-STD-H28 wants ${len(c, c.requiredFedStd)} full thread; ${len(c, c.effectiveEngagement)} engaged`,
     };
   }
   return undefined;
@@ -127,6 +137,7 @@ export function preloadOverYield(c: FlagContext): Flag | undefined {
         (c.yieldPreload !== undefined && c.yieldPreload < c.maxPreload
           ? ` It yields at about ${force(c, c.yieldPreload)}: the higher preloads shown are not reached, the bolt stretches instead. Lower the torque.`
           : ''),
+      summary: `Bolt yields while tightening: ${pct(c.utilisation)} of yield at low friction`,
     };
   }
   if (c.utilisation > c.utilisationLimit + 1e-9) {
@@ -134,6 +145,7 @@ export function preloadOverYield(c: FlagContext): Flag | undefined {
       code: 'preload-over-yield',
       level: 'watch',
       message: `Assembly stress reaches ${pct(c.utilisation)} of bolt yield, above the ${pct(c.utilisationLimit)} limit.`,
+      summary: `Assembly stress ${pct(c.utilisation)} of bolt yield, above the ${pct(c.utilisationLimit)} limit`,
     };
   }
   return undefined;
@@ -148,6 +160,7 @@ export function engagementBeyondUseful(c: FlagContext): Flag | undefined {
     code: 'engagement-beyond-useful',
     level: 'info',
     message: `${len(c, c.effectiveEngagement)} of full thread engaged; ${len(c, needed)} is enough by both methods. The extra ${len(c, c.effectiveEngagement - needed)} adds nothing at the first thread.`,
+    summary: `${len(c, c.effectiveEngagement)} full thread engaged; ${len(c, needed)} is enough by both methods`,
   };
 }
 
@@ -159,6 +172,7 @@ export function blindHoleTooShallow(c: FlagContext): Flag | undefined {
       code: 'blind-hole-too-shallow',
       level: 'fail',
       message: `Bolt bottoms out: ${len(c, c.engagement)} of bolt goes into a ${len(c, c.holeDepth)} deep tapped hole; the torque goes into the bottom, not into preload.`,
+      summary: `Bolt bottoms out: ${len(c, c.engagement)} of bolt in a ${len(c, c.holeDepth)} deep hole`,
     };
   }
   if (c.engagement > full) {
@@ -166,6 +180,7 @@ export function blindHoleTooShallow(c: FlagContext): Flag | undefined {
       code: 'blind-hole-too-shallow',
       level: 'watch',
       message: `Bolt end runs into the last ${BLIND_HOLE_INCOMPLETE_PITCHES} incomplete threads of the blind hole (full thread to ${len(c, Math.max(full, 0))}); only full thread is counted.`,
+      summary: `Bolt end in the ${BLIND_HOLE_INCOMPLETE_PITCHES} incomplete threads; full thread to ${len(c, Math.max(full, 0))}`,
     };
   }
   return undefined;
@@ -177,11 +192,15 @@ export function nonstandardPitch(c: FlagContext): Flag | undefined {
     code: 'nonstandard-pitch',
     level: 'watch',
     message: `${c.designation} is a special pitch: check that taps, gauges and mating parts exist for it.`,
+    summary: `${c.designation} is a special pitch: check taps and gauges exist`,
   };
 }
 
 export function outsideModelRange(c: FlagContext): Flag[] {
-  return c.modelRangeNotes.map(n => ({code: 'outside-model-range', level: 'watch' as const, message: `Outside the published range: ${n}.`}));
+  // A note reads "<quantity> <value> is <beyond a bound>, where <a factor> is published; held at
+  // <value>" (stripping.ts): the summary keeps the part before ", where", without "strength ratio".
+  const summary = (n: string) => `Outside the published range: ${n.split(', where')[0]!.replace(/^strength ratio /, '')}`;
+  return c.modelRangeNotes.map(n => ({code: 'outside-model-range', level: 'watch' as const, message: `Outside the published range: ${n}.`, summary: summary(n)}));
 }
 
 export function bearingDiameterEstimated(c: FlagContext): Flag | undefined {
@@ -190,6 +209,7 @@ export function bearingDiameterEstimated(c: FlagContext): Flag | undefined {
     code: 'bearing-diameter-estimated',
     level: 'info',
     message: `Bearing diameter under the head estimated at ${len(c, c.bearingDiameter)}; measure it and give it for a better torque.`,
+    summary: `Head bearing diameter estimated (${len(c, c.bearingDiameter)}): measure it`,
   };
 }
 

@@ -178,10 +178,14 @@ function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag
   const shown = flags.slice(0, rows);
   const more = flags.length - shown.length;
   const lines = shown.map((f, i): Line => {
-    const full = `${LEVEL_WORD[f.level].padEnd(5)} ${f.message}`;
+    const word = LEVEL_WORD[f.level].padEnd(5);
+    const full = `${word} ${f.message}`;
     const last = i === shown.length - 1;
-    const suffix = last && more > 0 ? ` (+${more}, f: all)` : Array.from(full).length > width ? ' (f)' : '';
-    return {text: fit(full, width - suffix.length, t.sym.ellipsis) + suffix, color: levelTone(t, f.level), bold: f.level === 'fail'};
+    const cut = Array.from(full).length > width;
+    const suffix = last && more > 0 ? ` (+${more}, f: all)` : cut ? ' (f)' : '';
+    // A message too long for its line gives way to its summary, which keeps the numbers.
+    const text = cut && f.summary ? `${word} ${f.summary}` : full;
+    return {text: fit(text, width - suffix.length, t.sym.ellipsis) + suffix, color: levelTone(t, f.level), bold: f.level === 'fail'};
   });
   return <Lines lines={lines} width={width} height={rows} />;
 }
