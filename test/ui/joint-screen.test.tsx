@@ -38,3 +38,18 @@ describe('flag lines at 80 columns', () => {
     app.unmount();
   });
 });
+
+describe('readout at 80 columns', () => {
+  it('a very short engagement: the margins line shows both margins whole', async () => {
+    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
+    const values = structuredClone(FIXTURE_VALUES);
+    values.joint.engagement = 1;
+    values.joint.chamfer = 0.8;
+    const app = startApp({svc, state: {values} as never});
+    await app.see('Margins');
+    const line = app.frame().split('\n').find(l => l.includes('Margins'))!;
+    // margins far below 1 with two figures, e.g. "stripping 0.041, bolt-first 0.017"
+    expect(line).toMatch(/Margins {4}stripping 0\.0\d\d, bolt-first 0\.0\d\d$/);
+    app.unmount();
+  });
+});

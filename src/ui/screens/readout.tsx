@@ -26,6 +26,8 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const t = useTheme();
   const q = (v: number, d: Dimension, sig = 3) => formatQuantity(v, d, units, {ascii: t.ascii, significant: sig});
   const n = (v: number) => formatNumber(v, 3);
+  // A margin far below 1 needs no third figure (and two keep the line inside the column).
+  const marginText = (v: number) => formatNumber(v, Math.abs(v) < 0.1 ? 2 : 3);
   const ns = (v: number) => formatNumber(toDisplay(v, 'stress', units), 3);
   const num = (v: number, d: Dimension) => formatNumber(toDisplay(v, d, units), 3);
   if (!result || !input) {
@@ -62,7 +64,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
     row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${st.limitsUsed} limits)`, stripFail ? t.tone('fail') : undefined),
     row('b', 'Bolt break', `${q(st.boltBreakForce, 'force')} (As x Rm)`),
-    row('m', 'Margins', `stripping ${n(margin.stripping)}, bolt-first ${n(margin.boltBreaksFirst)}`),
+    row('m', 'Margins', `stripping ${marginText(margin.stripping)}, bolt-first ${marginText(margin.boltBreaksFirst)}`),
     row('g', ' bolt-1st', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} ${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
     row('r', 'Needed', `F ${num(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${num(st.requiredEngagement.alexander, 'length')} Alex. ${displayUnit('length', units, t.ascii)}`),
