@@ -74,6 +74,7 @@ export function fixtureScrew(input: ScrewInput): ScrewResult {
       stripping: {nutForce: 268000, screwForce: 507000, nutArea: 1, screwArea: 1, weaker: 'nut', margin: 268000 / Math.max(1, input.load), wearToStrip: 1}},
     buckling: {checked: false, criticalLoad: null, method: null, slenderness: null, transitionSlenderness: null, ends: 'pinned-pinned', endConstant: 1, margin: null, source: 'fixture'},
     flags: input.load >= 50000 ? [{code: 'back-drives', level: 'fail', message: 'fixture: the load can back-drive'}] : [],
+    input: {loadDirection: input.loadDirection, load: input.load, nutLength: input.nutLength},
     sources: ['fixture screw source (test only)'],
     notes: [],
   } as unknown as ScrewResult;

@@ -39,6 +39,15 @@ describe('power-screw mode', () => {
     app.unmount();
   });
 
+  it('says what the buckling check and the allowable pressure need, each line whole at 80 columns', async () => {
+    const app = startApp({rows: 30});
+    await app.press('m', 'POWER SCREW');
+    // no free length and no sliding speed given (the fixture's screw)
+    expect(app.frame()).toMatch(/Buckling {3}not checked: give the free length$/m);
+    expect(app.frame()).toMatch(/ {46}allowed: give a sliding speed$/m);
+    app.unmount();
+  });
+
   it('names the field and range on bad input', async () => {
     const app = startApp();
     await app.press(['m', KEY.right, KEY.down, KEY.down], '> Nut length');

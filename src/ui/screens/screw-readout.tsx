@@ -42,11 +42,11 @@ export function ScrewReadout({result: r, units, width, height, problem}: Props) 
     row('1st thread', `von Mises ${q(ft.vonMises, 'stress')} (${formatNumber(ft.share * 100, 2)}% share)`),
     fit(` bnd ${ns(ft.bending)} brg ${ns(ft.bearing)} sh ${ns(ft.shear)} ax ${ns(ft.axial)} ${su}`, width, t.sym.ellipsis),
     row('Nut', `${formatNumber(r.nut.engagedThreads, 2)} threads, pressure ${q(r.nut.bearingPressure, 'stress')}`),
-    row('', allow ? `allowed ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')}` : 'allowable pressure: give a sliding speed'),
+    row('', allow ? `allowed ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')}` : 'allowed: give a sliding speed'),
     row('Stripping', `nut ${q(r.nut.stripping.nutForce, 'force')}, screw ${q(r.nut.stripping.screwForce, 'force')}`),
     row('', `margin ${n(r.nut.stripping.margin)} (${r.nut.stripping.weaker} weaker)`),
     row(' margin', `${marginGauge(r.nut.stripping.margin, 1, Math.max(8, width - 25), t)} ${t.sym.mark} 1 = even`),
-    row('Buckling', b.checked && b.criticalLoad !== null ? `${q(b.criticalLoad, 'force')} ${b.method}, margin ${b.margin === null ? '-' : n(b.margin)}` : 'not checked (tension, or no length)'),
+    row('Buckling', b.checked && b.criticalLoad !== null ? `${q(b.criticalLoad, 'force')} ${b.method}, margin ${b.margin === null ? '-' : n(b.margin)}` : r.input.loadDirection === 'tension' ? 'not checked: the screw is in tension' : 'not checked: give the free length'),
   ];
   return <Lines lines={lines} width={width} height={height} />;
 }
