@@ -53,3 +53,14 @@ describe('readout at 80 columns', () => {
     app.unmount();
   });
 });
+
+describe('readout in US units at 80 columns', () => {
+  it('the first-thread stress parts keep their unit on the line (two figures when three do not fit)', async () => {
+    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
+    const app = startApp({svc, state: {units: 'us'} as never});
+    await app.see('ksi');
+    const line = app.frame().split('\n').find(l => /\bax -?\d/.test(l))!;
+    expect(line).toMatch(/ax -?[\d.]+ bnd -?[\d.]+ sh -?[\d.]+ tor -?[\d.]+ brg -?[\d.]+ ksi$/);
+    app.unmount();
+  });
+});

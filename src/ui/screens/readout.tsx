@@ -28,7 +28,6 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const n = (v: number) => formatNumber(v, 3);
   // A margin far below 1 needs no third figure (and two keep the line inside the column).
   const marginText = (v: number) => formatNumber(v, Math.abs(v) < 0.1 ? 2 : 3);
-  const ns = (v: number) => formatNumber(toDisplay(v, 'stress', units), 3);
   const num = (v: number, d: Dimension) => formatNumber(toDisplay(v, d, units), 3);
   if (!result || !input) {
     const lines: Line[] = [
@@ -53,13 +52,23 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     t,
   );
   const hole = input.internal === 'nut' ? 'nut' : 'hole';
+  // The parts of the first-thread stress on one line, with three figures, or two when
+  // three do not fit (ksi values carry a decimal more than MPa).
+  const stressParts = (fallback: number) => {
+    const text = (sig: number) => {
+      const s = (v: number) => formatNumber(toDisplay(v, 'stress', units), sig);
+      return `ax ${s(ft.axial)} bnd ${s(ft.bending)} sh ${s(ft.shear)} tor ${s(ft.torsion)} brg ${s(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`;
+    };
+    const full = text(3);
+    return Array.from(full).length <= width ? full : text(fallback);
+  };
   const row = (_key: string, label: string, text: string, color?: string): Line => ({text: fit(`${L(label)}${text}`, width, t.sym.ellipsis), color});
   const lines: Line[] = [
     row('p', 'Preload', tg.preload.min === tg.preload.max ? `${q(tg.preload.nominal, 'force')} (no scatter)` : `${num(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')} (nom. ${num(tg.preload.nominal, 'force')})`),
     row('t', 'Torque', `${q(tg.torque, 'torque')}, stress ${formatNumber(tg.utilisation * 100, 2)}% of Rp0.2`),
     row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')}`),
     row('y', '', `= ${n(margin.firstThreadYieldBolt)}x bolt yield, ${n(margin.firstThreadYieldInternal)}x ${input.internal === 'nut' ? 'nut' : 'part'}`),
-    fit(`ax ${ns(ft.axial)} bnd ${ns(ft.bending)} sh ${ns(ft.shear)} tor ${ns(ft.torsion)} brg ${ns(ft.bearing)} ${displayUnit('stress', units, t.ascii)}`, width, t.sym.ellipsis),
+    fit(stressParts(2), width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
     row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${st.limitsUsed} limits)`, stripFail ? t.tone('fail') : undefined),
