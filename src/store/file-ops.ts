@@ -5,13 +5,22 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import {randomBytes} from 'node:crypto';
 import {StoreError} from './errors.js';
 
 const sleeper = new Int32Array(new SharedArrayBuffer(4));
 /** Block the thread for `ms` milliseconds (the store API is synchronous). */
 export function sleepMs(ms: number): void {
   Atomics.wait(sleeper, 0, 0, ms);
+}
+
+let tokens = 0;
+/**
+ * A token no other write or lock of this process or of another process is likely to
+ * share: the pid goes beside it, a counter and random digits in it. (Not node:crypto,
+ * which would cost every start a few milliseconds to load for a file name.)
+ */
+export function uniqueToken(): string {
+  return `${(tokens++).toString(36)}${Math.random().toString(36).slice(2, 10)}`;
 }
 
 export function errCode(e: unknown): string {
@@ -42,7 +51,7 @@ export const TMP_MARK = '.tmp-';
  * With `exclusive`, fails with EEXIST instead of replacing an existing file.
  */
 export function writeFileAtomic(file: string, data: string, opts: {exclusive?: boolean} = {}): void {
-  const tmp = `${file}${TMP_MARK}${process.pid}-${randomBytes(4).toString('hex')}`;
+  const tmp = `${file}${TMP_MARK}${process.pid}-${uniqueToken()}`;
   let mode = 0o666;
   try {
     mode = fs.statSync(file).mode & 0o777;
@@ -174,7 +183,7 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
   const timeoutMs = opts.timeoutMs ?? 5000;
   const staleMs = opts.staleMs ?? 10_000;
   const start = Date.now();
-  const token = randomBytes(6).toString('hex');
+  const token = `${process.pid}-${uniqueToken()}`;
   const content = JSON.stringify({pid: process.pid, host: os.hostname(), at: Date.now(), token});
   let fd: number | undefined;
   for (;;) {

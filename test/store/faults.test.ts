@@ -6,6 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 import {openPresetStore} from '../../src/store/presets.js';
 import {MAX_STORE_BYTES} from '../../src/store/store-file.js';
+import {uniqueToken} from '../../src/store/file-ops.js';
 import {jointPreset, tempDir} from './helpers.js';
 
 const file = (dir: string) => path.join(dir, 'presets.json');
@@ -184,5 +185,13 @@ describe('locks', () => {
     fs.writeFileSync(`${file(dir)}.corrupt-2026-01-01T00-00-00-000Z.tmp-99999-deadbeef`, '{"half": ');
     openPresetStore(dir).save(jointPreset('b'));
     expect(fs.readdirSync(dir).filter(n => n.includes('.tmp-'))).toEqual([]);
+  });
+});
+
+describe('temp-file and lock tokens', () => {
+  it('are distinct across many calls in one process (the pid tells processes apart)', () => {
+    const seen = new Set(Array.from({length: 20_000}, () => uniqueToken()));
+    expect(seen.size).toBe(20_000);
+    for (const t of [...seen].slice(0, 50)) expect(t).toMatch(/^[0-9a-z]+$/);
   });
 });
