@@ -64,3 +64,20 @@ describe('readout in US units at 80 columns', () => {
     app.unmount();
   });
 });
+
+describe('a hole recorded as stripped', () => {
+  it('the joint screen says the results are for a sound thread and points to the repairs', async () => {
+    const values = structuredClone(FIXTURE_VALUES);
+    values.hole = {...values.hole, holeState: 'stripped', strippedDepth: 7};
+    const app = startApp({state: {values} as never});
+    await app.see('WATCH The hole is recorded as stripped to 7.00 mm: the results are for a sound');
+    await app.press('f', 'All flags');
+    expect(app.frame()).toContain('WATCH hole-stripped: The hole is recorded');
+    app.unmount();
+    // an intact hole: no such line
+    const intact = startApp();
+    await intact.see('Preload');
+    expect(intact.frame()).not.toContain('Hole stripped');
+    intact.unmount();
+  });
+});

@@ -190,9 +190,29 @@ function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag
   return <Lines lines={lines} width={width} height={rows} />;
 }
 
+/**
+ * A joint whose hole is recorded as stripped (Hole state step): the check above is of a
+ * sound thread, so the flags say so and point to the repairs. The workbench's own flag;
+ * the check itself knows nothing of the hole's state.
+ */
+export function strippedHoleFlag(state: WorkbenchState, t: Theme): Flag | undefined {
+  const hole = shownValues(state).hole;
+  if (state.mode !== 'joint' || hole.holeState !== 'stripped') return undefined;
+  const depth = typeof hole.strippedDepth === 'number' ? ` to ${formatQuantity(hole.strippedDepth, 'length', state.units, {ascii: t.ascii, significant: 3})}` : '';
+  return {
+    code: 'hole-stripped',
+    level: 'watch',
+    message: `The hole is recorded as stripped${depth}: the results are for a sound thread. The Repairs screen (r) ranks the fixes.`,
+    summary: `Hole stripped${depth}: results are for a sound thread; r for repairs`,
+  };
+}
+
 export function JointScreen(props: Props) {
   const {state, width, height} = props;
-  const ev = state.mode === 'screw' && props.sev ? props.sev : props.ev;
+  const t = useTheme();
+  const checked = state.mode === 'screw' && props.sev ? props.sev : props.ev;
+  const stripped = strippedHoleFlag(state, t);
+  const ev = stripped && checked.result ? {...checked, result: {...checked.result, flags: [stripped, ...checked.result.flags]}} : checked;
   // The readout needs 14 lines; a taller terminal gives the rest to the flags.
   const flagLines = Math.max(2, height - 1 - 14);
   const bodyH = height - 1 - flagLines;
