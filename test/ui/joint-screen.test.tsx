@@ -21,13 +21,21 @@ describe('joint screen', () => {
   });
 });
 
+/**
+ * The workbench on the real check, with a grey cast-iron part (a shipped material) in
+ * place of the fixture's; `joint` changes the fixture joint (invented demo values).
+ */
+function realCheckApp(joint: Partial<typeof FIXTURE_VALUES.joint> = {}, state: Record<string, unknown> = {}) {
+  const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
+  const values = structuredClone(FIXTURE_VALUES);
+  Object.assign(values.joint, joint);
+  return startApp({svc, state: {values, ...state} as never});
+}
+
 describe('flag lines at 80 columns', () => {
   it('a message too long for its line shows as its summary, numbers kept, with (f) for the whole', async () => {
-    // The real check on a grey cast-iron part with a short engagement (invented demo values).
-    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
-    const values = structuredClone(FIXTURE_VALUES);
-    values.joint.engagement = 4;
-    const app = startApp({svc, state: {values} as never});
+    // A short engagement on the real check.
+    const app = realCheckApp({engagement: 4});
     await app.see('Thread strips first:');
     const line = app.frame().split('\n').find(l => l.startsWith('FAIL  Thread strips first:'))!;
     expect(line).toMatch(/^FAIL {2}Thread strips first: hole \d+(\.\d+)? kN < bolt break \d+(\.\d+)? kN \((f|\+\d+, f: all)\)$/);
@@ -41,11 +49,7 @@ describe('flag lines at 80 columns', () => {
 
 describe('readout at 80 columns', () => {
   it('a very short engagement: the margins line shows both margins whole', async () => {
-    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
-    const values = structuredClone(FIXTURE_VALUES);
-    values.joint.engagement = 1;
-    values.joint.chamfer = 0.8;
-    const app = startApp({svc, state: {values} as never});
+    const app = realCheckApp({engagement: 1, chamfer: 0.8});
     await app.see('Margins');
     const line = app.frame().split('\n').find(l => l.includes('Margins'))!;
     // margins far below 1 with two figures, e.g. "stripping 0.041, bolt-first 0.017"
@@ -56,8 +60,7 @@ describe('readout at 80 columns', () => {
 
 describe('readout in US units at 80 columns', () => {
   it('the first-thread stress parts keep their unit on the line (two figures when three do not fit)', async () => {
-    const svc = fixtureServices({check: input => checkJoint({...input, parent: 'EN-GJL-250'})});
-    const app = startApp({svc, state: {units: 'us'} as never});
+    const app = realCheckApp({}, {units: 'us'});
     await app.see('ksi');
     const line = app.frame().split('\n').find(l => /\bax -?\d/.test(l))!;
     expect(line).toMatch(/ax -?[\d.]+ bnd -?[\d.]+ sh -?[\d.]+ tor -?[\d.]+ brg -?[\d.]+ ksi$/);
