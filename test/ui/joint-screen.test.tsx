@@ -4,6 +4,9 @@ import {startApp} from '../support/start-app.js';
 import {KEY} from '../support/keys.js';
 import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {checkJoint} from '../../src/core/joint/index.js';
+import {strippedHoleFlag} from '../../src/ui/screens/joint-screen.js';
+import {initialState} from '../../src/ui/state/workbench.js';
+import {makeTheme} from '../../src/ui/theme.js';
 
 afterEach(() => cleanup());
 
@@ -77,6 +80,13 @@ describe('a hole recorded as stripped', () => {
     await app.press('f', 'All flags');
     expect(app.frame()).toContain('WATCH hole-stripped: The hole is recorded');
     app.unmount();
+    // beside other flags it shows as its summary, which fits a flag line (68 characters, as the core's)
+    for (const units of ['si', 'us'] as const)
+      for (const strippedDepth of [undefined, 7, 123.4]) {
+        const f = strippedHoleFlag({...initialState({name: 'x', readOnly: false, values: {...values, hole: {...values.hole, strippedDepth}}, units, ascii: false})}, makeTheme(false, false));
+        expect(f?.summary).toMatch(/^Hole stripped( to [\d.]+ (mm|in))?: results assume a sound thread; r: repairs$/);
+        expect(Array.from(f!.summary!).length).toBeLessThanOrEqual(68);
+      }
     // an intact hole: no such line
     const intact = startApp();
     await intact.see('Preload');

@@ -203,7 +203,7 @@ export function strippedHoleFlag(state: WorkbenchState, t: Theme): Flag | undefi
     code: 'hole-stripped',
     level: 'watch',
     message: `The hole is recorded as stripped${depth}: the results are for a sound thread. The Repairs screen (r) ranks the fixes.`,
-    summary: `Hole stripped${depth}: results are for a sound thread; r for repairs`,
+    summary: `Hole stripped${depth}: results assume a sound thread; r: repairs`,
   };
 }
 
