@@ -6,26 +6,8 @@ import type {RepairOption, RepairPlan} from '../core/repair/index.js';
 import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {displayUnit, toDisplay, type UnitSystem} from '../core/units.js';
+import {wrapText} from './wrap.js';
 
-export const WIDTH = 80;
-
-/** Word-wrap `text` to WIDTH, the first line starting with `first`, the rest with `indent`. */
-export function wrap(text: string, first: string, indent: string): string[] {
-  const lines: string[] = [];
-  let line = first;
-  let fresh = true;
-  for (const word of text.split(/\s+/).filter(Boolean)) {
-    if (!fresh && (line + ' ' + word).length > WIDTH) {
-      lines.push(line);
-      line = indent + word;
-    } else {
-      line += (fresh ? '' : ' ') + word;
-    }
-    fresh = false;
-  }
-  lines.push(line);
-  return lines;
-}
 
 function fit(text: string, width: number): string {
   return text.length <= width ? text.padEnd(width) : `${text.slice(0, width - 1)}~`;
@@ -94,11 +76,11 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string, o
   const L = displayUnit('length', units, true);
   const T = displayUnit('torque', units, true);
   const out: string[] = [];
-  out.push(...wrap(heading, '', '  '));
+  out.push(...wrapText(heading, '', '  '));
   const chosen = opts.chosen !== undefined ? plan.options.find(o => o.rank === opts.chosen) : undefined;
   if (chosen) {
     const how = !chosen.feasible ? 'cannot be done here' : chosen.meetsMargin ? 'meets the required margin' : 'short of the required margin';
-    out.push(...wrap(`Repair chosen: ${chosen.rank} ${chosen.label} (${how}).`, '', '  '));
+    out.push(...wrapText(`Repair chosen: ${chosen.rank} ${chosen.label} (${how}).`, '', '  '));
   }
   const h = plan.hole;
   const hole = [
@@ -107,10 +89,10 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string, o
     h.depthAvailable !== null ? `${h.through ? 'thickness' : 'depth available'} ${length(h.depthAvailable, units)} ${L}` : null,
     h.wall !== null ? `edge distance ${length(h.wall, units)} ${L}` : null,
   ].filter(Boolean);
-  out.push(...wrap(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin.toFixed(2)}.`, '', '  '));
+  out.push(...wrapText(`Hole: ${hole.join(', ')}. Required margin ${plan.requiredMargin.toFixed(2)}.`, '', '  '));
   if (plan.asIs) {
     const label = h.state === 'stripped' ? 'As designed, before the damage' : 'As is';
-    out.push(...wrap(`${label}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`, '', '  '));
+    out.push(...wrapText(`${label}: stripping margin ${ratio(plan.asIs.margin.stripping)}, bolt-breaks-first margin ${ratio(plan.asIs.margin.boltBreaksFirst)}.`, '', '  '));
   }
   out.push('');
   out.push(row(['#', 'option (effort)', 'ok', 'strip', 'break', `drill`, 'tap', 'depth', 'torque']));
@@ -124,19 +106,19 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string, o
   out.push('');
   for (const o of plan.options) {
     const text = detail(o, units);
-    if (text) out.push(...wrap(text, `${right(String(o.rank), 2)} ${o.label}: `, '     '));
+    if (text) out.push(...wrapText(text, `${right(String(o.rank), 2)} ${o.label}: `, '     '));
   }
   if (plan.notes.length) {
     out.push('');
-    for (const n of plan.notes) out.push(...wrap(`${n}.`, 'Note: ', '      '));
+    for (const n of plan.notes) out.push(...wrapText(`${n}.`, 'Note: ', '      '));
   }
   out.push('');
-  out.push(...wrap(plan.rankingRule, 'Ranking: ', '  '));
+  out.push(...wrapText(plan.rankingRule, 'Ranking: ', '  '));
   out.push('Effort grades:');
-  for (const line of EFFORT_SCALE_TEXT.split('\n')) out.push(...wrap(line, '  ', '     '));
+  for (const line of EFFORT_SCALE_TEXT.split('\n')) out.push(...wrapText(line, '  ', '     '));
   if (opts.cautions !== false) {
     out.push('');
-    for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
+    for (const c of CAUTION_LINES) out.push(...wrapText(c, '', '  '));
   }
   return out.join('\n') + '\n';
 }

@@ -19,10 +19,10 @@ import {
 import {formatNumber, toDisplay, type UnitSystem} from '../../core/units.js';
 import {CAUTION_SHORT} from '../../core/cautions.js';
 import type {Provenance} from '../../core/types.js';
+import {wrapText} from '../../report/wrap.js';
 
 const KINDS = ['bolt', 'nut', 'parent'] as const;
 type Kind = (typeof KINDS)[number];
-const WIDTH = 80;
 
 const HELP = `tapwright materials - bolt grades, nut classes, parent materials and sources
 
@@ -44,23 +44,6 @@ tauB/Rm is the shear-strength ratio used for thread stripping.
 
 ${USER_MATERIALS_HELP}
 `;
-
-/** Wrap `text` to WIDTH with `first` as the prefix of the first line and `indent` for the rest. */
-function wrap(text: string, first: string, indent: string): string[] {
-  const lines: string[] = [];
-  let line = first;
-  for (const word of text.split(/\s+/).filter(Boolean)) {
-    const sep = line === first || line === indent ? '' : ' ';
-    if ((line + sep + word).length > WIDTH && line.trim() !== '' && line !== first && line !== indent) {
-      lines.push(line);
-      line = indent + word;
-    } else {
-      line += sep + word;
-    }
-  }
-  lines.push(line);
-  return lines;
-}
 
 function stress(v: number, units: UnitSystem): string {
   return formatNumber(toDisplay(v, 'stress', units), 3);
@@ -86,7 +69,7 @@ function starred(p: Provenance): string {
 }
 
 function sourceLines(p: Provenance, label = 'source'): string[] {
-  return wrap(p.source, `    ${label}: `, '      ');
+  return wrapText(p.source, `    ${label}: `, '      ');
 }
 
 function boltText(rows: BoltGrade[], units: UnitSystem): string[] {
@@ -102,7 +85,7 @@ function boltText(rows: BoltGrade[], units: UnitSystem): string[] {
         w,
       ),
     );
-    out.push(...wrap(g.name, '    ', '    '));
+    out.push(...wrapText(g.name, '    ', '    '));
     out.push(...sourceLines(g.provenance));
   }
   return out;
@@ -114,7 +97,7 @@ function nutText(rows: NutClass[], units: UnitSystem): string[] {
   const out = [`NUT CLASSES (strength used for thread stripping, ${su})`, row(['class', 'strength', 'tauB/Rm'], w), rule(w)];
   for (const n of rows) {
     out.push(row([n.id, stress(n.rm, units), `${n.shearRatio.toFixed(2)}${starred(n.shearRatioProvenance)}`], w));
-    out.push(...wrap(n.name, '    ', '    '));
+    out.push(...wrapText(n.name, '    ', '    '));
     out.push(...sourceLines(n.provenance));
   }
   return out;
@@ -133,7 +116,7 @@ function parentText(rows: ParentMaterial[], units: UnitSystem): string[] {
         w,
       ),
     );
-    out.push(...wrap(`${m.name} [${m.group}]`, '    ', '    '));
+    out.push(...wrapText(`${m.name} [${m.group}]`, '    ', '    '));
     out.push(...sourceLines(m.provenance));
     if (m.yieldProvenance) out.push(...sourceLines(m.yieldProvenance, 'yield'));
   }
@@ -147,8 +130,8 @@ export function materialsText(kinds: readonly Kind[], units: UnitSystem): string
   if (kinds.includes('nut')) blocks.push(nutText(listNutClasses(), units));
   if (kinds.includes('parent')) blocks.push(parentText(listParentMaterials(), units));
   const foot = [
-    ...wrap('* recalled value (from memory); tauB/Rm per VDI 2230 Part 1 as recalled, or common practice. `tapwright materials --json` gives the source of each value.', '', '  '),
-    ...wrap(`${CAUTION_SHORT} Check material strengths against the certificates.`, '', ''),
+    ...wrapText('* recalled value (from memory); tauB/Rm per VDI 2230 Part 1 as recalled, or common practice. `tapwright materials --json` gives the source of each value.', '', '  '),
+    ...wrapText(`${CAUTION_SHORT} Check material strengths against the certificates.`, '', ''),
   ];
   return `${[...blocks.map(b => b.join('\n')), foot.join('\n')].join('\n\n')}\n`;
 }

@@ -17,7 +17,8 @@ import type {JointInput, JointInputDraft} from '../../core/joint/input.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {UnitSystem} from '../../core/units.js';
 import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
-import {lengthText, planText, wrap} from '../../report/repair-text.js';
+import {lengthText, planText} from '../../report/repair-text.js';
+import {wrapText} from '../../report/wrap.js';
 import {readSolidTableFile} from '../solid-table-file.js';
 import {planMarkdown} from '../../report/repair-markdown.js';
 
@@ -71,7 +72,7 @@ Lengths take units (12mm, 0.5in); a bare number is in the --units system.
 Exit codes: 0 at least one option meets the margin; 3 computed, but none
 meets the margin; 2 bad input or usage.
 
-${wrap(REPAIR_RANKING_RULE, 'Ranking: ', '  ').join('\n')}
+${wrapText(REPAIR_RANKING_RULE, 'Ranking: ', '  ').join('\n')}
 
 Effort grades:
 ${EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`).join('\n')}

@@ -5,30 +5,12 @@
 import type {ScrewResult} from '../../core/screw/index.js';
 import {formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../../core/units.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
+import {wrapText} from '../../report/wrap.js';
 
-const WIDTH = 80;
 const LABEL = 14;
 
-/** Word-wrap `text` to 80 columns; `first` prefixes the first line, `indent` the others. */
-export function wrap(text: string, first: string, indent: string): string[] {
-  const lines: string[] = [];
-  let line = first;
-  let empty = true;
-  for (const word of text.split(/\s+/).filter(Boolean)) {
-    if (!empty && (line + ' ' + word).length > WIDTH) {
-      lines.push(line);
-      line = indent + word;
-    } else {
-      line += (empty ? '' : ' ') + word;
-    }
-    empty = false;
-  }
-  lines.push(line);
-  return lines;
-}
-
 function field(label: string, text: string): string[] {
-  return wrap(text, label.padEnd(LABEL), ' '.repeat(LABEL));
+  return wrapText(text, label.padEnd(LABEL), ' '.repeat(LABEL));
 }
 
 export function screwText(r: ScrewResult, units: UnitSystem, preset?: string): string {
@@ -67,12 +49,12 @@ export function screwText(r: ScrewResult, units: UnitSystem, preset?: string): s
     : r.input.loadDirection === 'tension' ? 'not checked: the screw is in tension' : 'not checked: give --length for the unsupported length'));
   out.push('', 'Flags');
   if (r.flags.length === 0) out.push('  none');
-  for (const f of r.flags) out.push(...wrap(`${f.code}: ${f.message}`, `  ${f.level.toUpperCase().padEnd(6)}`, '        '));
+  for (const f of r.flags) out.push(...wrapText(`${f.code}: ${f.message}`, `  ${f.level.toUpperCase().padEnd(6)}`, '        '));
   out.push('', 'Sources');
-  for (const src of [...r.sources, `nut: ${n.materialSource}`, `screw: ${r.screw.materialSource}`]) out.push(...wrap(src, '  - ', '    '));
+  for (const src of [...r.sources, `nut: ${n.materialSource}`, `screw: ${r.screw.materialSource}`]) out.push(...wrapText(src, '  - ', '    '));
   out.push('', 'Notes');
-  for (const note of r.notes) out.push(...wrap(note, '  - ', '    '));
+  for (const note of r.notes) out.push(...wrapText(note, '  - ', '    '));
   out.push('');
-  for (const line of CAUTION_LINES) out.push(...wrap(line, '', ''));
+  for (const line of CAUTION_LINES) out.push(...wrapText(line, '', ''));
   return `${out.join('\n')}\n`;
 }

@@ -23,7 +23,8 @@ import {
 import type {Range} from '../../core/types.js';
 import type {UnitSystem} from '../../core/units.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
-import {screwText, wrap} from './screw-text.js';
+import {screwText} from './screw-text.js';
+import {wrapText} from '../../report/wrap.js';
 
 const OPTION_FIELD: Record<string, string> = {
   thread: '--thread', starts: '--starts', load: '--load', loadDirection: '--direction', muThread: '--mu-thread',
@@ -188,9 +189,9 @@ export function screwInputFromArgs(args: string[], base?: Record<string, unknown
 function picksText(): string {
   const out = ['THREAD FRICTION f (--mu-thread pick: min..max)'];
   for (const p of THREAD_FRICTION) out.push(`  ${p.id.padEnd(22)} ${p.min.toFixed(2)}..${p.max.toFixed(2)}  ${p.screw} screw, ${p.nut} nut`);
-  out.push(...wrap(THREAD_FRICTION_SOURCE.source, '  source: ', '    '), '', 'COLLAR FRICTION fc (--mu-collar pick; add :starting for the starting value)');
+  out.push(...wrapText(THREAD_FRICTION_SOURCE.source, '  source: ', '    '), '', 'COLLAR FRICTION fc (--mu-collar pick; add :starting for the starting value)');
   for (const p of COLLAR_FRICTION) out.push(`  ${p.id.padEnd(22)} running ${p.running.toFixed(2)}, starting ${p.starting.toFixed(2)}`);
-  out.push(...wrap(COLLAR_FRICTION_SOURCE.source, '  source: ', '    '), '');
+  out.push(...wrapText(COLLAR_FRICTION_SOURCE.source, '  source: ', '    '), '');
   return out.join('\n');
 }
 

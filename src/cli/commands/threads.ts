@@ -11,8 +11,8 @@ import {parseThread, threadGeometry, limitsSides, limitsSummary, ACCEPTED_FORMS}
 import {CAUTION_SHORT} from '../../core/cautions.js';
 import type {ThreadGeometry, ThreadSpec} from '../../core/types.js';
 import type {UnitSystem} from '../../core/units.js';
+import {wrapText} from '../../report/wrap.js';
 
-const WIDTH = 80;
 const IN = 25.4;
 
 const HELP = `tapwright threads - geometry and limits of size of a thread
@@ -45,24 +45,6 @@ thread for the tolerance classes, and for each side (internal, external)
 whether its limits are read from a table of the standard or computed from
 the formulas as a fallback, with the source.
 `;
-
-function wrap(text: string, first: string, indent: string): string[] {
-  const lines: string[] = [];
-  let line = first;
-  let fresh = true;
-  for (const word of text.split(/\s+/).filter(Boolean)) {
-    const sep = fresh ? '' : ' ';
-    if (!fresh && (line + sep + word).length > WIDTH) {
-      lines.push(line);
-      line = indent + word;
-    } else {
-      line += sep + word;
-    }
-    fresh = false;
-  }
-  lines.push(line);
-  return lines;
-}
 
 function len(mm: number | undefined, units: UnitSystem): string {
   if (mm === undefined) return '-';
@@ -125,9 +107,9 @@ function geometryText(g: ThreadGeometry, units: UnitSystem): string[] {
   if (s.toleranceDefaulted) out.push('  (class not fully given: default applied)');
   out.push('');
   // Where the limits come from, one side at a time (a pair may mix a table side and a formula side).
-  out.push(...wrap(`${limitsSummary(g)}.`, 'Limits of size: ', '  '));
-  for (const side of limitsSides(g)) out.push(...wrap(side.source, `  ${side.side} ${side.cls} [${side.method}]: `, '    '));
-  for (const n of g.notes) out.push(...wrap(n, '  - ', '    '));
+  out.push(...wrapText(`${limitsSummary(g)}.`, 'Limits of size: ', '  '));
+  for (const side of limitsSides(g)) out.push(...wrapText(side.source, `  ${side.side} ${side.cls} [${side.method}]: `, '    '));
+  for (const n of g.notes) out.push(...wrapText(n, '  - ', '    '));
   return out;
 }
 
@@ -144,7 +126,7 @@ function powerText(s: ThreadSpec, units: UnitSystem): string[] {
   }
   if (!s.isStandardPitch) out.push('  - pitch not in the shipped standard series for this size');
   out.push('');
-  out.push(...wrap('Power-screw geometry, torque, efficiency and stresses: see tapwright screw --help.', '', ''));
+  out.push(...wrapText('Power-screw geometry, torque, efficiency and stresses: see tapwright screw --help.', '', ''));
   return out;
 }
 
@@ -192,7 +174,7 @@ export const command: Command = {
       return EXIT.ok;
     }
     const lines = g ? geometryText(g, units) : powerText(spec, units);
-    lines.push('', ...wrap(CAUTION_SHORT, '', ''));
+    lines.push('', ...wrapText(CAUTION_SHORT, '', ''));
     const report = `${lines.join('\n')}\n`;
     io.out(values.ascii === true ? toAscii(report) : report);
     return EXIT.ok;
