@@ -7,7 +7,7 @@ import {defaultScatter} from '../default-scatter.js';
 import {withMyMaterial} from '../user-material-input.js';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
-import {formatOption, parseOptions, quantity, str, unitsOption, type OptionSpec} from '../args.js';
+import {formatOption, joinNegativeValues, parseOptions, quantity, str, unitsOption, type OptionSpec} from '../args.js';
 import {JointInputError} from '../../core/joint/index.js';
 import {resolveGeometry} from '../../core/joint/resolve.js';
 import {nutClassProblem} from '../../core/materials/index.js';
@@ -97,23 +97,6 @@ async function chooseTable(given: string | undefined, io: CliIo): Promise<SolidI
   return findSolidTable(store, given) ?? (await readSolidTableFile(given, io, '--solid-table', '--solid-table'));
 }
 
-/** "--wall -3" -> "--wall=-3", so a negative number reaches the range check instead of the option parser. */
-function joinNegativeValues(args: string[]): string[] {
-  const out: string[] = [];
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i] as string;
-    const next = args[i + 1];
-    const name = a.startsWith('--') && !a.includes('=') ? a.slice(2) : undefined;
-    if (name !== undefined && OPTIONS[name]?.type === 'string' && next !== undefined && /^-[\d.]/.test(next)) {
-      out.push(`${a}=${next}`);
-      i++;
-    } else {
-      out.push(a);
-    }
-  }
-  return out;
-}
-
 /** Nominal diameter of the joint's thread, mm (the joint is already validated, so it parses). */
 function throughNominal(thread: string): number {
   return resolveGeometry(thread).nominal;
@@ -147,7 +130,7 @@ export const command: Command = {
   summary: 'ranked repairs for a weak or stripped thread',
   help: HELP,
   async run(args, io) {
-    const {values} = parseOptions(joinNegativeValues(args), OPTIONS, false);
+    const {values} = parseOptions(joinNegativeValues(args, OPTIONS), OPTIONS, false);
     if (values.help) {
       io.out(HELP);
       return EXIT.ok;
