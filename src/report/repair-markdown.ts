@@ -9,6 +9,7 @@ import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
 import {cell, isoDate} from './markdown.js';
+import {optionDetail} from './repair-text.js';
 
 export interface RepairReportMeta {
   date: Date;
@@ -94,8 +95,8 @@ export function planSectionLines(plan: RepairPlan, u: UnitSystem, opts: {level: 
   }
   out.push('', `${hd} Reasons and notes`, '');
   for (const o of plan.options) {
-    const parts = [o.reason, o.strength ? `governs: ${o.strength.governs}` : null, ...(o.feasible ? o.notes : [])].filter(Boolean);
-    if (parts.length) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(parts.join('; '))}`);
+    const text = optionDetail(o, u);
+    if (text) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(text)}`);
   }
   for (const n of plan.notes) out.push(`- ${cell(n)}`);
   out.push('', `${hd} Ranking`, '', cell(plan.rankingRule), '', ...EFFORT_SCALE_TEXT.split('\n').map(l => `- ${cell(l)}`));

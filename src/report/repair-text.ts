@@ -48,7 +48,12 @@ function row(cells: string[]): string {
   return [right(rank, 2), fit(option, 24), fit(ok, 5), right(strip, 5), right(brk, 5), right(dr, 5), fit(tap, 15), right(depth, 5), right(tq, 6)].join(' ').trimEnd();
 }
 
-function detail(o: RepairOption, units: UnitSystem): string {
+/**
+ * What to do for one option, in sentences: the reason, what governs, insert length and
+ * set-down, screw, screw length, tap and drill depths, notes. The text and the Markdown
+ * plan both use it, so they carry the same facts.
+ */
+export function optionDetail(o: RepairOption, units: UnitSystem): string {
   const L = displayUnit('length', units, true);
   const parts: string[] = [];
   if (o.reason) parts.push(o.reason + '.');
@@ -105,7 +110,7 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string, o
   out.push(`depth: blind-hole depth with the drill point; torque: to use afterwards.`);
   out.push('');
   for (const o of plan.options) {
-    const text = detail(o, units);
+    const text = optionDetail(o, units);
     if (text) out.push(...wrapText(text, `${right(String(o.rank), 2)} ${o.label}: `, '     '));
   }
   if (plan.notes.length) {
