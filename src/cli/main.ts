@@ -24,6 +24,8 @@ export function topHelp(): string {
     '  --version      print the version',
     '  --preset NAME  open the workbench on a saved or shipped preset',
     '  --ascii        workbench with ASCII borders and symbols',
+    '  --units si|us  display units of the workbench (a bare number is read in them)',
+    '  --color, --no-color  force colour on or off (NO_COLOR is honoured too)',
     '',
     'Exit codes: 0 ok; 2 bad input or usage; 3 computed, but a check failed;',
     '1 internal error.',
@@ -34,12 +36,32 @@ export function topHelp(): string {
   ].join('\n');
 }
 
-function reportError(e: unknown, io: CliIo): number {
+/** True when the command line asks for JSON output (--json, --json=true, --format json, --format=json). */
+export function wantsJson(args: readonly string[]): boolean {
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i] ?? '';
+    if (a === '--json' || a === '--json=true' || a === '--format=json') return true;
+    if (a === '--format' && args[i + 1] === 'json') return true;
+  }
+  return false;
+}
+
+/**
+ * With --json a failure also prints one JSON document on stdout, so a script that
+ * reads stdout always gets JSON: {error: {message, option, exitCode}, cautions}.
+ */
+function jsonError(message: string, option: string | undefined, exitCode: number): string {
+  return `${JSON.stringify({error: {message, option: option ?? null, exitCode}, cautions: CAUTION_LINES}, null, 2)}\n`;
+}
+
+function reportError(e: unknown, io: CliIo, json = false): number {
   if (e instanceof UsageError) {
     io.err(`tapwright: ${e.message}\n`);
+    if (json) io.out(jsonError(e.message, e.option, EXIT.usage));
     return EXIT.usage;
   }
   const msg = e instanceof Error ? e.message : String(e);
+  if (json) io.out(jsonError(`internal error: ${msg}`, undefined, EXIT.internal));
   io.err(`tapwright: internal error: ${msg}\nPlease report this with the command you ran.\n`);
   if (io.env.TAPWRIGHT_DEBUG && e instanceof Error && e.stack) io.err(`${e.stack}\n`);
   return EXIT.internal;
@@ -86,6 +108,6 @@ export async function runCli(
     }
     return await command.run(rest, io);
   } catch (e) {
-    return reportError(e, io);
+    return reportError(e, io, wantsJson(argv.slice(1)));
   }
 }

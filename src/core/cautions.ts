@@ -28,3 +28,24 @@ export function cautionText(width = 80): string {
   }
   return out.join('\n');
 }
+
+/**
+ * The caution in one line of at most `width` characters: the longest wording that
+ * fits. From about 76 columns up it names lifting equipment, pressure boundaries,
+ * safety-critical joints and the qualified person's sign-off; below that, the
+ * shortest wording. Longest first.
+ */
+export const CAUTION_ONE_LINE: readonly string[] = [
+  'Estimates only. Follow the equipment maker, local codes and licensed engineering practice. Lifting equipment, pressure boundaries and safety-critical joints need a qualified person\'s sign-off.',
+  'Estimates only; follow the maker, local codes and licensed practice. Lifting, pressure and safety-critical joints need a qualified person\'s sign-off.',
+  'Estimates only; follow maker, codes, licensed practice. Lifting, pressure, critical joints: qualified sign-off.',
+  'Estimates only. Lifting, pressure, critical joints need a qualified sign-off.',
+  'Estimates only; qualified sign-off for lifting, pressure, critical.',
+  'Estimates only; qualified sign-off for critical joints.',
+  'Estimates only.',
+];
+
+export function cautionLine(width: number): string {
+  for (const line of CAUTION_ONE_LINE) if (line.length <= width) return line;
+  return (CAUTION_ONE_LINE.at(-1) ?? '').slice(0, Math.max(0, width));
+}

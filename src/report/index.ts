@@ -7,3 +7,6 @@ export {formatCheckMarkdown, isoDate, type MarkdownMeta, type WorkOrderNotes} fr
 export {verdict, levelWord} from './sections.js';
 export {planText, lengthText} from './repair-text.js';
 export {planMarkdown, planSectionLines, type RepairReportMeta} from './repair-markdown.js';
+export {screwText, screwRows} from './screw-text.js';
+export {screwMarkdown} from './screw-markdown.js';
+export {reportFacts, workOrderFields, signOff, type WorkOrderMeta} from './work-order.js';

@@ -8,15 +8,11 @@ import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
-import {VERSION} from '../version.js';
-import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
+import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type HoleFacts} from './sections.js';
+import {isoDate, reportFacts, signOff, workOrderFields, type WorkOrderNotes} from './work-order.js';
+import type {Duty} from '../core/duty.js';
 
-export interface WorkOrderNotes {
-  asset?: string;
-  location?: string;
-  workOrder?: string;
-  text?: string;
-}
+export type {WorkOrderNotes};
 
 export interface MarkdownMeta {
   presetName?: string;
@@ -25,6 +21,10 @@ export interface MarkdownMeta {
   units: UnitSystem;
   /** Further sections (Markdown, starting with a "## " heading), placed before the cautions. */
   extraSections?: string[];
+  /** The hole as recorded for the repair planner (stripped or intact). */
+  hole?: HoleFacts;
+  /** Overrides the joint's duty (for reports of other things than a joint). */
+  duty?: Duty;
 }
 
 /** Make text safe inside a Markdown table cell. */
@@ -44,15 +44,7 @@ function table(head: string[], rows: string[][]): string[] {
   return [`| ${head.map(cell).join(' | ')} |`, `|${head.map(() => '---').join('|')}|`, ...rows.map(r => `| ${r.map(cell).join(' | ')} |`)];
 }
 
-/** ISO date (UTC) of a Date, e.g. 2026-01-01. */
-export function isoDate(d: Date): string {
-  return Number.isNaN(d.getTime()) ? 'date not recorded' : d.toISOString().slice(0, 10);
-}
-
-const UNIT_WORDS: Record<UnitSystem, string> = {
-  si: 'SI: mm, kN, N·m, MPa',
-  us: 'US customary: in, lbf, ft·lbf, ksi',
-};
+export {isoDate};
 
 /**
  * The Markdown work-order report of a checked joint. Input and result values are in
@@ -68,31 +60,11 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   out.push(`# Threaded joint check: ${cell(result.geometry.spec.designation)}`, '');
   const bolt = boltWords(result);
   out.push(`${bolt.charAt(0).toUpperCase()}${cell(bolt.slice(1))} in a ${cell(internalWords(result, input))}.`, '');
-  out.push(
-    ...table(
-      ['Report', ''],
-      [
-        ['Date', isoDate(meta.date)],
-        ['Preset', meta.presetName ?? '(none: entered by hand)'],
-        ['Units', UNIT_WORDS[meta.units]],
-        ['Computed by', `tapwright ${VERSION}`],
-      ],
-    ),
-    '',
-  );
+  const duty = meta.duty ?? input.duty;
+  out.push(...table(['Report', ''], reportFacts({...meta, duty}).map(r => [r.label, r.value])), '');
 
   out.push('## Work order', '');
-  out.push(
-    ...table(
-      ['Field', 'Entry'],
-      [
-        ['Asset', notes.asset ?? ''],
-        ['Location', notes.location ?? ''],
-        ['Work order', notes.workOrder ?? ''],
-      ],
-    ),
-    '',
-  );
+  out.push(...table(['Field', 'Entry'], workOrderFields(notes).map(r => [r.label, r.value])), '');
   if (notes.text && notes.text.trim() !== '') out.push(paragraph(notes.text.trim()), '');
 
   out.push('## Outcome', '');
@@ -102,7 +74,7 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   if (fails.length) out.push('');
 
   out.push('## Inputs', '');
-  out.push(...table(['Input', 'Value', 'Source or remark'], inputRows(result, input, f).map(r => [r.label, r.value, r.note ?? ''])), '');
+  out.push(...table(['Input', 'Value', 'Source or remark'], inputRows(result, input, f, meta.hole).map(r => [r.label, r.value, r.note ?? ''])), '');
 
   out.push('## Results', '');
   for (const g of resultGroups(result, input, f)) {
@@ -130,17 +102,15 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   for (const c of CAUTION_LINES) out.push(`> ${c}  `);
   out.push('');
 
-  out.push('## Sign-off', '');
-  out.push('A qualified person signs here before the joint returns to service where the cautions above apply.', '');
-  out.push(
-    ...table(
-      ['Role', 'Name', 'Signature', 'Date'],
-      [
-        ['Checked by', '', '', ''],
-        ['Approved by (qualified person)', '', '', ''],
-      ],
-    ),
-    '',
-  );
+  out.push(...signOffMarkdown(duty));
   return `${out.join('\n')}\n`;
+}
+
+/** The sign-off block in Markdown: the same words as the text report's (work-order.ts). */
+export function signOffMarkdown(duty: Duty | undefined): string[] {
+  const s = signOff(duty);
+  const out = ['## Sign-off', '', s.mandatory ? `**${s.lead}**` : s.lead, ''];
+  if (s.dutyNote) out.push(s.dutyNote, '');
+  out.push(...table(['Role', 'Name', 'Signature', 'Date'], s.roles.map(r => [r, '', '', ''])), '');
+  return out;
 }

@@ -9,6 +9,8 @@ import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
 import {cell, isoDate} from './markdown.js';
+import {optionDetail} from './repair-text.js';
+import {inchDrillLabel} from '../core/inch-drills.js';
 
 export interface RepairReportMeta {
   date: Date;
@@ -18,6 +20,12 @@ export interface RepairReportMeta {
 
 function q(v: number | null | undefined, dim: 'length' | 'torque', units: UnitSystem): string {
   return v === null || v === undefined || !Number.isFinite(v) ? '-' : formatQuantity(v, dim, units, {significant: 3});
+}
+
+/** A drill: mm in SI; in US the standard drill that matches (27/64, Q, #7) with the decimal. */
+function drillSize(v: number | null | undefined, units: UnitSystem): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '-';
+  return units === 'us' ? inchDrillLabel(v) : q(v, 'length', units);
 }
 
 function stress(v: number | undefined, units: UnitSystem): string {
@@ -75,7 +83,7 @@ export function planSectionLines(plan: RepairPlan, u: UnitSystem, opts: {level: 
   const chosen = opts.chosen !== undefined ? plan.options.find(o => o.rank === opts.chosen) : undefined;
   if (chosen) {
     const what = [
-      chosen.drill !== null && chosen.drill !== undefined ? `drill ${q(chosen.drill, 'length', u)}` : null,
+      chosen.drill !== null && chosen.drill !== undefined ? `drill ${drillSize(chosen.drill, u)}` : null,
       chosen.tapThread ? `tap ${chosen.tapThread}` : null,
       chosen.holeDepth !== null && chosen.holeDepth !== undefined ? `hole depth ${q(chosen.holeDepth, 'length', u)}` : null,
       chosen.torque !== null && chosen.torque !== undefined ? `tighten to ${q(chosen.torque, 'torque', u)}` : null,
@@ -90,12 +98,12 @@ export function planSectionLines(plan: RepairPlan, u: UnitSystem, opts: {level: 
   out.push('| # | Option | Effort | Can be done | Stripping margin | Bolt breaks first | Drill | Tap | Hole depth | Torque |');
   out.push('|---|---|---|---|---|---|---|---|---|---|');
   for (const o of plan.options) {
-    out.push(`| ${o.rank} | ${cell(o.label)} | E${o.effort.grade} ${cell(o.effort.name)} | ${state(o)} | ${ratio(o.margin.stripping)} | ${ratio(o.margin.boltBreaksFirst)} | ${q(o.drill, 'length', u)} | ${cell(o.tapThread ?? '-')} | ${q(o.holeDepth, 'length', u)} | ${q(o.torque, 'torque', u)} |`);
+    out.push(`| ${o.rank} | ${cell(o.label)} | E${o.effort.grade} ${cell(o.effort.name)} | ${state(o)} | ${ratio(o.margin.stripping)} | ${ratio(o.margin.boltBreaksFirst)} | ${drillSize(o.drill, u)} | ${cell(o.tapThread ?? '-')} | ${q(o.holeDepth, 'length', u)} | ${q(o.torque, 'torque', u)} |`);
   }
   out.push('', `${hd} Reasons and notes`, '');
   for (const o of plan.options) {
-    const parts = [o.reason, o.strength ? `governs: ${o.strength.governs}` : null, ...(o.feasible ? o.notes : [])].filter(Boolean);
-    if (parts.length) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(parts.join('; '))}`);
+    const text = optionDetail(o, u);
+    if (text) out.push(`- **${o.rank} ${cell(o.label)}**: ${cell(text)}`);
   }
   for (const n of plan.notes) out.push(`- ${cell(n)}`);
   out.push('', `${hd} Ranking`, '', cell(plan.rankingRule), '', ...EFFORT_SCALE_TEXT.split('\n').map(l => `- ${cell(l)}`));

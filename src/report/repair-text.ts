@@ -7,6 +7,7 @@ import {EFFORT_SCALE_TEXT} from '../core/repair/index.js';
 import {CAUTION_LINES} from '../core/cautions.js';
 import {displayUnit, toDisplay, type UnitSystem} from '../core/units.js';
 import {wrapText} from './wrap.js';
+import {inchDrillLabel, nearestInchDrill} from '../core/inch-drills.js';
 
 
 function fit(text: string, width: number): string {
@@ -34,8 +35,13 @@ function torque(nm: number | null, units: UnitSystem): string {
 
 function drill(mm: number | null, units: UnitSystem): string {
   if (mm === null) return '-';
+  // US: the drill a US shop has when one matches (27/64, Q, #7), else the decimal inch size.
+  if (units === 'us') {
+    const d = nearestInchDrill(mm);
+    return d.exact ? d.name : toDisplay(mm, 'length', 'us').toFixed(3).replace(/^0\./, '.');
+  }
   // One decimal at least, two when the size has them: 9.0, 8.5, 8.75 (a bare "9" read as a count).
-  return units === 'us' ? toDisplay(mm, 'length', 'us').toFixed(3) : mm.toFixed(2).replace(/(\.\d)0$/, '$1');
+  return mm.toFixed(2).replace(/(\.\d)0$/, '$1');
 }
 
 function status(o: RepairOption): string {
@@ -48,10 +54,16 @@ function row(cells: string[]): string {
   return [right(rank, 2), fit(option, 24), fit(ok, 5), right(strip, 5), right(brk, 5), right(dr, 5), fit(tap, 15), right(depth, 5), right(tq, 6)].join(' ').trimEnd();
 }
 
-function detail(o: RepairOption, units: UnitSystem): string {
+/**
+ * What to do for one option, in sentences: the reason, what governs, insert length and
+ * set-down, screw, screw length, tap and drill depths, notes. The text and the Markdown
+ * plan both use it, so they carry the same facts.
+ */
+export function optionDetail(o: RepairOption, units: UnitSystem): string {
   const L = displayUnit('length', units, true);
   const parts: string[] = [];
   if (o.reason) parts.push(o.reason + '.');
+  if (units === 'us' && o.drill !== null && o.drill !== undefined) parts.push(`Drill ${inchDrillLabel(o.drill)}.`);
   if (o.strength) parts.push(`Governs: ${o.strength.governs}.`);
   if (o.insert) {
     const sd = o.insert.setDown;
@@ -105,7 +117,7 @@ export function planText(plan: RepairPlan, units: UnitSystem, heading: string, o
   out.push(`depth: blind-hole depth with the drill point; torque: to use afterwards.`);
   out.push('');
   for (const o of plan.options) {
-    const text = detail(o, units);
+    const text = optionDetail(o, units);
     if (text) out.push(...wrapText(text, `${right(String(o.rank), 2)} ${o.label}: `, '     '));
   }
   if (plan.notes.length) {

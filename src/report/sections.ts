@@ -80,8 +80,15 @@ const BEARING_WORDS: Record<string, string> = {
   estimate: 'estimated from the size: no standard head data for it',
 };
 
+/** The hole as recorded for the repair planner; shown with the inputs of a check report. */
+export interface HoleFacts {
+  state: 'intact' | 'stripped';
+  /** mm; null or absent when not given. */
+  strippedDepth?: number | null;
+}
+
 /** The input table: what was typed or defaulted, with the source of each material value. */
-export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[] {
+export function inputRows(result: CheckResult, input: JointInput, f: Fmt, hole?: HoleFacts): Row[] {
   const g = result.geometry;
   const bolt = result.materials.bolt;
   const internal = result.materials.internal;
@@ -114,6 +121,17 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
       input.holeDepth !== undefined
         ? {label: 'Hole', value: `blind, ${q(input.holeDepth, 'length', f)} deep`}
         : {label: 'Hole', value: 'depth not given: no blind-hole check'},
+    );
+  }
+  if (hole && input.internal === 'tapped') {
+    rows.push(
+      hole.state === 'stripped'
+        ? {
+            label: 'Hole state',
+            value: hole.strippedDepth !== undefined && hole.strippedDepth !== null ? `stripped to ${q(hole.strippedDepth, 'length', f)} from the face` : 'stripped (depth not given)',
+            note: 'the results above are for a sound thread; see the repair plan',
+          }
+        : {label: 'Hole state', value: 'intact'},
     );
   }
   rows.push(tighteningRow(input, f));

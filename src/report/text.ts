@@ -10,6 +10,8 @@ import {CAUTION_LINES} from '../core/cautions.js';
 import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
 
 import {TEXT_WIDTH, wrapText} from './wrap.js';
+import {signOffTextLines, workOrderTextLines, type WorkOrderMeta} from './work-order.js';
+import type {HoleFacts} from './sections.js';
 
 export {TEXT_WIDTH, wrapText};
 const LABEL = 36;
@@ -64,8 +66,20 @@ export function toAscii(text: string): string {
  * The text report of a checked joint, in the display units of `opts.units`.
  * Input and result values are in working units (mm, N, N·m, MPa).
  */
-/** `extraSections`: further plain-text blocks (e.g. the repair plan), placed before the cautions. */
-export function formatCheckText(result: CheckResult, input: JointInput, opts: {units: UnitSystem; ascii?: boolean; extraSections?: string[]}): string {
+/**
+ * `extraSections`: further plain-text blocks (e.g. the repair plan), placed before the cautions.
+ * The work-order facts (date, preset, asset, location, work order, duty) and the sign-off
+ * block are the same as in the Markdown report (work-order.ts).
+ */
+export interface TextReportOptions extends Partial<Omit<WorkOrderMeta, 'units'>> {
+  units: UnitSystem;
+  ascii?: boolean;
+  extraSections?: string[];
+  /** The hole as recorded for the repair planner (stripped or intact). */
+  hole?: HoleFacts;
+}
+
+export function formatCheckText(result: CheckResult, input: JointInput, opts: TextReportOptions): string {
   const f: Fmt = {units: opts.units, ascii: opts.ascii ?? false};
   // Convert to ASCII before wrapping, so a symbol that grows ("²" -> "^2") cannot push a line past 80.
   const wrap: Wrap = (text, first, rest) => wrapText(f.ascii ? toAscii(text) : text, first, rest);
@@ -78,8 +92,10 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
   out.push(...wrap(`${v.word}: ${v.text}`, 'RESULT ', '       '));
   out.push(heavy);
 
+  out.push('', ...workOrderTextLines({...opts, duty: opts.duty ?? input.duty}, wrap, LABEL));
+
   out.push('', 'INPUTS');
-  for (const r of inputRows(result, input, f)) out.push(...rowLines(r, wrap));
+  for (const r of inputRows(result, input, f, opts.hole)) out.push(...rowLines(r, wrap));
 
   for (const g of resultGroups(result, input, f)) {
     out.push('', ...wrap(headingCase(g.title), '', ''));
@@ -110,6 +126,7 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
 
   out.push('', light);
   for (const c of CAUTION_LINES) out.push(...wrap(c, '', '  '));
+  out.push('', ...signOffTextLines(opts.duty ?? input.duty, wrap));
 
   const text = `${out.join('\n')}\n`;
   return f.ascii ? toAscii(text) : text; // labels and rules are ASCII already; this is a safety net

@@ -22,6 +22,7 @@ import {DEFAULT_PRESET} from '../store/shipped.js';
 import {clearDraft, loadDraft, saveDraft} from '../store/draft.js';
 import {openPresetStore, type Preset, type PresetStore} from '../store/presets.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
+import {sizeRangeWords} from '../core/inch-drills.js';
 import type {FormValues, PickSource} from './state/fields.js';
 
 export function presetValues(p: Preset): FormValues {
@@ -31,8 +32,12 @@ export function presetValues(p: Preset): FormValues {
   return v;
 }
 
-const sizeText = (r: {sizeMinMm?: number; sizeMaxMm?: number}) =>
-  r.sizeMinMm === undefined && r.sizeMaxMm === undefined ? '' : `d ${r.sizeMinMm !== undefined ? `> ${r.sizeMinMm} ` : ''}${r.sizeMaxMm !== undefined ? `<= ${r.sizeMaxMm} ` : ''}mm: `;
+
+/** "1/4 in < d <= 3/4 in: " or "" (the size range of a grade or class row, in the display units). */
+const sizeText = (r: {sizeMinMm?: number; sizeMaxMm?: number}, units: UnitSystem): string => {
+  const w = sizeRangeWords(r, units);
+  return w === '' ? '' : `${w}: `;
+};
 
 function picks(source: PickSource, units: UnitSystem): PickItem[] {
   const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
@@ -60,8 +65,8 @@ function picks(source: PickSource, units: UnitSystem): PickItem[] {
       {id: `${p.id}:starting`, name: `${p.combination}, starting`, detail: `fc ${p.starting.toFixed(2)}`, provenance: COLLAR_FRICTION_SOURCE, value: p.starting},
     ]);
   }
-  if (source === 'boltGrade') return group(listBoltGrades(), g => `${sizeText(g)}Rm ${s(g.rmMin)}, Rp0.2 ${s(g.rpMin)}`);
-  if (source === 'nutClass') return group(listNutClasses(), n => `${sizeText(n)}Rm ${s(n.rm)}`);
+  if (source === 'boltGrade') return group(listBoltGrades(), g => `${sizeText(g, units)}Rm ${s(g.rmMin)}, Rp0.2 ${s(g.rpMin)}`);
+  if (source === 'nutClass') return group(listNutClasses(), n => `${sizeText(n, units)}Rm ${s(n.rm)}`);
   return group(listParentMaterials(), m => `Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}`);
 }
 

@@ -23,7 +23,7 @@ import {
 import type {Range} from '../../core/types.js';
 import type {UnitSystem} from '../../core/units.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
-import {screwText} from './screw-text.js';
+import {screwText} from '../../report/screw-text.js';
 import {wrapText} from '../../report/wrap.js';
 
 const OPTION_FIELD: Record<string, string> = {

@@ -15,6 +15,7 @@ import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPe
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
 import type {Flag} from '../types.js';
 import type {UnitSystem} from '../units.js';
+import {applyDuty} from '../duty.js';
 
 export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputDraft} from './input.js';
 export type {CheckResult} from './result.js';
@@ -164,7 +165,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     notes: [...r.notes, ...g.notes],
     sources: [...SOURCES],
   };
-  result.flags = jointFlags(flagContext(result, input, 'si'));
+  result.flags = applyDuty(jointFlags(flagContext(result, input, 'si')), input.duty);
   return result;
 }
 
@@ -220,5 +221,5 @@ export function notesInUnits(result: CheckResult, input: JointInput, units: Unit
  */
 export function flagsInUnits(result: CheckResult, input: JointInput, units: UnitSystem): Flag[] {
   if (units === 'si' || result.stripping.alexander.outOfRange === undefined) return result.flags;
-  return jointFlags(flagContext(result, input, units));
+  return applyDuty(jointFlags(flagContext(result, input, units)), input.duty);
 }

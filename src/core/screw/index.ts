@@ -17,6 +17,7 @@ import {allowablePressure, bearingPressure, stripping} from './nut.js';
 import {buckling, END_CONDITION_SOURCE} from './buckling.js';
 import {nutMaterial, nutMaterialIds, screwMaterial, screwMaterialIds} from './materials.js';
 import {screwFlags, SHARE_THREADS} from './flags.js';
+import {applyDuty} from '../duty.js';
 
 export type {ScrewInput, ScrewInputDraft} from './input.js';
 export {ScrewInputSchema, ScrewFrictionSchema, END_CONDITION_IDS} from './input.js';
@@ -138,7 +139,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     collarIncomplete: (input.muCollar > 0) !== (input.collarDiameter > 0),
     pitchListed: g.spec.isStandardPitch || g.spec.family === 'square',
   });
-  return {...partial, flags};
+  return {...partial, flags: applyDuty(flags, input.duty)};
 }
 
 /** checkScrew that returns a message instead of throwing, for the workbench. */

@@ -3,6 +3,7 @@
  * Owned by the power-screw work; the preset store embeds this schema.
  */
 import * as z from 'zod';
+import {DUTY_IDS} from '../duty.js';
 
 /** Thread friction: one value, or a min..max range (raise torque at max, lowering and self-locking at min). */
 export const ScrewFrictionSchema = z.union([
@@ -47,6 +48,8 @@ export const ScrewInputSchema = z.object({
   speed: z.number().min(0).max(10).optional(),
   /** Allowable nut bearing pressure, MPa; overrides the table. */
   allowablePressure: z.number().min(0.1).max(500).optional(),
+  /** What the screw is for: general, or lifting / pressure / safety-critical (stricter flags, sign-off required). */
+  duty: z.enum(DUTY_IDS).default('general'),
 });
 
 export type ScrewInput = z.output<typeof ScrewInputSchema>;
