@@ -66,8 +66,8 @@ export interface TighteningWindow {
   upperLimit: WindowLimitName;
   /** Preload per N·m of torque: at the lowest friction (max) and the highest (min), N/(N·m). */
   slope: {max: number; min: number};
-  /** Preload spread a/b at one torque (the effective tightening factor alphaA), and the spread the limits allow. */
-  spread: {present: number; allowed: number};
+  /** Preload spread a/b at one torque (the effective tightening factor alphaA), and the spread the limits allow (absent when unlimited). */
+  spread: {present: number; allowed?: number};
   /** The torque of the checked result, N·m, and whether it lies in the band. */
   present: {torque: number; inside: boolean};
   /** What opens or widens the window, in shop language. */
@@ -108,11 +108,13 @@ export function tighteningWindow(input: JointInput, result: CheckResult, opts: W
   const yieldTorque = u > 0 ? input.utilisation / u : Infinity;
   const yieldPreload = a * yieldTorque;
 
-  const upper = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'upper', preload, torque: Math.max(0, preload / a), source: SOURCES[name]});
-  const lower = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'lower', preload, torque: Math.max(0, preload / b), source: SOURCES[name]});
+  // JSON carries no NaN or Infinity: a torque that cannot be reached is shown as 0 (and the window is empty).
+  const finite = (x: number): number => (Number.isFinite(x) ? Math.max(0, x) : 0);
+  const upper = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'upper', preload, torque: finite(preload / a), source: SOURCES[name]});
+  const lower = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'lower', preload, torque: finite(preload / b), source: SOURCES[name]});
 
   const limits: WindowLimit[] = [
-    {...upper('yield-utilisation', yieldPreload), torque: yieldTorque},
+    {...upper('yield-utilisation', Number.isFinite(yieldPreload) ? yieldPreload : 0), torque: finite(yieldTorque)},
     upper('stripping', weakerForce / input.requiredMargin - input.serviceLoad),
     upper('bolt-break', st.boltBreakForce - input.serviceLoad),
   ];
@@ -136,7 +138,7 @@ export function tighteningWindow(input: JointInput, result: CheckResult, opts: W
   const valid = Number.isFinite(a) && Number.isFinite(b) && a > 0 && b > 0;
   const empty = !valid || !(hi.torque > lo.torque) || hi.preload <= 0;
   const presentTorque = T0;
-  const spreadPresent = valid ? a / b : NaN;
+  const spreadPresent = valid ? a / b : 0;
   const spreadAllowed = lo.preload > 0 ? hi.preload / lo.preload : Infinity;
 
   const out: TighteningWindow = {
@@ -145,7 +147,7 @@ export function tighteningWindow(input: JointInput, result: CheckResult, opts: W
     lowerLimit: lo.name,
     upperLimit: hi.name,
     slope: {max: a, min: b},
-    spread: {present: spreadPresent, allowed: spreadAllowed},
+    spread: {present: spreadPresent, ...(Number.isFinite(spreadAllowed) ? {allowed: spreadAllowed} : {})},
     present: {torque: presentTorque, inside: !empty && presentTorque >= lo.torque && presentTorque <= hi.torque},
     suggestions: suggestions(hi.name, lo.name, empty, spreadPresent, spreadAllowed, input),
     notes,

@@ -136,3 +136,16 @@ describe('tighteningWindow', () => {
     expect(b.torque!.max).toBeCloseTo(a.torque!.max, 6);
   });
 });
+
+describe('tighteningWindow JSON', () => {
+  it('no NaN or Infinity in the JSON, with or without a band (property)', () => {
+    fc.assert(
+      fc.property(joint, fc.option(fc.double({min: 0, max: 1e6, noNaN: true}), {nil: undefined}), ({input}, leastClamp) => {
+        const w = tighteningWindow(input, checkJoint(input), leastClamp !== undefined ? {leastClamp, prevailingTorque: 3} : {});
+        const text = JSON.stringify(w);
+        expect(text).not.toMatch(/NaN|Infinity|null/);
+      }),
+      {numRuns: 40},
+    );
+  });
+});
