@@ -4,6 +4,7 @@
  * for the CLI options, the workbench fields and the preset store.
  */
 import * as z from 'zod';
+import {MeasuredThreadSchema} from './measured-input.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -86,6 +87,8 @@ export const JointInputSchema = z.object({
   scatter: z.number().min(1).max(4).default(1),
   /** Required stripping margin on bolt break (1.0 = the bolt must break first). */
   requiredMargin: z.number().min(0.5).max(5).default(1),
+  /** What was measured on the bolt and the hole (mm); stripping uses these where given (src/core/joint/measured.ts). */
+  measured: MeasuredThreadSchema.optional(),
 });
 
 export type JointInput = z.output<typeof JointInputSchema>;
