@@ -5,8 +5,9 @@
  * trapezoidal), pitch P, wire diameter W, measurement over the wires M:
  *   E_simple = M - W (1 + csc a) + (P/2) cot a
  * (for 60 deg: E = M - 3W + 0.86603P; Machinery's Handbook 31st ed., "Measuring Screw
- * Threads", pp. 2126-2130, constants 0.866025P on p. 2129; F. D. Jones, Turning and Boring,
- * Industrial Press, for the U.S. standard thread m = d - 1.5155p + 3w).
+ * Threads", constants 0.866025P on p. 2129, dimensions over wires on p. 2130; F. D. Jones,
+ * Turning and Boring, Industrial Press, for the U.S. standard thread m = d - 1.5155p + 3w).
+ * The general form with csc a and cot a reproduces those constants and the Acme ones (p. 2135).
  * Best wire, touching the flanks on the pitch line: W = P / (2 cos a) (0.57735P for 60 deg,
  * 0.51645P for Acme: Machinery's Handbook 31st ed., p. 2135).
  * Lead angle lambda, tan lambda = L / (pi E): the wire rests higher in the groove of a helix
