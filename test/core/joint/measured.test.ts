@@ -123,3 +123,22 @@ describe('limitPosition', () => {
     expect(limitPosition(9.0, 8.862, 8.994, 'bolt')).toMatchObject({side: 'above-max', worn: false});
   });
 });
+
+describe('the measured key of the joint schema: bad input names the path', () => {
+  const bad: Array<[object, string]> = [
+    [{holeMinorDiameter: -1}, 'measured.holeMinorDiameter'],
+    [{boltMajorDiameter: 0}, 'measured.boltMajorDiameter'],
+    [{boltPitchDiameter: 3000}, 'measured.boltPitchDiameter'],
+    [{holePitchDiameter: Number.NaN}, 'measured.holePitchDiameter'],
+    [{overWires: {measurement: 10, wire: 0}}, 'measured.overWires.wire'],
+    [{overWires: {wire: 0.866}}, 'measured.overWires.measurement'],
+    [{gauges: {holeNoGo: 'maybe'}}, 'measured.gauges.holeNoGo'],
+  ];
+  for (const [m, path] of bad) {
+    it(`${JSON.stringify(m)} -> ${path}`, () => {
+      const p = JointInputSchema.safeParse({...HOLE, measured: m});
+      expect(p.success).toBe(false);
+      if (!p.success) expect(p.error.issues.map(i => i.path.join('.'))).toContain(path);
+    });
+  }
+});
