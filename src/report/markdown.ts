@@ -8,6 +8,7 @@ import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {UnitSystem} from '../core/units.js';
 import {CAUTION_LINES} from '../core/cautions.js';
+import {measurementsMarkdown} from './measurements.js';
 import {VERSION} from '../version.js';
 import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt} from './sections.js';
 
@@ -123,6 +124,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   for (const s of sourceLines(result)) out.push(`- ${s}`);
   out.push('');
 
+  const measured = measurementsMarkdown(result.stripping, {units: meta.units});
+  if (measured.length > 0) out.push(...measured, '');
   for (const section of meta.extraSections ?? []) out.push(section.trimEnd(), '');
 
   out.push('## Cautions', '');

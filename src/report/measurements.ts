@@ -3,17 +3,21 @@
  * where it lies between the class limits, the gauge findings, and which diameters the
  * stripping areas used per thread. Pure: built from `CheckResult.stripping`; text lines fit
  * 80 columns (wrapText), Markdown as a table. Values arrive in mm and are shown in `units`.
+ * Every word and unit here is ASCII, so the text needs no ASCII conversion.
  */
 import type {CheckResult} from '../core/joint/result.js';
 import type {MeasurementItem} from '../core/joint/measured-items.js';
 import type {UnitSystem} from '../core/units.js';
 import {wrapText} from './wrap.js';
-import {cell} from './markdown.js';
-import {toAscii} from './text.js';
 
 type Stripping = Pick<CheckResult['stripping'], 'limitsUsed' | 'asMeasured'>;
 
 const IN = 25.4;
+
+/** Text safe inside a Markdown table cell (the same rule as markdown.ts). */
+function cell(text: string): string {
+  return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\r?\n/g, ' ').trim();
+}
 
 function len(mm: number, units: UnitSystem): string {
   return units === 'us' ? `${(mm / IN).toFixed(4)} in` : `${mm.toFixed(3)} mm`;
@@ -51,14 +55,11 @@ export function limitsUsedLines(st: Stripping): string[] {
   ];
 }
 
-/**
- * The "As measured" block as 80-column text lines; empty when nothing was measured.
- * `ascii` replaces any non-ASCII character.
- */
-export function measurementsText(st: Stripping, opts: {units: UnitSystem; ascii?: boolean}): string[] {
+/** The "As measured" block as 80-column text lines (ASCII); empty when nothing was measured. */
+export function measurementsText(st: Stripping, opts: {units: UnitSystem}): string[] {
   const m = st.asMeasured;
   if (!m) return [];
-  const fix = (t: string) => (opts.ascii ? toAscii(t) : t);
+  const fix = (t: string) => t;
   const out: string[] = ['As measured'];
   for (const i of m.items) {
     out.push(...wrapText(fix(`${i.what}: ${valueWords(i, opts.units)}, ${i.instrument}`), '  ', '    '));

@@ -10,6 +10,7 @@ import {CAUTION_LINES} from '../core/cautions.js';
 import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type Row} from './sections.js';
 
 import {TEXT_WIDTH, wrapText} from './wrap.js';
+import {measurementsText} from './measurements.js';
 
 export {TEXT_WIDTH, wrapText};
 const LABEL = 36;
@@ -102,6 +103,9 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: {u
 
   out.push('', 'LIMITS USED');
   for (const l of limitsLines(result, f)) out.push(...wrap(l, '  - ', '    '));
+
+  const measured = measurementsText(result.stripping, f);
+  if (measured.length > 0) out.push('', 'AS MEASURED', ...measured.slice(1));
 
   out.push('', 'SOURCES');
   for (const s of sourceLines(result)) out.push(...wrap(s, '  - ', '    '));

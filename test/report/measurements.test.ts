@@ -28,7 +28,7 @@ describe('measurement list renderer (text and Markdown)', () => {
   });
 
   it('US units and ASCII', () => {
-    const text = measurementsText(result.stripping, {units: 'us', ascii: true}).join('\n');
+    const text = measurementsText(result.stripping, {units: 'us'}).join('\n');
     expect(text).toMatch(/hole minor diameter: 0\.3472 in/);
     expect(/^[\x20-\x7e\n]*$/.test(text)).toBe(true);
   });

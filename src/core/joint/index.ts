@@ -13,6 +13,7 @@ import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, 
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
 import {measuredStrippingLimits} from './measured.js';
+import {WIRE_METHOD_SOURCE} from '../threads/measure-wires.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
 import type {Flag} from '../types.js';
 import type {UnitSystem} from '../units.js';
@@ -161,7 +162,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     },
     flags: [],
     notes: [...r.notes, ...g.notes],
-    sources: [...SOURCES],
+    sources: input.measured?.overWires !== undefined ? [...SOURCES, WIRE_METHOD_SOURCE] : [...SOURCES],
   };
   result.flags = jointFlags(flagContext(result, input, 'si'));
   return result;

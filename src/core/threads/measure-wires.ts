@@ -23,6 +23,10 @@ import type {ThreadSpec} from '../types.js';
 
 const DEG = Math.PI / 180;
 
+/** The wire method's sources, for a result's source list. */
+export const WIRE_METHOD_SOURCE =
+  "Three-wire pitch diameter E = M - W(1 + csc a) + (P/2) cot a and best wire P/(2 cos a): Machinery's Handbook 31st ed., pp. 2129-2136; lead-angle term (W/2) tan^2(lambda) cos a cot a from memory of FED-STD-H28 / ASME B1.2";
+
 /** The thread profile facts the wire method needs, mm and degrees. */
 export interface WireProfile {
   /** Flank half-angle a, degrees. */
