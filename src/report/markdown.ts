@@ -11,6 +11,7 @@ import {CAUTION_LINES} from '../core/cautions.js';
 import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWord, limitsLines, resultGroups, sourceLines, verdict, type Fmt, type HoleFacts} from './sections.js';
 import {isoDate, reportFacts, signOff, workOrderFields, type WorkOrderNotes} from './work-order.js';
 import type {Duty} from '../core/duty.js';
+import {measurementsMarkdown} from './measurements.js';
 
 export type {WorkOrderNotes};
 
@@ -95,6 +96,8 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
   for (const s of sourceLines(result)) out.push(`- ${s}`);
   out.push('');
 
+  const measured = measurementsMarkdown(result.stripping, {units: meta.units});
+  if (measured.length > 0) out.push(...measured, '');
   for (const section of meta.extraSections ?? []) out.push(section.trimEnd(), '');
 
   out.push('## Cautions', '');

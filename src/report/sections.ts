@@ -4,6 +4,7 @@
  * Markdown reports both render these, so the two cannot say different things.
  * Values arrive in working units (mm, N, N·m, MPa) and are formatted here.
  */
+import {limitsUsedText} from '../core/joint/measured.js';
 import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {Flag, Range} from '../core/types.js';
@@ -198,7 +199,7 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
       ],
     },
     {
-      title: `Stripping (${st.limitsUsed === 'worst-case' ? 'least-material limits of size' : 'basic dimensions'})`,
+      title: `Stripping (${limitsUsedText(st.limitsUsed) === 'least-material limits' ? 'least-material limits of size' : limitsUsedText(st.limitsUsed)})`,
       rows: [
         {label: 'Full thread engaged', value: `${q(st.effectiveEngagement, 'length', f)} (${formatNumber(st.engagedThreads, 2)} threads)`},
         {label: 'Bolt thread strips at', value: q(st.external.force, 'force', f), note: `shear area ${area(st.external.shearArea, f)} x ${q(st.external.shearStrength, 'stress', f)}`},
@@ -254,9 +255,9 @@ export function limitsLines(result: CheckResult, f: Fmt): string[] {
   const l = st.limits;
   const g = result.geometry;
   return [
-    st.limitsUsed === 'worst-case'
+    limitsUsedText(st.limitsUsed) === 'least-material limits'
       ? `Shear areas at the least-material limits of size: internal minor diameter max ${q(l.knMax, 'length', f, 4)}, external pitch diameter min ${q(l.esMin, 'length', f, 4)}, external major diameter min ${q(l.dsMin, 'length', f, 4)}, internal pitch diameter max ${q(l.enMax, 'length', f, 4)}.`
-      : 'Shear areas at the basic dimensions of the thread profile.',
+      : `Shear areas at the measured diameters where given, else the least-material limits (bolt thread: ${st.limitsUsed.external}; internal thread: ${st.limitsUsed.internal}): internal minor diameter ${q(l.knMax, 'length', f, 4)}, external pitch diameter ${q(l.esMin, 'length', f, 4)}, external major diameter ${q(l.dsMin, 'length', f, 4)}, internal pitch diameter ${q(l.enMax, 'length', f, 4)}.`,
     // One side at a time: a pair may mix a table side and a formula side (each side's source under the sources).
     `Limits of size: ${limitsSummary(g)}.`,
     'Tightening limit: von Mises utilisation of the bolt minimum Rp0.2 during tightening (VDI 2230 Part 1).',

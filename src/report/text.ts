@@ -12,6 +12,7 @@ import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWo
 import {TEXT_WIDTH, wrapText} from './wrap.js';
 import {signOffTextLines, workOrderTextLines, type WorkOrderMeta} from './work-order.js';
 import type {HoleFacts} from './sections.js';
+import {measurementsText} from './measurements.js';
 
 export {TEXT_WIDTH, wrapText};
 const LABEL = 36;
@@ -118,6 +119,9 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: Te
 
   out.push('', 'LIMITS USED');
   for (const l of limitsLines(result, f)) out.push(...wrap(l, '  - ', '    '));
+
+  const measured = measurementsText(result.stripping, f);
+  if (measured.length > 0) out.push('', 'AS MEASURED', ...measured.slice(1));
 
   out.push('', 'SOURCES');
   for (const s of sourceLines(result)) out.push(...wrap(s, '  - ', '    '));

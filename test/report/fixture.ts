@@ -85,7 +85,7 @@ export function demoResult(overrides: Partial<CheckResult> = {}): CheckResult {
       requiredEngagement: {fedStd: 14.2, alexander: 15.1},
       effectiveEngagement: 11,
       engagedThreads: 7.33,
-      limitsUsed: 'worst-case',
+      limitsUsed: {external: 'least-material', internal: 'least-material'},
       limits: {knMax: 8.676, esMin: 8.862, dsMin: 9.732, enMax: 9.206},
       fedStd: {le: 7.45, j: 1.9},
       alexander: {rs: 0.62, c1: 1, c2: 0.897, c3: 1.02, externalForce: 58_000, internalForce: 31_000},

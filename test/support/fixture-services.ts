@@ -50,7 +50,7 @@ export function fixtureResult(input: JointInput): CheckResult {
       requiredEngagement: {fedStd: 11.6, alexander: 13.1},
       effectiveEngagement: e,
       engagedThreads: threads,
-      limitsUsed: 'worst-case',
+      limitsUsed: {external: 'least-material', internal: 'least-material'},
       limits: {knMax: 8.676, esMin: 9.732, dsMin: 9.732, enMax: 9.206},
       fedStd: {le: 11.6, j: 1.6},
       alexander: {rs: 1.6, c1: 1, c2: 1, c3: 1, externalForce: ext, internalForce: int},

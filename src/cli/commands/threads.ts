@@ -5,7 +5,8 @@
  */
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
-import {formatOption, parseOptions, unitsOption} from '../args.js';
+import {formatOption, parseOptions, str, unitsOption} from '../args.js';
+import {parseWireOptions, wireJson, wireLines, type WireMeasurement} from './threads-wires.js';
 import {toAscii} from '../../report/text.js';
 import {parseThread, threadGeometry, limitsSides, limitsSummary, ACCEPTED_FORMS} from '../../core/threads/index.js';
 import {CAUTION_SHORT} from '../../core/cautions.js';
@@ -19,6 +20,7 @@ const HELP = `tapwright threads - geometry and limits of size of a thread
 
 Usage:
   tapwright threads <designation> [--units si|us] [--format text|json] [--ascii]
+  tapwright threads <designation> --over-wires M --wire W [--json]
 
 Designations (case and spaces do not matter; "x" or "×"):
   ISO metric   M10  M10x1.25  M10x1.5-6g  M10x1.5-6H  M10x1.5-6H/6g  M8-5g6g
@@ -37,6 +39,10 @@ Options:
   --json       geometry and limits as JSON, always SI (mm, mm²); short for
                --format json
   --ascii      plain ASCII text (mm^2, um)
+  --over-wires M  three-wire reading: measurement over the wires (bare
+               number in mm, in with --units us; or give the unit: 0.2792in)
+  --wire W     diameter of the three wires (same units); must sit on the
+               flanks (about 0.51 to 1.01 x pitch for 60-degree threads)
   --help       this text
 
 Shows the basic profile (d, P, H, d2, d3, D1), the tensile stress area and
@@ -44,6 +50,11 @@ the minor-diameter area, and the limits of size of the external and internal
 thread for the tolerance classes, and for each side (internal, external)
 whether its limits are read from a table of the standard or computed from
 the formulas as a fallback, with the source.
+
+With --over-wires and --wire: the pitch diameter as measured (three-wire
+formula with the lead-angle correction), where it lies between the class
+limits (inside, or worn past the limit by how much) and the best wire size.
+JSON: measured.pitchDiameter, measured.bestWire (mm), measured.withinLimits.
 `;
 
 function len(mm: number | undefined, units: UnitSystem): string {
@@ -130,19 +141,21 @@ function powerText(s: ThreadSpec, units: UnitSystem): string[] {
   return out;
 }
 
-function jsonOf(spec: ThreadSpec, g: ThreadGeometry | undefined): unknown {
+function jsonOf(spec: ThreadSpec, g: ThreadGeometry | undefined, wires: WireMeasurement | undefined): unknown {
+  const measured = wires ? {measured: wireJson(wires)} : {};
   if (!g) {
     return {
       designation: spec.designation,
       spec,
       geometry: null,
       note: 'power-screw thread: geometry and mechanics come from tapwright screw',
+      ...measured,
       units: {length: 'mm'},
       caution: CAUTION_SHORT,
     };
   }
   const {spec: _s, ...geometry} = g;
-  return {designation: spec.designation, spec, geometry, units: {length: 'mm', area: 'mm²'}, caution: CAUTION_SHORT};
+  return {designation: spec.designation, spec, geometry, ...measured, units: {length: 'mm', area: 'mm²'}, caution: CAUTION_SHORT};
 }
 
 export const command: Command = {
@@ -155,6 +168,8 @@ export const command: Command = {
       format: {type: 'string'},
       ascii: {type: 'boolean'},
       units: {type: 'string'},
+      'over-wires': {type: 'string'},
+      wire: {type: 'string'},
     });
     const units: UnitSystem = unitsOption(values);
     const format = formatOption(values, ['text', 'json'] as const, 'text');
@@ -169,11 +184,13 @@ export const command: Command = {
     }
     const spec = parsed.value;
     const g = spec.family === 'metric' || spec.family === 'unified' ? threadGeometry(spec) : undefined;
+    const wires = parseWireOptions(str(values, 'over-wires'), str(values, 'wire'), spec, g, units);
     if (format === 'json') {
-      io.out(`${JSON.stringify(jsonOf(spec, g), null, 2)}\n`);
+      io.out(`${JSON.stringify(jsonOf(spec, g, wires), null, 2)}\n`);
       return EXIT.ok;
     }
     const lines = g ? geometryText(g, units) : powerText(spec, units);
+    if (wires) lines.push(...wireLines(wires, units));
     lines.push('', ...wrapText(CAUTION_SHORT, '', ''));
     const report = `${lines.join('\n')}\n`;
     io.out(values.ascii === true ? toAscii(report) : report);

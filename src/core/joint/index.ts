@@ -12,6 +12,8 @@ import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
+import {measuredStrippingLimits} from './measured.js';
+import {WIRE_METHOD_SOURCE} from '../threads/measure-wires.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
 import type {Flag} from '../types.js';
 import type {UnitSystem} from '../units.js';
@@ -97,14 +99,9 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const shank = shankStresses(boltLoad, threadTorqueNmm, g.stressArea, stressDiameter(section));
   const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare);
 
-  // Stripping at the least-material limits.
-  const limits: StrippingLimits = {
-    knMax: g.limits.internal.minorMax,
-    esMin: g.limits.external.pitchMin,
-    dsMin: g.limits.external.majorMin,
-    enMax: g.limits.internal.pitchMax,
-    pitch: P,
-  };
+  // Stripping at the measured diameters where given, the least-material limits elsewhere.
+  const asMeasured = measuredStrippingLimits(g, input.measured);
+  const limits: StrippingLimits = asMeasured.limits;
   const asS = externalShearAreaPerMm(limits) * le;
   const asN = internalShearAreaPerMm(limits) * le;
   const externalForce = r.bolt.shear * asS;
@@ -150,8 +147,11 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       requiredEngagedLength: {fedStd: fed.required + input.chamfer, alexander: alex.required + input.chamfer},
       effectiveEngagement: le,
       engagedThreads,
-      limitsUsed: 'worst-case',
+      limitsUsed: asMeasured.limitsUsed,
       limits: {knMax: limits.knMax, esMin: limits.esMin, dsMin: limits.dsMin, enMax: limits.enMax},
+      ...(input.measured !== undefined
+        ? {asMeasured: {items: asMeasured.items, notes: asMeasured.notes, upperBound: asMeasured.upperBound}}
+        : {}),
       fedStd: {le: fed.le, j: fed.j},
       alexander: {rs: alex.rs, c1: alex.c1, c2: alex.c2, c3: alex.c3, externalForce: alex.externalPerMm * le, internalForce: alex.internalPerMm * le, outOfRange: alex.outOfRange},
     },
@@ -163,7 +163,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     },
     flags: [],
     notes: [...r.notes, ...g.notes],
-    sources: [...SOURCES],
+    sources: input.measured?.overWires !== undefined ? [...SOURCES, WIRE_METHOD_SOURCE] : [...SOURCES],
   };
   result.flags = applyDuty(jointFlags(flagContext(result, input, 'si')), input.duty);
   return result;

@@ -5,6 +5,7 @@
  */
 import * as z from 'zod';
 import {DUTY_IDS} from '../duty.js';
+import {MeasuredThreadSchema} from './measured-input.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -89,6 +90,8 @@ export const JointInputSchema = z.object({
   requiredMargin: z.number().min(0.5).max(5).default(1),
   /** What the joint is for: general, or lifting / pressure / safety-critical (stricter flags, sign-off required). */
   duty: z.enum(DUTY_IDS).default('general'),
+  /** What was measured on the bolt and the hole (mm); stripping uses these where given (src/core/joint/measured.ts). */
+  measured: MeasuredThreadSchema.optional(),
 });
 
 export type JointInput = z.output<typeof JointInputSchema>;

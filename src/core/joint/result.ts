@@ -3,6 +3,8 @@
  * (keys may be added, never removed or renamed): SI working units throughout.
  */
 import type {Flag, Provenance, ThreadGeometry} from '../types.js';
+import type {LimitsUsedWord} from './measured.js';
+import type {MeasurementItem} from './measured-items.js';
 
 export interface PreloadRange {
   /** N */
@@ -95,9 +97,16 @@ export interface CheckResult {
     effectiveEngagement: number;
     /** Engaged full threads (effective engagement / pitch). */
     engagedThreads: number;
-    /** Which limits of size the areas were computed at. */
-    limitsUsed: 'worst-case' | 'basic';
-    /** The least-material limits the areas were computed at, mm. */
+    /**
+     * Per thread, what the shear-area diameters are: `measured` (every diameter of that thread's
+     * area measured), `least-material` (the limits of size of the class), `mixed` (some of each).
+     * The bolt (external) thread's area uses the hole minor and the bolt pitch diameter, the
+     * internal thread's the bolt major and the hole pitch diameter (FED-STD-H28/2B).
+     */
+    limitsUsed: {external: LimitsUsedWord; internal: LimitsUsedWord};
+    /** Present when measurements were given: each with its instrument, gauge findings, and where a NO-GO gauge makes a force an upper bound. */
+    asMeasured?: {items: MeasurementItem[]; notes: string[]; upperBound: {external: boolean; internal: boolean}};
+    /** The diameters the areas were computed at (measured or least-material limits), mm. */
     limits: {knMax: number; esMin: number; dsMin: number; enMax: number};
     /** FED-STD-H28/2B Formula 1 length Le (equal strengths) and the strength ratio J. */
     fedStd: {le: number; j: number};

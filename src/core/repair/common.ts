@@ -28,6 +28,8 @@ export interface PlanContext {
   stripped: boolean;
   /** Units the reasons and notes are written in (values stay mm); default SI. */
   units?: UnitSystem;
+  /** Measured minor diameter of the worn hole, mm (also when past the bolt major, thread gone). */
+  wornMinor?: number;
 }
 
 export type Checked = {ok: true; result: CheckResult} | {ok: false; error: string};
@@ -150,6 +152,7 @@ export function variant(ctx: PlanContext, changes: Partial<JointInput>): JointIn
 /** Joint variant for a different screw size: tightened by the utilisation rule. */
 export function newBoltVariant(ctx: PlanContext, changes: Partial<JointInput>): JointInput {
   return variant(ctx, {
+    measured: undefined,
     tightening: 'utilisation',
     torque: undefined,
     preload: undefined,

@@ -13,6 +13,7 @@ import type {CheckResult} from '../joint/result.js';
 import {applyResult, infeasible, len, judge, newBoltVariant, roundUpHalf, safeCheck, safeCheckThread, skeleton, variant, type Checked, type PlanContext} from './common.js';
 import {HELICAL_LENGTH_FACTORS, INSERT_WIRE, insertDepths, receivingThread, type ThreadBasics} from './helical.js';
 import {blindHoleDepths, tapDrill, wallProblem} from './holes.js';
+import {boltOnly, wornBoreCheck} from './measured-fit.js';
 import {DEMO_TABLE_WARNING, type SolidInsertEntry} from './solid-table.js';
 import type {RepairOption, StrengthPart} from './types.js';
 
@@ -62,6 +63,9 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     const o = skeleton(ctx, 'helical-insert', `helical insert ${k}D`);
     o.drill = rt.drill;
     o.tapThread = rt.tap;
+    const worn = wornBoreCheck(ctx.wornMinor, rt.drill, `the ${rt.tap} receiving thread`, ctx.units);
+    if (worn && !worn.fit) return infeasible(o, worn.text);
+    if (worn) o.notes.push(worn.text);
     o.changeSize = k * t.nominal;
     let depths = insertDepths(t, k, rt.drill, 'plug');
     o.insert = {
@@ -104,7 +108,7 @@ export function helicalOptions(ctx: PlanContext): RepairOption[] {
     if (!repair.through && o.drilledDepth !== null && ctx.reach > o.drilledDepth + 1e-9) {
       o.notes.push(`the present screw reaches ${len(ctx, ctx.reach)}, deeper than the ${len(ctx, o.drilledDepth)} drilled: fit a screw that stops short of the bottom`);
     }
-    const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: INSERT_WIRE.rm, parentShear: INSERT_WIRE.shear, engagement, chamfer: 0}));
+    const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: INSERT_WIRE.rm, parentShear: INSERT_WIRE.shear, engagement, chamfer: 0, measured: boltOnly(joint.measured)}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
     let outer: Checked = {ok: false, error: 'no receiving-thread designation accepted'};
     for (const designation of receivingDesignations(t, rt.major)) {
@@ -178,7 +182,7 @@ export function solidOptions(ctx: PlanContext): RepairOption[] {
       }
       if (ctx.reach > d.drilledDepth + 1e-9) o.notes.push(`the present screw reaches ${len(ctx, ctx.reach)}, deeper than the ${len(ctx, d.drilledDepth)} drilled: fit a screw that stops short of the bottom`);
     }
-    const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0}));
+    const inner = safeCheck(ctx, variant(ctx, {parent: undefined, parentRm: e.bodyRm, parentShear: e.bodyShear, engagement, chamfer: 0, measured: boltOnly(ctx.joint.measured)}));
     if (!inner.ok) return infeasible(o, `not computed (bolt in the insert): ${inner.error}`);
     combine(o, inner.result, outer.result, {insert: 'insert internal thread', parent: `parent at the ${e.external} thread`});
     o.notes.push(`${e.keys} keys lock the insert against turning; check the maker's key and torque data`);

@@ -3,6 +3,9 @@
  * wires the real core. Fast: a few dozen calls of the mechanics core.
  */
 import type {JointInput} from '../joint/input.js';
+import type {CheckResult} from '../joint/result.js';
+import {JointInputError} from '../joint/errors.js';
+import {withoutHole} from './measured-fit.js';
 import type {UnitSystem} from '../units.js';
 import {CAUTION_LINES} from '../cautions.js';
 import {infeasible, len, skeleton, type PlanContext} from './common.js';
@@ -18,8 +21,8 @@ import {longerEngagementOption, reuseOption} from './same-thread.js';
 import {REPAIR_KINDS, type RepairOption, type RepairPlan} from './types.js';
 
 /** Build the per-call context. Throws only when the joint itself is rejected by the mechanics core. */
-export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairInput, units: UnitSystem = 'si'): PlanContext {
-  const base = deps.check(joint);
+export function planContext(deps: RepairDeps, given: JointInput, repair: RepairInput, units: UnitSystem = 'si'): PlanContext {
+  const {joint, base, wornMinor} = asMeasuredBase(deps, given, repair);
   const spec = base.geometry.spec;
   const thread: ThreadBasics = {family: spec.family, nominal: base.geometry.nominal, pitch: base.geometry.pitch, tpi: spec.tpi, sizeLabel: spec.sizeLabel, series: spec.series};
   const stripped = repair.holeState === 'stripped';
@@ -32,7 +35,25 @@ export function planContext(deps: RepairDeps, joint: JointInput, repair: RepairI
     plain: plainDesignation(thread),
     required: repair.margin ?? joint.requiredMargin,
     reach, goodStart, stripped, units,
+    ...(wornMinor !== undefined ? {wornMinor} : {}),
   };
+}
+
+/**
+ * The joint as checked: with its measurements; but a stripped hole whose measured minor or
+ * pitch diameter leaves no thread (refused by the check) is checked without the hole's
+ * measurements, keeping the measured minor for the drill clean-up test (measured-fit.ts).
+ */
+function asMeasuredBase(deps: RepairDeps, joint: JointInput, repair: RepairInput): {joint: JointInput; base: CheckResult; wornMinor?: number} {
+  const wornMinor = joint.measured?.holeMinorDiameter;
+  try {
+    return {joint, base: deps.check(joint), ...(wornMinor !== undefined ? {wornMinor} : {})};
+  } catch (e) {
+    const holeField = e instanceof JointInputError && (e.field === 'measured.holeMinorDiameter' || e.field === 'measured.holePitchDiameter');
+    if (!holeField || repair.holeState !== 'stripped') throw e;
+    const dropped: JointInput = {...joint, measured: withoutHole(joint.measured)};
+    return {joint: dropped, base: deps.check(dropped), ...(wornMinor !== undefined ? {wornMinor} : {})};
+  }
 }
 
 /**
@@ -59,6 +80,7 @@ export function planRepairsWith(deps: RepairDeps, joint: JointInput, repair: Rep
     ];
   }
   const notes: string[] = [];
+  if (ctx.joint !== joint) notes.push('the measured hole diameters leave no thread in the stripped zone: the as-is figures use the bolt measurements only; the measured minor diameter decides which tap drills clean up the bore');
   if (ctx.stripped) notes.push(`stripped from the surface to ${len(ctx, Math.min(repair.strippedDepth ?? ctx.reach, ctx.reach))}; good thread assumed below ${len(ctx, ctx.goodStart, 1)}`);
   if (repair.depthAvailable === undefined) notes.push(repair.through ? 'part thickness not given: depths are not checked' : 'depth available not given: hole depths are not checked');
   if (deps.solidTable.provenance.kind === 'demo') notes.push(`solid insert sizes: ${DEMO_TABLE_WARNING}`);

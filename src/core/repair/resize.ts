@@ -6,6 +6,7 @@
 import {applyResult, infeasible, len, judge, newBoltVariant, safeCheck, skeleton, type PlanContext} from './common.js';
 import type {SeriesThread} from './context.js';
 import {blindHoleDepths, clearanceHole, tapDrill, wallProblem} from './holes.js';
+import {boltOnly, wornBoreCheck} from './measured-fit.js';
 import type {ThreadBasics} from './helical.js';
 import type {RepairOption} from './types.js';
 
@@ -46,6 +47,9 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
     const g = r.result.geometry;
     const basics: ThreadBasics = {family: g.spec.family, nominal: g.nominal, pitch: g.pitch, tpi: g.spec.tpi, sizeLabel: g.spec.sizeLabel, series: g.spec.series};
     o.drill = tapDrill(basics, {min: g.limits.internal.minorMin, max: g.limits.internal.minorMax});
+    const worn = wornBoreCheck(ctx.wornMinor, o.drill, `the ${c.designation}`, ctx.units);
+    if (worn && !worn.fit) return infeasible(o, worn.text);
+    if (worn) o.notes.push(worn.text);
     applyResult(o, r.result);
     o.margin = {stripping: r.result.margin.stripping, boltBreaksFirst: r.result.margin.boltBreaksFirst};
     o.notes.push(`fit a ${c.designation} screw and open the clamped part's hole to suit; tightened by the utilisation rule (${joint.utilisation} of yield)`);
@@ -82,7 +86,7 @@ export function throughBoltOption(ctx: PlanContext): RepairOption {
   if (wall) return infeasible(o, wall);
   const r = safeCheck(ctx, {
     ...joint,
-    internal: 'nut', parent: undefined, parentRm: undefined, parentShear: undefined,
+    internal: 'nut', parent: undefined, parentRm: undefined, parentShear: undefined, measured: boltOnly(joint.measured),
     nutClass, nutHeight: m, nutFlats: s, engagement: m, chamfer: 0, holeDepth: undefined,
   });
   if (!r.ok) return infeasible(o, `not computed: ${r.error}`);

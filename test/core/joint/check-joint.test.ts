@@ -27,7 +27,7 @@ describe('checkJoint', () => {
 
   it('uses the least-material limits of the classes and says so (FED-STD-H28/2B)', () => {
     const r = run(M10_NUT);
-    expect(r.stripping.limitsUsed).toBe('worst-case');
+    expect(r.stripping.limitsUsed).toEqual({external: 'least-material', internal: 'least-material'});
     expect(r.stripping.limits.knMax).toBe(r.geometry.limits.internal.minorMax);
     expect(r.stripping.limits.dsMin).toBe(r.geometry.limits.external.majorMin);
   });
