@@ -148,7 +148,20 @@ export async function runOne(args: string[]): Promise<FuzzOutcome> {
   if (code === 2) {
     const named = /--[a-z][a-z-]*/.exec(err)?.[0];
     if (!named || !CHECK_OPTIONS.includes(named)) return {code, problem: `rejection names no option: ${err.trim()}`};
-    if (out !== '') return {code, problem: 'rejected but printed a result'};
+    // With JSON output a rejection prints one JSON error document (issue 14 item 7), never a result.
+    const jsonRequested = args.includes('--json') || (args.includes('--format') && args[args.indexOf('--format') + 1] === 'json');
+    if (out !== '') {
+      if (!jsonRequested) return {code, problem: 'rejected but printed a result'};
+      let doc: {error?: {option?: string}; flags?: unknown};
+      try {
+        doc = JSON.parse(out) as typeof doc;
+      } catch {
+        return {code, problem: 'rejected with JSON requested, but stdout is not JSON'};
+      }
+      if (!doc.error || doc.flags !== undefined) return {code, problem: 'rejected but printed a result'};
+      const option = doc.error.option ?? '';
+      if (!option.startsWith('--') || !err.includes(option)) return {code, problem: `JSON error names ${option}, not an option of the message`};
+    }
     return {code};
   }
   if (code !== 0 && code !== 3) return {code, problem: `exit ${code}: ${err.trim()}`};
