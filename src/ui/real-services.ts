@@ -28,6 +28,7 @@ export function presetValues(p: Preset): FormValues {
   const v = {joint: structuredClone(p.joint ?? {thread: 'M10', engagement: 10}), hole: structuredClone(p.repair ?? {})} as FormValues;
   if (p.screw) v.screw = structuredClone(p.screw);
   v.notes = structuredClone(p.notes ?? {});
+  if (p.chosenRepair) (v as FormValues & {chosenRepair?: unknown}).chosenRepair = structuredClone(p.chosenRepair);
   return v;
 }
 
@@ -146,6 +147,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
             ...(values.screw ? {screw: values.screw as ScrewInput} : {}),
             // The workbench's notes; a draft from before notes were edited has none: keep the stored ones.
             notes: values.notes ?? existing?.notes ?? before?.notes ?? {},
+            ...((values as {chosenRepair?: Preset['chosenRepair']}).chosenRepair ? {chosenRepair: (values as {chosenRepair?: Preset['chosenRepair']}).chosenRepair} : {}),
           },
           {overwrite, ...(before && overwrite ? {expectedRevision: before.revision} : {})},
         );
@@ -173,12 +175,12 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     report(format, result, input, meta) {
       const rep = meta.repairs;
       if (format === 'text') {
-        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})] : [];
+        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [rep.chosenNote] : [])] : [];
         return formatCheckText(result, input, {units: meta.units, extraSections: extra});
       }
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       const extra = rep
-        ? [['## Repair plan', '', ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
+        ? [['## Repair plan', '', ...(rep.chosenNote ? [`**${rep.chosenNote}**`, ''] : []), ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
         : [];
       return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: extra, ...(notes ? {notes} : {})});
     },

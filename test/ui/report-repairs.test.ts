@@ -8,7 +8,7 @@ import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {describe, expect, it, onTestFinished} from 'vitest';
 import {realServices} from '../../src/ui/real-services.js';
-import {reportText} from '../../src/ui/state/preset-commands.js';
+import {reportText} from '../../src/ui/screens/report/reducer.js';
 import {evaluate, evaluateRepairs} from '../../src/ui/state/evaluate.js';
 import {initialState, type WorkbenchState} from '../../src/ui/state/workbench.js';
 
@@ -19,14 +19,16 @@ function services() {
 }
 
 describe('report with the repair plan', () => {
-  it('the shipped demo (check fails) carries the ranked repairs and the marked one as chosen', () => {
+  it('the shipped demo (check fails) carries the ranked repairs and the chosen one as chosen', () => {
     const svc = services();
     const demo = svc.presets.load(svc.defaultPreset);
-    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: demo.readOnly, values: demo.values, units: 'si', ascii: true}), screen: 'report', repairIndex: 1};
+    const ev0 = evaluate(demo.values, svc, 'si', true);
+    const second = evaluateRepairs(demo.values, svc, ev0).plan!.options[1]!;
+    // The repair is chosen on the Repairs screen (c), kept by identity in the values.
+    const values = {...demo.values, chosenRepair: {kind: second.kind, label: second.label}};
+    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: demo.readOnly, values, units: 'si', ascii: true}), screen: 'report', repairIndex: 1};
     const ev = evaluate(s.values, svc, 'si', true);
     expect(ev.result?.flags.some(f => f.level === 'fail')).toBe(true);
-    const plan = evaluateRepairs(s.values, svc, ev).plan!;
-    const second = plan.options[1]!;
     const md = reportText(s, svc, ev).text ?? '';
     expect(md).toContain('## Repair plan');
     expect(md).toContain(`**Repair chosen:** ${second.rank} ${second.label}`);

@@ -1,8 +1,15 @@
-/** Editing commands: start, preview, keep or drop a typed or picked value; move between fields and steps. */
-import type {WorkbenchServices} from '../services.js';
-import {fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef} from './fields.js';
-import {editText, parseField} from './field-text.js';
-import {currentFields, fail, info, pickerItems, type Screen, type WorkbenchState} from './workbench.js';
+/**
+ * The joint screen's reducer (pure): start, preview, keep or drop a typed or
+ * picked value; move between fields and steps; switch joint / power screw;
+ * save (as an effect, keeping the preset's kind).
+ */
+import type {Flag} from '../../../core/types.js';
+import {holeStateFlags} from '../../../core/joint/hole-flags.js';
+import type {WorkbenchServices} from '../../services.js';
+import {FIELDS, fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef, type Mode, type StepId} from '../../state/fields.js';
+import {editText, parseField} from '../../state/field-text.js';
+import {withEffects, type Step} from '../../state/effects.js';
+import {currentFields, fail, info, pickerItems, shownValues, type Screen, type Values, type WorkbenchState} from '../../state/workbench.js';
 
 export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   if (!s.picker) return s;
@@ -22,12 +29,30 @@ export function withEditPreview(s: WorkbenchState): WorkbenchState {
   return {...s, preview: setValue(s.values, f.id, p.value), edit: {...s.edit, error: undefined}};
 }
 
+/**
+ * Values without what the hole step now hides (the stripped depth of a hole set
+ * back to intact), so no hidden value can stop the repair planner; with the
+ * labels of the fields cleared.
+ */
+export function withoutHidden(v: Values, step: StepId): {values: Values; cleared: string[]} {
+  let values = v;
+  const cleared: string[] = [];
+  for (const f of FIELDS) {
+    if (f.step !== step || !f.isVisible || f.isVisible(values) || getValue(values, f.id) === undefined) continue;
+    values = setValue(values, f.id, undefined);
+    cleared.push(f.label.toLowerCase());
+  }
+  return {values, cleared};
+}
+
 export function startEdit(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices, typed?: string): WorkbenchState {
   const value = getValue(s.values, f.id) ?? fieldBounds(f.id).default;
   if (f.kind === 'choice') {
     const choices = f.choices ?? [];
     const next = choices[(choices.indexOf(String(value ?? choices[0])) + 1) % choices.length];
-    return {...s, values: setValue(s.values, f.id, next), message: info(`${f.label}: ${next}`)};
+    const set = setValue(s.values, f.id, next);
+    const {values, cleared} = f.step === 'hole' ? withoutHidden(set, 'hole') : {values: set, cleared: []};
+    return {...s, values, message: info(`${f.label}: ${next}${cleared.length ? `; ${cleared.join(', ')} cleared` : ''}`)};
   }
   if (f.kind === 'bool') {
     return {...s, values: setValue(s.values, f.id, !value), message: info(`${f.label}: ${value ? 'no' : 'yes'}`)};
@@ -73,4 +98,58 @@ export function moveStep(s: WorkbenchState, delta: number): WorkbenchState {
 export function go(s: WorkbenchState, screen: Screen): WorkbenchState {
   if (s.screen === screen) return s;
   return {...s, screen, backTo: s.screen === 'help' ? s.backTo : s.screen, message: undefined};
+}
+
+/** Empty an optional field (its default applies). */
+export function clearField(s: WorkbenchState, f: FieldDef | undefined): WorkbenchState {
+  if (!f) return s;
+  if (!f.optional) return {...s, message: fail(`${f.label} cannot be empty; Enter to edit it`)};
+  return {...s, values: setValue(s.values, f.id, undefined), message: info(`${f.label}: emptied, the default applies`)};
+}
+
+/** Threaded joint <-> power screw (the preset keeps its kind until saved as another). */
+export function toggleMode(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
+  if (!svc.checkScrew) return {...s, message: fail('The power-screw mode is not in this build; use tapwright screw')};
+  const mode: Mode = s.mode === 'joint' ? 'screw' : 'joint';
+  const values = mode === 'screw' && !s.values.screw ? {...s.values, screw: {thread: 'Tr24x5', load: 10000, nutLength: 24}} : s.values;
+  return {
+    ...s,
+    mode,
+    values,
+    step: 0,
+    field: 0,
+    message: info(mode === 'screw' ? 'Power-screw mode: lead screw and nut (m: back to the joint)' : 'Joint mode: bolt or screw in a tapped hole or nut'),
+  };
+}
+
+const KIND_WORD: Record<Mode, string> = {joint: 'joint', screw: 'power-screw'};
+
+/** The save effect for the open values, under `name`, as the kind on screen. */
+export function saveEffect(s: WorkbenchState, name: string, overwrite: boolean, more: {prompt?: WorkbenchState['prompt']; thenLoad?: string} = {}): Step {
+  return withEffects(s, {type: 'savePreset', name, values: s.values, kind: s.mode, overwrite, ...(more.prompt ? {prompt: more.prompt} : {}), ...(more.thenLoad ? {thenLoad: more.thenLoad} : {})});
+}
+
+/**
+ * s: save into the open preset. A shipped demo asks for a new name; so does a
+ * preset of the other kind (a joint preset is never turned into a screw preset).
+ */
+export function saveOpen(s: WorkbenchState, thenLoad?: string): WorkbenchState | Step {
+  const name = s.preset.name;
+  const kind = s.preset.kind ?? 'joint';
+  const then = thenLoad ? {thenLoad} : {};
+  if (s.preset.readOnly) return {...s, prompt: {kind: 'saveAs', title: `"${name}" is a shipped demo; save as`, buffer: `${name} copy`, ...then}};
+  if (kind !== s.mode) {
+    const what = s.mode === 'screw' ? 'power screw' : 'joint';
+    return {...s, prompt: {kind: 'saveAs', title: `"${name}" is a ${KIND_WORD[kind]} preset; save this ${what} as`, buffer: `${name} ${s.mode}`, ...then}};
+  }
+  return saveEffect(s, name, true, then);
+}
+
+/**
+ * The hole-state flag of the joint on screen (the rule is the core's
+ * holeStateFlags; the joint screen shows it above the check's flags).
+ */
+export function strippedHoleFlag(state: WorkbenchState, t: {ascii: boolean}): Flag | undefined {
+  if (state.mode !== 'joint') return undefined;
+  return holeStateFlags(shownValues(state).hole, state.units, t.ascii)[0];
 }

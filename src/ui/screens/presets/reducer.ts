@@ -1,24 +1,19 @@
-/** Preset and report commands: save, load, the name and path prompts, writing the report. */
-import type {WorkbenchServices} from '../services.js';
-import type {Mode} from './fields.js';
-import {evaluate, evaluateRepairs, type Evaluation} from './evaluate.js';
-import {acceptNote, shownNotes} from './note-commands.js';
-import {errText, fail, filteredPresets, info, snapshot, type WorkbenchState} from './workbench.js';
+/**
+ * The presets screen's reducer (pure): the marked preset, loading one (asking
+ * first over unsaved edits), and the name prompts. Saving, renaming, copying,
+ * deleting, importing and exporting are returned as effects.
+ */
+import type {WorkbenchServices} from '../../services.js';
+import type {Mode} from '../../state/fields.js';
+import {withEffects, type Step} from '../../state/effects.js';
+import {errText, fail, filteredPresets, info, isDirty, snapshot, type PromptState, type WorkbenchState} from '../../state/workbench.js';
+import {saveEffect, saveOpen} from '../joint/reducer.js';
 
 export function markedPreset(s: WorkbenchState, svc: WorkbenchServices): string | undefined {
   return filteredPresets(s, svc)[s.presetList.index]?.name;
 }
 
-export function savePreset(s: WorkbenchState, svc: WorkbenchServices, name: string, overwrite: boolean): WorkbenchState {
-  try {
-    svc.presets.save(name, s.values, {overwrite, kind: s.mode});
-    svc.draft.clear();
-    return {...s, preset: {name, readOnly: false, saved: snapshot(s.values)}, message: info(`Saved preset "${name}".`)};
-  } catch (e) {
-    return {...s, message: fail(`Could not save "${name}": ${errText(e)}`)};
-  }
-}
-
+/** Load a preset (a read): its values, mode and kind; the screen goes back to the joint. */
 export function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: string): WorkbenchState {
   try {
     const p = svc.presets.load(name);
@@ -28,7 +23,7 @@ export function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: stri
       ...s,
       mode,
       values: p.values,
-      preset: {name: p.name, readOnly: p.readOnly, saved: snapshot(p.values)},
+      preset: {name: p.name, readOnly: p.readOnly, saved: snapshot(p.values), kind: mode},
       screen: 'joint',
       step: 0,
       field: 0,
@@ -39,113 +34,64 @@ export function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: stri
   }
 }
 
+/** Enter on the list: load the marked preset; over unsaved edits, ask first (save / discard / cancel). */
+export function loadMarked(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
+  const name = markedPreset(s, svc);
+  if (!name) return {...s, message: fail('No preset marked; clear the search with / then Enter')};
+  if (isDirty(s)) return {...s, unsaved: {target: name}, message: undefined};
+  return loadPreset(s, svc, name);
+}
 
-export function runPrompt(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
-  const p = s.prompt!;
-  const text = p.buffer.trim();
+/** The answers to "unsaved edits": save then load, discard and load, or stay. */
+export function unsavedSave(s: WorkbenchState): WorkbenchState | Step {
+  const target = s.unsaved!.target;
+  return saveOpen({...s, unsaved: undefined}, target);
+}
+export function unsavedDiscard(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
+  return loadPreset({...s, unsaved: undefined}, svc, s.unsaved!.target);
+}
+export function unsavedCancel(s: WorkbenchState): WorkbenchState {
+  return {...s, unsaved: undefined, message: info(`Kept the edits to "${s.preset.name}"; nothing loaded`)};
+}
+
+/** A preset command on the marked preset: the prompt or question it opens. */
+export function onMarked(s: WorkbenchState, svc: WorkbenchServices, command: 'preset.rename' | 'preset.duplicate' | 'preset.export' | 'preset.delete'): WorkbenchState {
+  const name = markedPreset(s, svc);
+  if (!name) return {...s, message: fail('No preset marked')};
+  if (command === 'preset.delete') return {...s, confirm: {kind: 'delete', question: `Delete preset "${name}"? This cannot be undone.`, target: name}};
+  if (command === 'preset.rename') return {...s, prompt: {kind: 'rename', title: `Rename "${name}" to`, buffer: name, target: name}};
+  if (command === 'preset.duplicate') return {...s, prompt: {kind: 'duplicate', title: `Copy "${name}" as`, buffer: `${name} copy`, target: name}};
+  return {...s, prompt: {kind: 'export', title: `Export "${name}" to file`, buffer: `${slug(name)}.json`, target: name}};
+}
+
+/** Enter in a presets prompt (the text is not empty). */
+export function presetPrompt(s: WorkbenchState, svc: WorkbenchServices, p: PromptState, text: string): WorkbenchState | Step {
   const base = {...s, prompt: undefined};
-  if (p.kind === 'search') return {...base, presetList: {query: text, index: 0}};
-  // A note may be empty: Enter on an empty line clears it.
-  if (p.kind === 'note') return acceptNote(s);
-  if (text === '') return {...s, message: fail(`${p.title}: type a value, or Esc to cancel`)};
-  try {
-    switch (p.kind) {
-      case 'saveAs': {
-        const exists = svc.presets.list().some(x => x.name === text);
-        if (exists) return {...base, confirm: {kind: 'overwritePreset', question: `Preset "${text}" exists. Replace it?`, target: text}};
-        const saved = savePreset(base, svc, text, false);
-        // On a refused name the prompt stays open with the typed text.
-        return saved.message?.level === 'error' ? {...s, message: saved.message} : saved;
+  switch (p.kind) {
+    case 'saveAs': {
+      let exists: boolean;
+      try {
+        exists = svc.presets.list().some(x => x.name === text);
+      } catch (e) {
+        return {...s, message: fail(errText(e))};
       }
-      case 'rename':
-        svc.presets.rename(p.target!, text);
-        return {
-          ...base,
-          preset: s.preset.name === p.target ? {...s.preset, name: text} : s.preset,
-          message: info(`Renamed "${p.target}" to "${text}".`),
-        };
-      case 'duplicate':
-        svc.presets.duplicate(p.target!, text);
-        return {...base, message: info(`Copied "${p.target}" to "${text}".`)};
-      case 'import': {
-        const r = svc.presets.importFile(text);
-        const skipped = r.skipped.length ? `; skipped ${r.skipped.join('; ')}` : '';
-        return {...base, message: info(`Imported ${r.imported.length} preset(s)${r.imported.length ? `: ${r.imported.join(', ')}` : ''}${skipped}`)};
-      }
-      case 'export':
-        try {
-          svc.presets.exportFile(text, p.target, false);
-        } catch (e) {
-          if (/exist/i.test(errText(e))) {
-            return {...base, confirm: {kind: 'overwriteExport', question: `${text} exists. Replace it?`, target: text, preset: p.target}};
-          }
-          throw e;
-        }
-        return {...base, message: info(`Exported ${p.target ? `"${p.target}"` : 'all presets'} to ${text}.`)};
-      case 'reportPath':
-        return writeReport(base, svc, text, false);
+      if (exists) return {...base, confirm: {kind: 'overwritePreset', question: `Preset "${text}" exists. Replace it?`, target: text, ...(p.thenLoad ? {thenLoad: p.thenLoad} : {})}};
+      // On a refused name the prompt stays open with the typed text.
+      return saveEffect(base, text, false, {prompt: p, ...(p.thenLoad ? {thenLoad: p.thenLoad} : {})});
     }
-  } catch (e) {
-    return {...s, message: fail(errText(e))};
-  }
-  return base;
-}
-
-/**
- * The repair plan the report carries: when the hole is stripped or the check
- * failed, the ranked repairs with the one marked on the Repairs screen as the
- * repair chosen.
- */
-function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation): {plan: NonNullable<ReturnType<typeof evaluateRepairs>['plan']>; chosen?: number} | undefined {
-  const stripped = (s.values.hole as {holeState?: unknown} | undefined)?.holeState === 'stripped';
-  const failed = ev.result?.flags.some(f => f.level === 'fail') ?? false;
-  if (!stripped && !failed) return undefined;
-  const plan = evaluateRepairs(s.values, svc, ev, s.units).plan;
-  if (!plan || plan.options.length === 0) return undefined;
-  const marked = plan.options[Math.min(s.repairIndex, plan.options.length - 1)];
-  return {plan, ...(marked ? {chosen: marked.rank} : {})};
-}
-
-/** The report text for the current joint, or a reason it cannot be made. */
-export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input?: unknown; result?: unknown}): {text?: string; why?: string} {
-  if (!svc.report) return {why: 'The report writer is not available in this workbench.'};
-  if (s.mode === 'screw') return {why: 'The work-order report covers threaded joints; for this power screw save the preset and run tapwright screw --preset NAME.'};
-  if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
-  try {
-    const repairs = reportRepairs(s, svc, ev as Evaluation);
-    return {
-      text: svc.report(s.report.format, ev.result as never, ev.input as never, {
-        presetName: s.preset.name,
-        date: svc.now(),
-        units: s.units,
-        notes: shownNotes(s),
-        ...(repairs ? {repairs} : {}),
-      }),
-    };
-  } catch (e) {
-    return {why: `Cannot build the report: ${errText(e)}`};
-  }
-}
-
-export function writeReport(s: WorkbenchState, svc: WorkbenchServices, path: string, overwrite: boolean): WorkbenchState {
-  const r = reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii));
-  if (!r.text) return {...s, message: fail(r.why ?? 'No report')};
-  try {
-    svc.writeFile(path, r.text, overwrite);
-    return {...s, message: info(`Wrote the ${s.report.format === 'markdown' ? 'Markdown' : 'text'} report to ${path}`)};
-  } catch (e) {
-    if (!overwrite && /exist/i.test(errText(e))) {
-      return {...s, confirm: {kind: 'overwriteFile', question: `${path} exists. Replace it?`, target: path}};
-    }
-    return {...s, message: fail(`Could not write ${path}: ${errText(e)}`)};
+    case 'rename':
+      return withEffects(base, {type: 'renamePreset', from: p.target!, to: text, prompt: p});
+    case 'duplicate':
+      return withEffects(base, {type: 'duplicatePreset', from: p.target!, to: text, prompt: p});
+    case 'import':
+      return withEffects(base, {type: 'importPresets', path: text, prompt: p});
+    case 'export':
+      return withEffects(base, {type: 'exportPresets', path: text, ...(p.target ? {preset: p.target} : {}), overwrite: false, prompt: p});
+    default:
+      return base;
   }
 }
 
 export function slug(name: string): string {
   return name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'joint';
-}
-
-export function defaultReportPath(s: WorkbenchState, svc: WorkbenchServices): string {
-  const d = svc.now().toISOString().slice(0, 10);
-  return `tapwright-${slug(s.preset.name)}-${d}.${s.report.format === 'markdown' ? 'md' : 'txt'}`;
 }

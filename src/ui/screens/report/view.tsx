@@ -1,16 +1,13 @@
-/** The report preview: the work-order report as it will be written to a file. */
+/** The report preview (a thin view): the work-order report as it will be written to a file. */
 import React from 'react';
 import {Box, Text} from 'ink';
-import type {WorkbenchState} from '../state/workbench.js';
-import {reportText} from '../state/preset-commands.js';
-import type {Evaluation} from '../state/evaluate.js';
-import type {WorkbenchServices} from '../services.js';
-import {useTheme} from '../theme.js';
-import {ScrollView} from './scroll-view.js';
+import {useTheme} from '../../theme.js';
+import {ScrollView} from '../../components/scroll-view.js';
+import type {ScreenProps} from '../types.js';
 
-export function ReportScreen({state, ev, svc, width, height}: {state: WorkbenchState; ev: Evaluation; svc: WorkbenchServices; width: number; height: number}) {
+export function ReportView({state, derived, width, height}: ScreenProps) {
   const t = useTheme();
-  const r = reportText(state, svc, ev);
+  const r = derived.report ?? {why: 'No report yet.'};
   const fmt = state.report.format === 'markdown' ? 'Markdown' : 'plain text';
   if (!r.text) {
     return (

@@ -1,0 +1,115 @@
+/**
+ * What went wrong on the shop floor (issue 14): a burst of keys, the hole state
+ * going back to intact, a preset's kind, loading over unsaved edits, and the
+ * repair chosen kept by identity.
+ */
+import {afterEach, describe, expect, it} from 'vitest';
+import {cleanup} from 'ink-testing-library';
+import {startApp} from '../support/start-app.js';
+import {FIXTURE_PLAN, FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
+import {KEY} from '../support/keys.js';
+
+afterEach(() => cleanup());
+
+describe('a burst of keys in one chunk', () => {
+  it('Ctrl-U then "25" in one chunk into a field holding 18 gives 25, not 1825', async () => {
+    const app = startApp();
+    await app.see('Designation');
+    await app.press([KEY.right, KEY.right], '> Engaged length');
+    await app.press(['1', '8', KEY.enter], /Engaged length\s+18\.0 mm/);
+    await app.press(KEY.enter, '18_ mm');
+    await app.press(`${KEY.ctrlU}25`, '25_ mm');
+    await app.press(KEY.enter, /Engaged length\s+25\.0 mm/);
+    app.unmount();
+  });
+
+  it('an arrow and Enter inside one chunk are keys, not text', async () => {
+    const app = startApp();
+    await app.see('Designation');
+    await app.press(`${KEY.right}${KEY.right}`, '> Engaged length');
+    await app.press(`${KEY.enter}${KEY.ctrlU}30${KEY.enter}${KEY.down}`, '> Chamfer');
+    expect(app.frame()).toMatch(/Engaged length\s+30\.0 mm/);
+    app.unmount();
+  });
+});
+
+describe('the hole state back to intact', () => {
+  it('clears the hidden stripped depth; the Repairs screen shows the plan and no internal name', async () => {
+    const app = startApp({svc: fixtureServices({repairs: () => FIXTURE_PLAN})});
+    await app.see('Designation');
+    await app.press(KEY.left, '> Hole');
+    await app.press(KEY.enter, /Hole\s+stripped/);
+    await app.press(KEY.down, '> Stripped to depth');
+    await app.press(['3', KEY.enter], /Stripped to depth\s+3\.00 mm/);
+    await app.press(KEY.up, '> Hole');
+    await app.press(KEY.enter, /Hole\s+intact/);
+    await app.press('r', 'Repairs for: M10x1.5; hole intact');
+    await app.see('Longer engagement');
+    expect(app.frame()).not.toMatch(/strippedDepth|holeState/);
+    expect(JSON.stringify(app.states.at(-1)!.values.hole)).not.toContain('strippedDepth');
+    app.unmount();
+  });
+});
+
+describe('a preset keeps its kind', () => {
+  it('s in power-screw mode on a joint preset does not save it as a screw preset', async () => {
+    const app = startApp({state: {preset: {name: 'mine', readOnly: false, saved: '{}', kind: 'joint'}} as never});
+    await app.see('Preset: mine');
+    await app.press('m', 'Power-screw mode');
+    await app.press('s');
+    expect(app.svc.store.kinds.get('mine')).not.toBe('screw');
+    await app.see('"mine" is a joint preset');
+    app.unmount();
+  });
+
+  it('the Repairs screen in power-screw mode says repairs are for threaded joints', async () => {
+    const app = startApp({svc: fixtureServices({repairs: () => FIXTURE_PLAN})});
+    await app.press('m', 'Power-screw mode');
+    await app.press('r', 'Repairs are for threaded joints');
+    expect(app.frame()).not.toContain('Longer engagement');
+    app.unmount();
+  });
+});
+
+describe('loading another preset over unsaved edits', () => {
+  const withOther = () => {
+    const svc = fixtureServices();
+    svc.store.saved.set('other', {values: {...structuredClone(FIXTURE_VALUES), joint: {...FIXTURE_VALUES.joint, engagement: 20}}, savedAt: '2026-01-01T10:00:00.000Z'});
+    return svc;
+  };
+  const edited = async (app: ReturnType<typeof startApp>) => {
+    await app.see('Designation');
+    await app.press([KEY.right, KEY.right], '> Engaged length');
+    await app.press(['1', '6', KEY.enter], '* unsaved changes');
+    await app.press('p', 'Presets: 2');
+    await app.press(KEY.down);
+    await app.press(KEY.enter, 'Unsaved edits to "demo-fixture"');
+  };
+
+  it('asks first; Esc cancels and keeps the edits', async () => {
+    const app = startApp({svc: withOther()});
+    await edited(app);
+    expect(app.frame()).toMatch(/s save.*d discard.*Esc cancel/);
+    await app.press(KEY.escape, 'nothing loaded');
+    expect(app.frame()).toContain('Preset: demo-fixture (shipped demo, read-only)  * unsaved changes');
+    expect(app.states.at(-1)!.values.joint.engagement).toBe(16);
+    app.unmount();
+  });
+
+  it('d discards the edits and loads the other preset', async () => {
+    const app = startApp({svc: withOther()});
+    await edited(app);
+    await app.press('d', 'Loaded preset "other"');
+    expect(app.states.at(-1)!.values.joint.engagement).toBe(20);
+    app.unmount();
+  });
+
+  it('s saves first (a shipped demo asks for a name), then loads the other preset', async () => {
+    const app = startApp({svc: withOther()});
+    await edited(app);
+    await app.press('s', 'save as: demo-fixture copy_');
+    await app.press(KEY.enter, 'Loaded preset "other"');
+    expect(app.svc.store.saved.get('demo-fixture copy')?.values.joint.engagement).toBe(16);
+    app.unmount();
+  });
+});
