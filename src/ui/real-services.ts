@@ -13,7 +13,7 @@ import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
-import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
+import {formatCheckMarkdown, formatCheckText, planSectionLines, planText, wrapText} from '../report/index.js';
 import {defaultSolidTable} from '../store/solid-tables.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import type {UserParentMaterial} from '../core/joint/input.js';
@@ -175,7 +175,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     report(format, result, input, meta) {
       const rep = meta.repairs;
       if (format === 'text') {
-        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [rep.chosenNote] : [])] : [];
+        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [wrapText(rep.chosenNote, '', '  ').join('\n')] : [])] : [];
         return formatCheckText(result, input, {units: meta.units, extraSections: extra});
       }
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;

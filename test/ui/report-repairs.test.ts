@@ -74,3 +74,24 @@ describe('the workbench in US units', () => {
     expect(notes(evaluateRepairs(demo.values, svc, us, 'us'))).not.toMatch(/\d mm\b/);
   });
 });
+
+describe('the repair chosen in the preset store', () => {
+  it('is saved with the preset (chosenRepair) and comes back on load; a note on the report says when it no longer serves', () => {
+    const svc = services();
+    const demo = svc.presets.load(svc.defaultPreset);
+    const ev = evaluate(demo.values, svc, 'si', true);
+    const plan = evaluateRepairs(demo.values, svc, ev).plan!;
+    const pick = plan.options.find(o => o.feasible)!;
+    const values = {...demo.values, chosenRepair: {kind: pick.kind, label: pick.label}};
+    svc.presets.save('pump 9 demo', values, {overwrite: false, kind: 'joint'});
+    expect(svc.presets.load('pump 9 demo').values).toMatchObject({chosenRepair: {kind: pick.kind, label: pick.label}});
+    // A choice the planner no longer offers is named as such on both reports.
+    const gone = {...demo.values, chosenRepair: {kind: 'solid-insert' as const, label: 'no such repair (demo)'}};
+    const s: WorkbenchState = {...initialState({name: 'pump 9 demo', readOnly: false, values: gone, units: 'si', ascii: true}), screen: 'report'};
+    const md = reportText(s, svc, evaluate(gone, svc, 'si', true)).text ?? '';
+    expect(md).toContain('Repair chosen: no such repair (demo) is not offered for the joint as it stands now');
+    const text = reportText({...s, report: {format: 'text', scroll: 0}}, svc, evaluate(gone, svc, 'si', true)).text ?? '';
+    expect(text).toContain('no such repair (demo) is not offered');
+    for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+  });
+});

@@ -113,3 +113,69 @@ describe('loading another preset over unsaved edits', () => {
     app.unmount();
   });
 });
+
+describe('choosing a repair', () => {
+  const base = FIXTURE_PLAN.options[0]!;
+  const opt = (label: string, kind: typeof base.kind, rank: number, meetsMargin: boolean, extra: Partial<typeof base> = {}) => ({...base, label, kind, rank, meetsMargin, feasible: true, reason: meetsMargin ? null : 'short of the margin', ...extra});
+  /** A planner whose ranking follows the engaged length: at 16 mm the longer engagement falls to the bottom, short of the margin. */
+  const planFor = (engagement: number) => ({
+    ...FIXTURE_PLAN,
+    options:
+      engagement > 12
+        ? [opt('helical insert 1.5D', 'helical-insert', 1, true), opt('Re-use as it is', 'reuse', 2, true), opt('Longer engagement', 'longer-engagement', 3, false)]
+        : [
+            opt('Longer engagement', 'longer-engagement', 1, true),
+            opt('helical insert 1.5D', 'helical-insert', 2, true),
+            opt('Re-use as it is', 'reuse', 3, true, {flags: [{code: 'insert-strips', level: 'watch', message: 'the parent thread strips at 18.0 kN, before the bolt breaks'}]}),
+          ],
+  });
+  const svc = () =>
+    fixtureServices({
+      repairs: joint => planFor(joint.engagement),
+      report: (_f, _r, _i, meta) => `REPORT chosen=${meta.repairs?.chosen ?? '-'} note=${meta.repairs?.chosenNote ?? '-'}\n${meta.repairs?.plan.options.map(o => `${o.rank} ${o.label}`).join('\n') ?? ''}`,
+    });
+  const toEngagement = async (app: ReturnType<typeof startApp>, mm: string) => {
+    await app.press('j', 'Designation');
+    await app.press([KEY.right, KEY.right], '> Engaged length');
+    await app.press([...mm, KEY.enter], new RegExp(`Engaged length\\s+${mm}\\.0 mm`));
+  };
+
+  it('c marks the repair, not the row: the choice follows it when the list re-ranks, and the report names it', async () => {
+    const app = startApp({svc: svc()});
+    await app.press('r', '1 Longer engagement');
+    expect(app.frame()).toContain('No repair chosen: c chooses the marked one');
+    await app.press([KEY.down, 'c'], 'Repair chosen: helical insert 1.5D (rank 2, meets the required margin).');
+    expect(app.states.at(-1)!.values.chosenRepair).toEqual({kind: 'helical-insert', label: 'helical insert 1.5D'});
+    expect(app.frame()).toContain('* unsaved changes');
+    await toEngagement(app, '16');
+    await app.press('r', 'Repair chosen: helical insert 1.5D (rank 1, meets the required margin).');
+    await app.press('w', 'REPORT chosen=1 note=-');
+    app.unmount();
+  });
+
+  it('says so on Repairs and on the report when a change leaves the chosen repair short of the margin', async () => {
+    const app = startApp({svc: svc()});
+    await app.press(['r', 'c'], 'Repair chosen: Longer engagement (rank 1');
+    await toEngagement(app, '16');
+    await app.press('r', '! Repair chosen: Longer engagement no longer meets the required margin');
+    await app.press('w', 'REPORT chosen=3 note=Repair chosen: Longer engagement no longer meets the');
+    app.unmount();
+  });
+
+  it('warns when the repair chosen is flagged to strip; c again clears the choice', async () => {
+    const app = startApp({svc: svc()});
+    await app.press(['r', KEY.down, KEY.down, 'c'], '! Warning: the repair chosen, Re-use as it is, is flagged to strip');
+    await app.press('c', 'No repair chosen now (was Re-use as it is)');
+    expect(app.states.at(-1)!.values.chosenRepair).toBeUndefined();
+    app.unmount();
+  });
+
+  it('is saved with the preset and comes back when it is loaded', async () => {
+    const s = svc();
+    const app = startApp({svc: s, state: {preset: {name: 'mine', readOnly: false, saved: '{}', kind: 'joint'}} as never});
+    await app.press(['r', KEY.down, 'c'], 'Repair chosen: helical insert 1.5D');
+    await app.press(['j', 's'], 'Saved preset "mine".');
+    expect(s.store.saved.get('mine')?.values).toMatchObject({chosenRepair: {kind: 'helical-insert', label: 'helical insert 1.5D'}});
+    app.unmount();
+  });
+});
