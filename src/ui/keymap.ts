@@ -119,9 +119,9 @@ export const KEYMAP = [
   {command: 'report.notes', keys: [c('n')], context: 'report', hint: 'notes', description: 'Edit the work-order notes of the preset: asset tag, location, work-order number, then free text (Enter keeps each, Esc puts all back)'},
   {command: 'screen.back', keys: [k('escape')], context: 'report', description: 'Back to the joint screen'},
 
-  {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'choose', description: 'Previous repair'},
+  {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'mark', description: 'Previous repair'},
   {command: 'list.down', keys: [k('down')], context: 'repairs', description: 'Next repair'},
-  {command: 'repair.choose', keys: [c('c')], context: 'repairs', hint: 'choose it', description: 'Choose the marked repair for the work order (kept with the preset and named on the report); c on the chosen one clears the choice'},
+  {command: 'repair.choose', keys: [c('c')], context: 'repairs', hint: 'choose', description: 'Choose the marked repair for the work order (kept with the preset and named on the report); c on the chosen one clears the choice'},
   {command: 'repair.hole', keys: [k('enter')], context: 'repairs', hint: 'hole state', description: 'Edit the hole state (joint screen, Hole state step)'},
   {command: 'screen.back', keys: [k('escape')], context: 'repairs', description: 'Back to the joint screen'},
 

@@ -95,3 +95,15 @@ describe('the repair chosen in the preset store', () => {
     for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
   });
 });
+
+describe('the hole-state flag on the workbench report', () => {
+  it('a preset whose hole is recorded as stripped carries the hole-stripped WATCH in both reports, as the joint screen does', () => {
+    const svc = services();
+    const demo = svc.presets.load('demo-pump-casing-stud');
+    expect(demo.values.hole.holeState).toBe('stripped');
+    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: true, values: demo.values, units: 'si', ascii: true}), screen: 'report'};
+    const ev = evaluate(s.values, svc, 'si', true);
+    expect(reportText(s, svc, ev).text).toContain('hole-stripped');
+    expect(reportText({...s, report: {format: 'text', scroll: 0}}, svc, ev).text).toContain('The hole is recorded as stripped to 7.00 mm');
+  });
+});

@@ -3,6 +3,8 @@
  * (with the ranked repairs and the repair chosen), its scroll and format, and
  * the write, returned as an effect.
  */
+import type {Flag} from '../../../core/types.js';
+import {holeStateFlags} from '../../../core/joint/hole-flags.js';
 import type {WorkbenchServices} from '../../services.js';
 import {bodyHeight} from '../../layout.js';
 import {wrapLines} from '../../components/scroll-view.js';
@@ -37,8 +39,11 @@ export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
     const repairs = reportRepairs(s, svc, ev as Evaluation);
+    // The report carries the hole-state flags (the core's rule) before the check's, as the joint screen does.
+    const checked = ev.result as Evaluation['result'] & {flags: Flag[]};
+    const result = {...checked, flags: [...holeStateFlags(s.values.hole, s.units), ...checked.flags]};
     return {
-      text: svc.report(s.report.format, ev.result as never, ev.input as never, {
+      text: svc.report(s.report.format, result, ev.input as never, {
         presetName: s.preset.name,
         date: svc.now(),
         units: s.units,
