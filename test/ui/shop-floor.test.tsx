@@ -126,7 +126,7 @@ describe('choosing a repair', () => {
         : [
             opt('Longer engagement', 'longer-engagement', 1, true),
             opt('helical insert 1.5D', 'helical-insert', 2, true),
-            opt('Re-use as it is', 'reuse', 3, true, {flags: [{code: 'insert-strips', level: 'watch', message: 'the parent thread strips at 18.0 kN, before the bolt breaks'}]}),
+            opt('Re-use as it is', 'reuse', 3, true, {flags: [{code: 'strips-before-break', level: 'fail', message: 'the parent thread strips at 18.0 kN, before the bolt breaks'}]}),
           ],
   });
   const svc = () =>
@@ -177,5 +177,18 @@ describe('choosing a repair', () => {
     await app.press(['j', 's'], 'Saved preset "mine".');
     expect(s.store.saved.get('mine')?.values).toMatchObject({chosenRepair: {kind: 'helical-insert', label: 'helical insert 1.5D'}});
     app.unmount();
+  });
+});
+
+describe('what counts as flagged to strip', () => {
+  it('a strips-* FAIL, or a WATCH saying a thread may strip first; not the WATCH that still puts the bolt first', async () => {
+    const {chosenStatus} = await import('../../src/ui/screens/repairs/reducer.js');
+    const o = FIXTURE_PLAN.options[0]!;
+    const planWith = (flags: typeof o.flags) => ({...FIXTURE_PLAN, options: [{...o, flags}]});
+    const c = {kind: o.kind, label: o.label};
+    const watch = (message: string) => [{code: 'strips-before-break', level: 'watch' as const, message}];
+    expect(chosenStatus(planWith(watch('Alexander calls for 20 mm of full thread; only 17 mm is engaged, so a thread may strip before the bolt breaks.')), c)!.ok).toBe(false);
+    expect(chosenStatus(planWith(watch('FED-STD-H28 Formula 1 calls for 18 mm of full thread. The stripping forces still put the bolt first (ratio 1.69).')), c)!.ok).toBe(true);
+    expect(chosenStatus(planWith([]), c)!.ok).toBe(true);
   });
 });

@@ -22,8 +22,12 @@ export function chosenOption(plan: RepairPlan | undefined, c: RepairChoice | und
   return plan?.options.find(o => sameRepair(o, c));
 }
 
-/** A flag of the option that says a thread strips (the planner's stripping checks). */
-const stripFlag = (o: RepairOption) => o.flags.find(f => f.level !== 'info' && /strip/i.test(`${f.code} ${f.message}`));
+/**
+ * A flag of the option that says a thread strips: the core's strips-* flags at
+ * FAIL, or at WATCH when they say a thread may strip first (not the WATCH that
+ * still puts the bolt first).
+ */
+const stripFlag = (o: RepairOption) => o.flags.find(f => f.code.startsWith('strips-') && (f.level === 'fail' || /\bmay strip\b/i.test(f.message)));
 
 /**
  * One line on the chosen repair as the inputs stand now: ok, or why it no
