@@ -16,7 +16,7 @@ import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
 import {Lines} from './components/lines.js';
 import {ScreenGuard} from './components/screen-guard.js';
 import {SCREENS, screenRow} from './screens/registry.js';
-import {withLabels} from './screens/repairs/reducer.js';
+import {withLabels} from './labels.js';
 
 
 /** Terminal size that follows resizes; 0 or missing sizes fall back to 80x24. */

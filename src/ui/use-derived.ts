@@ -10,13 +10,20 @@ import type {WorkbenchServices} from './services.js';
 import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
 import {shownValues, type WorkbenchState} from './state/workbench.js';
 import {reportText} from './screens/report/reducer.js';
+import {withLabels} from './labels.js';
 import type {Derived} from './screens/types.js';
+
+/** An evaluation with its messages in the form's words (no internal input names). */
+function labelled<E extends {errors: Record<string, string>; error?: string}>(e: E): E {
+  const errors = Object.fromEntries(Object.entries(e.errors).map(([k, v]) => [k, withLabels(v)]));
+  return {...e, errors, ...(e.error !== undefined ? {error: withLabels(e.error)} : {})};
+}
 
 export function useDerived(state: WorkbenchState, svc: WorkbenchServices): Derived {
   const shown = shownValues(state);
   const {units, ascii, mode, screen} = state;
-  const ev = useMemo(() => evaluate(shown, svc, units, ascii), [shown, svc, units, ascii]);
-  const sev = useMemo(() => (mode === 'screw' ? evaluateScrew(shown, svc, units, ascii) : undefined), [shown, svc, units, ascii, mode]);
+  const ev = useMemo(() => labelled(evaluate(shown, svc, units, ascii)), [shown, svc, units, ascii]);
+  const sev = useMemo(() => (mode === 'screw' ? labelled(evaluateScrew(shown, svc, units, ascii)) : undefined), [shown, svc, units, ascii, mode]);
   const flags = useMemo(
     () => (mode === 'screw' ? (sev?.result?.flags ?? []) : [...holeStateFlags(shown.hole, units, ascii), ...(ev.result?.flags ?? [])]),
     [mode, sev, ev, shown.hole, units, ascii],

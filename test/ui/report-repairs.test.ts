@@ -104,6 +104,9 @@ describe('the hole-state flag on the workbench report', () => {
     const s: WorkbenchState = {...initialState({name: demo.name, readOnly: true, values: demo.values, units: 'si', ascii: true}), screen: 'report'};
     const ev = evaluate(s.values, svc, 'si', true);
     expect(reportText(s, svc, ev).text).toContain('hole-stripped');
+    // No repair chosen: the report says so rather than naming the top row.
+    expect(reportText(s, svc, ev).text).toContain('No repair chosen yet');
+    expect(reportText(s, svc, ev).text).not.toContain('Repair chosen:');
     expect(reportText({...s, report: {format: 'text', scroll: 0}}, svc, ev).text).toContain('The hole is recorded as stripped to 7.00 mm');
   });
 });

@@ -192,3 +192,13 @@ describe('what counts as flagged to strip', () => {
     expect(chosenStatus(planWith([]), c)!.ok).toBe(true);
   });
 });
+
+describe('messages in the form words', () => {
+  it('replaces internal input names with the field labels', async () => {
+    const {withLabels} = await import('../../src/ui/labels.js');
+    const text = withLabels('Hole state: strippedDepth a stripped depth was given but holeState is "intact"; set holeState to "stripped"; boltRm too low');
+    expect(text).not.toMatch(/strippedDepth|holeState|boltRm/);
+    expect(text).toContain('stripped to depth');
+    expect(text).toContain('bolt rm too low');
+  });
+});

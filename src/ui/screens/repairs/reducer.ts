@@ -6,7 +6,6 @@
 import type {RepairOption, RepairPlan} from '../../../core/repair/types.js';
 import type {WorkbenchServices} from '../../services.js';
 import {evaluate, evaluateRepairs, type RepairEvaluation} from '../../state/evaluate.js';
-import {FIELDS} from '../../state/fields.js';
 import {fail, info, shownValues, type RepairChoice, type WorkbenchState} from '../../state/workbench.js';
 
 /** The ranked repairs of the joint on screen (memoised by the evaluation). */
@@ -63,16 +62,4 @@ export function chooseRepair(s: WorkbenchState, svc: WorkbenchServices): Workben
   const values = {...s.values, chosenRepair: {kind: marked.kind, label: marked.label}};
   const status = chosenStatus(plan, values.chosenRepair)!;
   return {...s, values, message: status.ok ? info(`${status.text} s saves it with the preset.`) : fail(status.text)};
-}
-
-/** A message from the planner with the form's labels in place of internal names (strippedDepth -> stripped to depth). */
-export function withLabels(text: string): string {
-  let out = text;
-  for (const f of FIELDS) {
-    const key = f.id.slice(f.id.lastIndexOf('.') + 1);
-    // Only names that are not plain words (camelCase) are internal.
-    if (!/[A-Z]/.test(key)) continue;
-    out = out.replace(new RegExp(`\\b${key}\\b`, 'g'), f.label.toLowerCase());
-  }
-  return out;
 }

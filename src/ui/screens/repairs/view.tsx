@@ -8,7 +8,8 @@ import {fieldById} from '../../state/fields.js';
 import {shownValues, type WorkbenchState} from '../../state/workbench.js';
 import {useTheme, fit, pad, wrap, type Theme} from '../../theme.js';
 import type {ScreenProps} from '../types.js';
-import {chosenStatus, sameRepair, withLabels} from './reducer.js';
+import {withLabels} from '../../labels.js';
+import {chosenStatus, sameRepair} from './reducer.js';
 
 /** The thread and hole the repairs are for, in one line. */
 function holeSummary(state: WorkbenchState, t: Theme): string {

@@ -29,7 +29,8 @@ function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation
   if (!plan || plan.options.length === 0) return undefined;
   const chosen = chosenOption(plan, choice);
   const status = chosenStatus(plan, choice);
-  return {plan, ...(chosen ? {chosen: chosen.rank} : {}), ...(status && !status.ok ? {chosenNote: status.text} : {})};
+  const note = !choice ? 'No repair chosen yet: c on the Repairs screen of the workbench chooses one for the work order.' : status && !status.ok ? status.text : undefined;
+  return {plan, ...(chosen ? {chosen: chosen.rank} : {}), ...(note ? {chosenNote: note} : {})};
 }
 
 /** The report text for the current joint, or a reason it cannot be made. */
