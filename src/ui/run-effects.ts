@@ -21,6 +21,7 @@ const RUN = {
   exportPresets: (e, svc) => (svc.presets.exportFile(e.path, e.preset, e.overwrite), {ok: true}),
   writeReport: (e, svc) => (svc.writeFile(e.path, e.text, e.overwrite), {ok: true}),
   clearDraft: (_e, svc) => (svc.draft.clear(), {ok: true}),
+  keepDraft: (e, svc) => (e.draft ? svc.draft.save(e.draft) : svc.draft.clear(), {ok: true}),
 } satisfies Runners;
 
 /** Run one effect; a thrown error becomes a failed outcome with its message. */

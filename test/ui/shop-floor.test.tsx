@@ -202,3 +202,24 @@ describe('messages in the form words', () => {
     expect(text).toContain('bolt rm too low');
   });
 });
+
+describe('quitting keeps the draft through an effect', () => {
+  it('q with unsaved edits writes the draft (the reducer asks, the app writes); q with none clears it', async () => {
+    const app = startApp();
+    await app.see('Designation');
+    await app.press([KEY.right, KEY.right], '> Engaged length');
+    await app.press(['1', '4', KEY.enter], '* unsaved changes');
+    await app.press('q');
+    await new Promise(r => setTimeout(r, 50));
+    expect(app.svc.store.draft?.values.joint.engagement).toBe(14);
+    expect(app.svc.store.draft?.presetName).toBe('demo-fixture');
+    expect(app.quits.at(-1)?.draftKept).toBe(true);
+    app.unmount();
+    const clean = startApp();
+    clean.svc.store.draft = {savedAt: 'x', presetName: 'p', values: FIXTURE_VALUES};
+    await clean.press('q');
+    await new Promise(r => setTimeout(r, 50));
+    expect(clean.svc.store.draft).toBeUndefined();
+    clean.unmount();
+  });
+});

@@ -5,9 +5,9 @@
  * and says what the state becomes (a message, a question, the next effect).
  */
 import type {KeyEvent} from '../keys.js';
-import type {WorkbenchServices} from '../services.js';
+import type {Draft, WorkbenchServices} from '../services.js';
 import type {Mode} from './fields.js';
-import {fail, info, snapshot, type PromptState, type Values, type WorkbenchState} from './workbench.js';
+import {fail, info, isDirty, snapshot, type PromptState, type Values, type WorkbenchState} from './workbench.js';
 
 export type Effect =
   | {type: 'savePreset'; name: string; values: Values; kind: Mode; overwrite: boolean; /** Refused: this prompt stays open. */ prompt?: PromptState; /** Saved: then load this preset. */ thenLoad?: string}
@@ -17,7 +17,9 @@ export type Effect =
   | {type: 'importPresets'; path: string; prompt: PromptState}
   | {type: 'exportPresets'; path: string; preset?: string; overwrite: boolean; prompt?: PromptState}
   | {type: 'writeReport'; path: string; text: string; format: 'text' | 'markdown'; overwrite: boolean}
-  | {type: 'clearDraft'};
+  | {type: 'clearDraft'}
+  /** On quit: keep the unsaved edits as the draft for the next start (none to keep: clear it). */
+  | {type: 'keepDraft'; draft?: Draft};
 
 export type Outcome = {ok: true; imported?: {imported: string[]; skipped: string[]}} | {ok: false; error: string};
 
@@ -31,6 +33,14 @@ export type Handler = (s: WorkbenchState, ev: KeyEvent, svc: WorkbenchServices) 
 
 export const withEffects = (state: WorkbenchState, ...effects: Effect[]): Step => ({state, effects});
 export const asStep = (r: WorkbenchState | Step): Step => ('effects' in r && 'state' in r ? r : {state: r, effects: []});
+
+/** q or Ctrl-C: quit, keeping unsaved edits as the draft (a draft still on offer is left as it is). */
+export function quitWith(s: WorkbenchState, how: 'quit' | 'interrupt', svc: WorkbenchServices): WorkbenchState | Step {
+  const state: WorkbenchState = {...s, quit: how};
+  if (s.draftOffer) return state;
+  if (!isDirty(s)) return withEffects(state, {type: 'keepDraft'});
+  return withEffects(state, {type: 'keepDraft', draft: {savedAt: svc.now().toISOString(), presetName: s.preset.name, values: s.values, mode: s.mode}});
+}
 
 /**
  * Loading a preset after a save over unsaved edits: given by the presets
@@ -80,5 +90,8 @@ export function settle(s: WorkbenchState, e: Effect, o: Outcome, svc: WorkbenchS
     case 'clearDraft':
       // A draft that cannot be removed is offered again next time; nothing is lost.
       return {state: s, effects: []};
+    case 'keepDraft':
+      // The draft is a convenience; a failure to keep it must not stop the exit.
+      return {state: o.ok && e.draft ? {...s, draftKept: true} : s, effects: []};
   }
 }

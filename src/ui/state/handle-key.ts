@@ -12,7 +12,7 @@ import {go, saveEffect} from '../screens/joint/reducer.js';
 import {loadPreset, presetPrompt, unsavedCancel, unsavedDiscard, unsavedSave} from '../screens/presets/reducer.js';
 import {writeReport} from '../screens/report/reducer.js';
 import {acceptNote, cancelNotes, setNoteBuffer} from '../screens/report/notes.js';
-import {withEffects, type Handler, type Step} from './effects.js';
+import {quitWith, withEffects, type Handler, type Step} from './effects.js';
 import {contextsOf, fail, info, type PromptKind, type WorkbenchState} from './workbench.js';
 
 const goKeys = Object.fromEntries(
@@ -20,12 +20,12 @@ const goKeys = Object.fromEntries(
 ) as Record<`go.${Screen}`, Handler>;
 
 const any = {
-  'app.interrupt': s => ({...s, quit: 'interrupt'}),
+  'app.interrupt': (s, _ev, svc) => quitWith(s, 'interrupt', svc),
 } satisfies Record<CommandsOf<'any'>, Handler>;
 
 const screens = {
   ...goKeys,
-  'app.quit': s => ({...s, quit: 'quit'}),
+  'app.quit': (s, _ev, svc) => quitWith(s, 'quit', svc),
   'units.toggle': s => {
     const units = s.units === 'si' ? 'us' : 'si';
     return {...s, units, message: info(units === 'si' ? 'Units: SI (mm, kN, N·m, MPa)' : 'Units: US customary (in, lbf, ft·lbf, ksi)')};

@@ -99,6 +99,8 @@ export interface WorkbenchState {
   draftOffer?: Draft;
   size: {columns: number; rows: number};
   quit?: 'quit' | 'interrupt';
+  /** Set when quitting kept the unsaved edits as a draft (the launcher says so after the exit). */
+  draftKept?: boolean;
 }
 
 export const snapshot = (v: Values): string => JSON.stringify(v);
