@@ -93,7 +93,8 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
   } else if (state.unsaved) {
-    text = `Unsaved edits to "${state.preset.name}": s save, d discard, Esc cancel (then "${state.unsaved.target}" loads)`;
+    // The open preset's name is on the line above, with its "unsaved changes" mark.
+    text = `Unsaved edits: s save, d discard, Esc cancel; then "${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
   } else if (state.draftOffer) {
     text = `Restore the unsaved edits from ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')}? y/n (preset ${state.draftOffer.presetName})`;
   } else if (state.edit?.error) {

@@ -83,13 +83,13 @@ describe('loading another preset over unsaved edits', () => {
     await app.press(['1', '6', KEY.enter], '* unsaved changes');
     await app.press('p', 'Presets: 2');
     await app.press(KEY.down);
-    await app.press(KEY.enter, 'Unsaved edits to "demo-fixture"');
+    await app.press(KEY.enter, 'Unsaved edits: s save, d discard, Esc cancel; then "other" loads');
+    expect(app.frame()).toContain('Preset: demo-fixture (shipped demo, read-only)  * unsaved changes');
   };
 
   it('asks first; Esc cancels and keeps the edits', async () => {
     const app = startApp({svc: withOther()});
     await edited(app);
-    expect(app.frame()).toMatch(/s save.*d discard.*Esc cancel/);
     await app.press(KEY.escape, 'nothing loaded');
     expect(app.frame()).toContain('Preset: demo-fixture (shipped demo, read-only)  * unsaved changes');
     expect(app.states.at(-1)!.values.joint.engagement).toBe(16);
