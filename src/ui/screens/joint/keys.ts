@@ -3,7 +3,8 @@ import type {CommandsOf} from '../../keymap.js';
 import type {Handler} from '../../state/effects.js';
 import {fieldById, setValue} from '../../state/fields.js';
 import {currentField, fail, info, pickerItems} from '../../state/workbench.js';
-import {clearField, commitEdit, moveField, moveStep, saveOpen, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
+import {saveOpen} from '../../state/save-commands.js';
+import {clearField, commitEdit, moveField, moveStep, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
 
 const joint = {
   'field.prev': s => moveField(s, -1),

@@ -1,15 +1,14 @@
 /**
  * The joint screen's reducer (pure): start, preview, keep or drop a typed or
  * picked value; move between fields and steps; switch joint / power screw;
- * save (as an effect, keeping the preset's kind).
+ * the hole-state flag of the joint on screen.
  */
 import type {Flag} from '../../../core/types.js';
 import {holeStateFlags} from '../../../core/joint/hole-flags.js';
 import type {WorkbenchServices} from '../../services.js';
 import {FIELDS, fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef, type Mode, type StepId} from '../../state/fields.js';
 import {editText, parseField} from '../../state/field-text.js';
-import {withEffects, type Step} from '../../state/effects.js';
-import {currentFields, fail, info, pickerItems, shownValues, type Screen, type Values, type WorkbenchState} from '../../state/workbench.js';
+import {currentFields, fail, info, pickerItems, shownValues, type Values, type WorkbenchState} from '../../state/workbench.js';
 
 export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   if (!s.picker) return s;
@@ -95,11 +94,6 @@ export function moveStep(s: WorkbenchState, delta: number): WorkbenchState {
   return {...s, step, field: 0};
 }
 
-export function go(s: WorkbenchState, screen: Screen): WorkbenchState {
-  if (s.screen === screen) return s;
-  return {...s, screen, backTo: s.screen === 'help' ? s.backTo : s.screen, message: undefined};
-}
-
 /** Empty an optional field (its default applies). */
 export function clearField(s: WorkbenchState, f: FieldDef | undefined): WorkbenchState {
   if (!f) return s;
@@ -120,29 +114,6 @@ export function toggleMode(s: WorkbenchState, svc: WorkbenchServices): Workbench
     field: 0,
     message: info(mode === 'screw' ? 'Power-screw mode: lead screw and nut (m: back to the joint)' : 'Joint mode: bolt or screw in a tapped hole or nut'),
   };
-}
-
-const KIND_WORD: Record<Mode, string> = {joint: 'joint', screw: 'power-screw'};
-
-/** The save effect for the open values, under `name`, as the kind on screen. */
-export function saveEffect(s: WorkbenchState, name: string, overwrite: boolean, more: {prompt?: WorkbenchState['prompt']; thenLoad?: string} = {}): Step {
-  return withEffects(s, {type: 'savePreset', name, values: s.values, kind: s.mode, overwrite, ...(more.prompt ? {prompt: more.prompt} : {}), ...(more.thenLoad ? {thenLoad: more.thenLoad} : {})});
-}
-
-/**
- * s: save into the open preset. A shipped demo asks for a new name; so does a
- * preset of the other kind (a joint preset is never turned into a screw preset).
- */
-export function saveOpen(s: WorkbenchState, thenLoad?: string): WorkbenchState | Step {
-  const name = s.preset.name;
-  const kind = s.preset.kind ?? 'joint';
-  const then = thenLoad ? {thenLoad} : {};
-  if (s.preset.readOnly) return {...s, prompt: {kind: 'saveAs', title: `"${name}" is a shipped demo; save as`, buffer: `${name} copy`, ...then}};
-  if (kind !== s.mode) {
-    const what = s.mode === 'screw' ? 'power screw' : 'joint';
-    return {...s, prompt: {kind: 'saveAs', title: `"${name}" is a ${KIND_WORD[kind]} preset; save this ${what} as`, buffer: `${name} ${s.mode}`, ...then}};
-  }
-  return saveEffect(s, name, true, then);
 }
 
 /**

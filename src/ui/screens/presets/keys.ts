@@ -2,8 +2,8 @@
 import type {CommandsOf} from '../../keymap.js';
 import type {Handler} from '../../state/effects.js';
 import {filteredPresets} from '../../state/workbench.js';
-import {saveOpen} from '../joint/reducer.js';
-import {back} from '../back.js';
+import {saveOpen} from '../../state/save-commands.js';
+import {back} from '../navigation.js';
 import {loadMarked, onMarked} from './reducer.js';
 
 const move = (d: number): Handler => (s, _ev, svc) => {

@@ -7,7 +7,7 @@ import type {WorkbenchServices} from '../../services.js';
 import type {Mode} from '../../state/fields.js';
 import {withEffects, type Step} from '../../state/effects.js';
 import {errText, fail, filteredPresets, info, isDirty, snapshot, type PromptState, type WorkbenchState} from '../../state/workbench.js';
-import {saveEffect, saveOpen} from '../joint/reducer.js';
+import {saveEffect, saveOpen} from '../../state/save-commands.js';
 
 export function markedPreset(s: WorkbenchState, svc: WorkbenchServices): string | undefined {
   return filteredPresets(s, svc)[s.presetList.index]?.name;

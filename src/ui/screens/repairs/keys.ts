@@ -2,7 +2,7 @@
 import type {CommandsOf} from '../../keymap.js';
 import type {Handler} from '../../state/effects.js';
 import {STEPS} from '../../state/fields.js';
-import {back} from '../back.js';
+import {back} from '../navigation.js';
 import {chooseRepair, moveRepair} from './reducer.js';
 
 const repairs = {

@@ -1,7 +1,7 @@
 /** The report screen's keys: one handler per command of its context. */
 import type {CommandsOf} from '../../keymap.js';
 import type {Handler} from '../../state/effects.js';
-import {back} from '../back.js';
+import {back} from '../navigation.js';
 import {scrollKeys} from '../scroll-keys.js';
 import {defaultReportPath, openNotes, scrollReport} from './reducer.js';
 
