@@ -149,6 +149,9 @@ describe('choosing a repair', () => {
     expect(app.frame()).toContain('* unsaved changes');
     await toEngagement(app, '16');
     await app.press('r', 'Repair chosen: helical insert 1.5D (rank 1, meets the required margin).');
+    // The cursor stayed on row 2; the chosen repair, now first, carries the * mark.
+    expect(app.frame()).toMatch(/\* 1 helical insert 1\.5D/);
+    expect(app.frame()).toMatch(/> 2 Re-use as it is/);
     await app.press('w', 'REPORT chosen=1 note=-');
     app.unmount();
   });
