@@ -8,6 +8,7 @@
 import * as z from 'zod';
 import {JointInputSchema} from '../core/joint/input.js';
 import {RepairInputSchema} from '../core/repair/input.js';
+import {REPAIR_KINDS} from '../core/repair/types.js';
 import {ScrewInputSchema} from '../core/screw/input.js';
 
 export const CURRENT_SCHEMA_VERSION = 2;
@@ -41,6 +42,8 @@ const PresetFields = {
   savedAt: z.iso.datetime({offset: true}),
   /** True for invented demo scenarios (the shipped presets and copies of them). */
   demo: z.boolean().optional(),
+  /** The repair chosen for the work order (workbench Repairs screen), by identity: kind and label, e.g. "helical insert 1.5D". */
+  chosenRepair: z.object({kind: z.enum(REPAIR_KINDS), label: z.string().min(1).max(80)}).optional(),
   /** Increases by one on every save; used to spot a save made by another session. */
   revision: z.number().int().min(1).max(Number.MAX_SAFE_INTEGER),
 };

@@ -9,19 +9,14 @@ import {MIN_COLUMNS, MIN_ROWS, bodyHeight, cautionLines} from './layout.js';
 import {normaliseKey} from './keys.js';
 import {hintLines, type HintCondition} from './keymap.js';
 import {contextsOf, currentField, isDirty, shownValues, snapshot, type Screen, type WorkbenchState} from './state/workbench.js';
-import {handleKeys} from './state/handle-key.js';
-import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
-import {formatField} from './state/field-text.js';
-import {fieldById} from './state/fields.js';
+import {handleKeys} from './run-effects.js';
+import {useDerived} from './use-derived.js';
 import type {WorkbenchServices} from './services.js';
 import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
 import {Lines} from './components/lines.js';
 import {ScreenGuard} from './components/screen-guard.js';
-import {JointScreen} from './screens/joint-screen.js';
-import {PresetsScreen} from './screens/presets-screen.js';
-import {ReportScreen} from './screens/report-screen.js';
-import {RepairsScreen} from './screens/repairs-screen.js';
-import {HelpScreen} from './screens/help-screen.js';
+import {SCREENS, screenRow} from './screens/registry.js';
+import {withLabels} from './labels.js';
 
 
 /** Terminal size that follows resizes; 0 or missing sizes fall back to 80x24. */
@@ -39,13 +34,7 @@ export function useTerminalSize(): {columns: number; rows: number} {
   return size;
 }
 
-const TABS: readonly {screen: Screen; key: string; title: string}[] = [
-  {screen: 'joint', key: 'j', title: 'Joint'},
-  {screen: 'repairs', key: 'r', title: 'Repairs'},
-  {screen: 'presets', key: 'p', title: 'Presets'},
-  {screen: 'report', key: 'w', title: 'Report'},
-  {screen: 'help', key: '?', title: 'Help'},
-];
+const TABS: readonly {screen: Screen; key: string; title: string}[] = SCREENS.map(r => ({screen: r.id, key: r.key, title: r.title}));
 
 // The header, preset line and caution change rarely: memoised, so a keystroke re-renders only what it changes.
 const Header = React.memo(function Header({screen, unitSystem, width}: {screen: Screen; unitSystem: 'si' | 'us'; width: number}) {
@@ -103,6 +92,9 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
     text = `${head}${tail.length > room ? `${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}` : tail.join('')}`;
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
+  } else if (state.unsaved) {
+    // The open preset's name is on the line above, with its "unsaved changes" mark.
+    text = `Unsaved edits: s save, d discard, Esc cancel; then "${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
   } else if (state.draftOffer) {
     text = `Restore the unsaved edits from ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')}? y/n (preset ${state.draftOffer.presetName})`;
   } else if (state.edit?.error) {
@@ -122,8 +114,8 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
     }
   }
   const line = (
-    <Text color={isError ? t.tone('fail') : state.prompt || state.confirm || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.draftOffer)}>
-      {fit(`${isError ? '! ' : ''}${text}`, width, t.sym.ellipsis) || ' '}
+    <Text color={isError ? t.tone('fail') : state.prompt || state.confirm || state.unsaved || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.unsaved || state.draftOffer)}>
+      {fit(`${isError ? '! ' : ''}${withLabels(text)}`, width, t.sym.ellipsis) || ' '}
     </Text>
   );
   if (!promptError) return line;
@@ -133,18 +125,6 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
       {line}
     </Box>
   );
-}
-
-function holeSummary(state: WorkbenchState, t: Theme): string {
-  const h = shownValues(state).hole;
-  const len = (id: string) => formatField(fieldById(id), (h as Record<string, unknown>)[id.slice(5)], state.units, t.ascii);
-  const parts = [
-    h.holeState !== 'stripped' ? 'hole intact' : h.strippedDepth !== undefined ? `stripped to ${len('hole.strippedDepth')}` : 'stripped (depth not given)',
-    h.through ? 'through' : 'blind',
-    h.depthAvailable !== undefined ? `depth ${len('hole.depthAvailable')}` : 'depth not given',
-    h.wall !== undefined ? `wall ${len('hole.wall')}` : 'wall not given',
-  ];
-  return `${shownValues(state).joint.thread ?? '?'}; ${parts.join(', ')} (step 5 of the joint screen)`;
 }
 
 export {MIN_COLUMNS, MIN_ROWS};
@@ -161,8 +141,7 @@ export interface AppProps {
 
 function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: WorkbenchServices; columns: number; rows: number}) {
   const t = useTheme();
-  const ev = evaluate(shownValues(state), svc, state.units, state.ascii);
-  const sev = state.mode === 'screw' ? evaluateScrew(shownValues(state), svc, state.units, state.ascii) : undefined;
+  const derived = useDerived(state, svc);
   const height = rows - 1;
   // The hint area keeps the height of the screen's own hints while a field is edited or a
   // picker or question is open, so the screen below does not move by a line (and repaint).
@@ -173,26 +152,8 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   while (hints.length < hintRows) hints.push('');
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
   const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;
-  let body: React.ReactNode;
-  switch (state.screen) {
-    case 'joint':
-      body = <JointScreen state={state} ev={ev} sev={sev} svc={svc} width={columns} height={bodyH} />;
-      break;
-    case 'presets':
-      body = <PresetsScreen state={state} svc={svc} width={columns} height={bodyH} />;
-      break;
-    case 'report':
-      body = <ReportScreen state={state} ev={ev} svc={svc} width={columns} height={bodyH} />;
-      break;
-    case 'repairs':
-      body = <RepairsScreen rep={evaluateRepairs(shownValues(state), svc, ev, state.units)} index={state.repairIndex} units={state.units} holeSummary={holeSummary(state, t)} width={columns} height={bodyH} />;
-      break;
-    case 'help': {
-      const plan = evaluateRepairs(shownValues(state), svc, ev, state.units).plan;
-      body = <HelpScreen ascii={t.ascii} sources={[...(ev.result?.sources ?? []), ...(sev?.result?.sources ?? [])]} rankingRule={plan?.rankingRule} scroll={state.helpScroll} width={columns} height={bodyH} />;
-      break;
-    }
-  }
+  const {View} = screenRow(state.screen);
+  const body = <View state={state} derived={derived} svc={svc} width={columns} height={bodyH} />;
   return (
     <Box flexDirection="column" width={columns} height={height} overflow="hidden">
       <Header screen={state.screen} unitSystem={state.units} width={columns} />
@@ -200,7 +161,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       <Box height={bodyH} width={columns} overflow="hidden">
         <ScreenGuard resetKey={`${state.screen}.${state.mode}.${state.units}.${snapshot(shownValues(state))}`}>{body}</ScreenGuard>
       </Box>
-      <MessageLine state={state} ev={state.screen === 'joint' && sev ? sev : ev} width={columns} />
+      <MessageLine state={state} ev={state.screen === 'joint' && derived.sev ? derived.sev : derived.ev} width={columns} />
       <Caution columns={columns} />
       <Lines lines={hints.map(text => ({text, color: t.tone('dim')}))} width={columns} />
     </Box>

@@ -5,19 +5,14 @@
  */
 import type {KeyEvent, KeyName} from './keys.js';
 
-export type Context =
-  | 'any'
-  | 'screens'
-  | 'joint'
-  | 'edit'
-  | 'picker'
-  | 'presets'
-  | 'report'
-  | 'repairs'
-  | 'help'
-  | 'prompt'
-  | 'confirm'
-  | 'draft';
+/** The screens, in tab order: each has a folder in screens/, a registry row, a `go.` key and its own context. */
+export const SCREEN_IDS = ['joint', 'repairs', 'presets', 'report', 'help'] as const;
+export type Screen = (typeof SCREEN_IDS)[number];
+
+/** Overlays that take the keys while open (a value being typed, a list, a question). */
+export type Overlay = 'edit' | 'picker' | 'prompt' | 'confirm' | 'unsaved' | 'draft';
+
+export type Context = 'any' | 'screens' | Screen | Overlay;
 
 /** Conditions the hint line can check (worked out from the state by the app). */
 export type HintCondition = 'field-has-table';
@@ -35,7 +30,7 @@ export interface KeySpec {
 
 export interface Binding {
   command: string;
-  keys: KeySpec[];
+  keys: readonly KeySpec[];
   context: Context;
   /** Short word for the hint line; no hint when absent. */
   hint?: string;
@@ -59,10 +54,11 @@ export const CONTEXT_TITLES: Record<Context, string> = {
   help: 'Help screen',
   prompt: 'Typing a name, file path or note',
   confirm: 'A yes/no question',
+  unsaved: 'Loading another preset over unsaved edits',
   draft: 'Start-up: unsaved draft found',
 };
 
-export const KEYMAP: readonly Binding[] = [
+export const KEYMAP = [
   {command: 'app.interrupt', keys: [c('c', {ctrl: true})], context: 'any', description: 'Quit at once; unsaved edits are kept as a draft'},
   {command: 'app.quit', keys: [c('q')], context: 'screens', hint: 'quit', description: 'Quit; unsaved edits are kept as a draft for the next start'},
   {command: 'go.joint', keys: [c('j')], context: 'screens', description: 'Joint screen: inputs and live results'},
@@ -123,8 +119,9 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'report.notes', keys: [c('n')], context: 'report', hint: 'notes', description: 'Edit the work-order notes of the preset: asset tag, location, work-order number, then free text (Enter keeps each, Esc puts all back)'},
   {command: 'screen.back', keys: [k('escape')], context: 'report', description: 'Back to the joint screen'},
 
-  {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'choose', description: 'Previous repair'},
+  {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'mark', description: 'Previous repair'},
   {command: 'list.down', keys: [k('down')], context: 'repairs', description: 'Next repair'},
+  {command: 'repair.choose', keys: [c('c')], context: 'repairs', hint: 'choose', description: 'Choose the marked repair for the work order (kept with the preset and named on the report); c on the chosen one clears the choice'},
   {command: 'repair.hole', keys: [k('enter')], context: 'repairs', hint: 'hole state', description: 'Edit the hole state (joint screen, Hole state step)'},
   {command: 'screen.back', keys: [k('escape')], context: 'repairs', description: 'Back to the joint screen'},
 
@@ -143,9 +140,18 @@ export const KEYMAP: readonly Binding[] = [
   {command: 'confirm.yes', keys: [c('y')], context: 'confirm', hint: 'yes', description: 'Yes, do it'},
   {command: 'confirm.no', keys: [c('n'), k('escape')], context: 'confirm', hint: 'no', description: 'No, leave it'},
 
+  {command: 'unsaved.save', keys: [c('s')], context: 'unsaved', hint: 'save', description: 'Save the edits first (a shipped demo asks for a name), then load the other preset'},
+  {command: 'unsaved.discard', keys: [c('d')], context: 'unsaved', hint: 'discard', description: 'Throw the edits away and load the other preset'},
+  {command: 'unsaved.cancel', keys: [k('escape'), c('n')], context: 'unsaved', hint: 'cancel', description: 'Stay on the edited preset; nothing is loaded'},
+
   {command: 'draft.restore', keys: [c('y'), k('enter')], context: 'draft', hint: 'restore draft', description: 'Restore the unsaved edits of the last session'},
   {command: 'draft.discard', keys: [c('n')], context: 'draft', hint: 'discard it', description: 'Throw the draft away and start from the preset'},
-];
+] as const satisfies readonly Binding[];
+
+/** Every command of the workbench: a typo in a command name is a compile error. */
+export type Command = (typeof KEYMAP)[number]['command'];
+/** The commands bound in one context: each screen's key table must handle exactly these. */
+export type CommandsOf<C extends Context> = Extract<(typeof KEYMAP)[number], {context: C}>['command'];
 
 function matches(spec: KeySpec, ev: KeyEvent): boolean {
   if (spec.name !== ev.name) return false;
@@ -158,11 +164,11 @@ function matches(spec: KeySpec, ev: KeyEvent): boolean {
   return spec.char === ch;
 }
 
-/** The command a key means in a list of contexts, searched in order. */
-export function lookup(ev: KeyEvent, contexts: readonly Context[]): string | undefined {
+/** The command a key means in a list of contexts, searched in order, with the context that bound it. */
+export function lookup(ev: KeyEvent, contexts: readonly Context[]): {command: Command; context: Context} | undefined {
   for (const ctx of contexts) {
-    const b = KEYMAP.find(x => x.context === ctx && x.keys.some(s => matches(s, ev)));
-    if (b) return b.command;
+    const b = (KEYMAP as readonly Binding[]).find(x => x.context === ctx && x.keys.some(s => matches(s, ev)));
+    if (b) return {command: b.command as Command, context: ctx};
   }
   return undefined;
 }
@@ -192,11 +198,12 @@ export function keyLabel(spec: KeySpec, ascii: boolean): string {
 export function hintLines(contexts: readonly Context[], ascii: boolean, width: number, holds: ReadonlySet<HintCondition> = new Set()): string[] {
   const parts: string[] = [];
   const seen = new Set<string>();
+  const table: readonly Binding[] = KEYMAP;
   for (const ctx of contexts) {
-    for (const b of KEYMAP) {
+    for (const b of table) {
       if (b.context !== ctx || !b.hint || seen.has(b.command) || (b.hintWhen && !holds.has(b.hintWhen))) continue;
       seen.add(b.command);
-      const same = KEYMAP.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
+      const same = table.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
       const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);
       parts.push(`${keys.map(s => keyLabel(s, ascii)).join(ascii ? '/' : '')} ${b.hint}`);
     }

@@ -3,7 +3,8 @@
  * here, once: Backspace (0x7F) arrives as `delete`; Enter is '\r' but a '\n'
  * (Ctrl-J, some pastes) is not flagged; a pasted or coalesced chunk arrives as
  * one event (split into characters, an embedded CR/LF becomes Enter); Esc
- * followed quickly by a key arrives as Alt+key (split into Esc, then the key).
+ * followed quickly by a key arrives as Alt+key (split into Esc, then the key);
+ * a control key inside a burst (Ctrl-U then "25") stays a control key, in order.
  */
 import type {Key} from 'ink';
 
@@ -37,7 +38,10 @@ function splitChunk(text: string): KeyEvent[] {
     if (ch === '\r' || ch === '\n') out.push({name: 'enter'});
     else if (ch === '\t') out.push({name: 'tab'});
     else if (ch === '\x7f' || ch === '\b') out.push({name: 'backspace'});
-    else if (ch >= ' ') out.push({name: 'char', char: ch});
+    else if (ch === '\x1b') out.push({name: 'escape'});
+    // A control key inside a burst (Ctrl-U then "25" in one read) is that key, in its place.
+    else if (ch < ' ') out.push({name: 'char', char: String.fromCharCode(ch.charCodeAt(0) + 96), ctrl: true});
+    else out.push({name: 'char', char: ch});
   }
   return out;
 }

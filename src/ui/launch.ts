@@ -135,9 +135,10 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     onState: s => {
       latest = s;
     },
+    // Quitting keeps the draft through the reducer's keepDraft effect; a signal or a crash, below.
     onQuit: s => {
       latest = s;
-      keepDraft(s);
+      if (s.draftKept) draftKept = true;
     },
   });
   const instance = render(app, {stdout: writer as unknown as NodeJS.WriteStream, stdin, exitOnCtrlC: false, patchConsole: false, maxFps: 30});

@@ -13,7 +13,7 @@ import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
-import {formatCheckMarkdown, formatCheckText, planSectionLines, planText} from '../report/index.js';
+import {formatCheckMarkdown, formatCheckText, planSectionLines, planText, wrapText} from '../report/index.js';
 import {defaultSolidTable} from '../store/solid-tables.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import type {UserParentMaterial} from '../core/joint/input.js';
@@ -29,6 +29,7 @@ export function presetValues(p: Preset): FormValues {
   const v = {joint: structuredClone(p.joint ?? {thread: 'M10', engagement: 10}), hole: structuredClone(p.repair ?? {})} as FormValues;
   if (p.screw) v.screw = structuredClone(p.screw);
   v.notes = structuredClone(p.notes ?? {});
+  if (p.chosenRepair) (v as FormValues & {chosenRepair?: unknown}).chosenRepair = structuredClone(p.chosenRepair);
   return v;
 }
 
@@ -151,6 +152,7 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
             ...(values.screw ? {screw: values.screw as ScrewInput} : {}),
             // The workbench's notes; a draft from before notes were edited has none: keep the stored ones.
             notes: values.notes ?? existing?.notes ?? before?.notes ?? {},
+            ...((values as {chosenRepair?: Preset['chosenRepair']}).chosenRepair ? {chosenRepair: (values as {chosenRepair?: Preset['chosenRepair']}).chosenRepair} : {}),
           },
           {overwrite, ...(before && overwrite ? {expectedRevision: before.revision} : {})},
         );
@@ -178,12 +180,12 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     report(format, result, input, meta) {
       const rep = meta.repairs;
       if (format === 'text') {
-        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})] : [];
+        const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [wrapText(rep.chosenNote, '', '  ').join('\n')] : [])] : [];
         return formatCheckText(result, input, {units: meta.units, extraSections: extra});
       }
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       const extra = rep
-        ? [['## Repair plan', '', ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
+        ? [['## Repair plan', '', ...(rep.chosenNote ? [`**${rep.chosenNote}**`, ''] : []), ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
         : [];
       return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: extra, ...(notes ? {notes} : {})});
     },

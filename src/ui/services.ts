@@ -57,8 +57,8 @@ export interface ReportMeta {
   units: 'si' | 'us';
   /** The work-order notes as they stand in the workbench (edited, maybe not saved yet). */
   notes?: Notes;
-  /** The ranked repairs and the one marked on the Repairs screen (its rank), when the report should carry them. */
-  repairs?: {plan: RepairPlan; chosen?: number};
+  /** The ranked repairs and the one chosen on the Repairs screen (its rank now), when the report should carry them; chosenNote says when the choice no longer serves. */
+  repairs?: {plan: RepairPlan; chosen?: number; chosenNote?: string};
 }
 
 export interface PresetPort {

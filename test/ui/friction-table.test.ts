@@ -9,7 +9,7 @@ import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {describe, expect, it, onTestFinished} from 'vitest';
 import {realServices} from '../../src/ui/real-services.js';
-import {handleKeys} from '../../src/ui/state/handle-key.js';
+import {handleKeys} from '../../src/ui/run-effects.js';
 import {initialState, pickerItems, type WorkbenchState} from '../../src/ui/state/workbench.js';
 import {currentFields} from '../../src/ui/state/workbench.js';
 import {getValue} from '../../src/ui/state/fields.js';

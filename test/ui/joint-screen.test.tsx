@@ -4,7 +4,7 @@ import {startApp} from '../support/start-app.js';
 import {KEY} from '../support/keys.js';
 import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {checkJoint} from '../../src/core/joint/index.js';
-import {strippedHoleFlag} from '../../src/ui/screens/joint-screen.js';
+import {strippedHoleFlag} from '../../src/ui/screens/joint/reducer.js';
 import {initialState} from '../../src/ui/state/workbench.js';
 import {makeTheme} from '../../src/ui/theme.js';
 

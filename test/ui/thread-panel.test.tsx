@@ -10,7 +10,7 @@ import {cleanup} from 'ink-testing-library';
 import {startApp} from '../support/start-app.js';
 import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {checkJoint} from '../../src/core/joint/index.js';
-import {wholeItems} from '../../src/ui/screens/joint-screen.js';
+import {wholeItems} from '../../src/ui/screens/joint/view.js';
 import {makeTheme} from '../../src/ui/theme.js';
 import type {Line} from '../../src/ui/components/lines.js';
 

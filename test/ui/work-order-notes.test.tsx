@@ -13,11 +13,11 @@ import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {KEY} from '../support/keys.js';
 import type {KeyEvent} from '../../src/ui/keys.js';
 import type {WorkbenchServices} from '../../src/ui/services.js';
-import {handleKeys} from '../../src/ui/state/handle-key.js';
+import {handleKeys} from '../../src/ui/run-effects.js';
 import {initialState, isDirty, type WorkbenchState} from '../../src/ui/state/workbench.js';
-import {NOTE_FIELDS} from '../../src/ui/state/note-commands.js';
+import {NOTE_FIELDS} from '../../src/ui/screens/report/notes.js';
 import {realServices} from '../../src/ui/real-services.js';
-import {reportText} from '../../src/ui/state/preset-commands.js';
+import {reportText} from '../../src/ui/screens/report/reducer.js';
 import {evaluate} from '../../src/ui/state/evaluate.js';
 import {NotesSchema} from '../../src/store/schema.js';
 

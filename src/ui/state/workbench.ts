@@ -1,16 +1,26 @@
 /**
  * The workbench state: its shape, the start state, and what is live now (the
- * key contexts, the fields of the current step). The commands that change it
- * are in handle-key.ts, edit-commands.ts and preset-commands.ts; side effects
- * (store, files) go only through the injected services.
+ * key contexts, the fields of the current step). Each screen's reducer
+ * (src/ui/screens/<screen>/reducer.ts) changes it; writes (store, files) are
+ * returned as effects (effects.ts) that the app runs, never done here.
  */
 import type {UnitSystem} from '../../core/units.js';
 import type {Notes} from '../../store/schema.js';
 import type {Draft, PickItem, PresetEntry, WorkbenchServices} from '../services.js';
-import type {Context} from '../keymap.js';
+import type {Context, Screen} from '../keymap.js';
+import type {RepairKind} from '../../core/repair/types.js';
 import {fieldById, stepsFor, visibleFields, type FieldDef, type FormValues, type Mode} from './fields.js';
 
-export type Screen = 'joint' | 'repairs' | 'presets' | 'report' | 'help';
+export type {Screen};
+
+/** The repair chosen for the work order, by identity (kind and label, e.g. "helical insert 1.5D"), not by row. */
+export interface RepairChoice {
+  kind: RepairKind;
+  label: string;
+}
+
+/** The form values and the repair chosen: what a preset saves and a draft keeps. */
+export type Values = FormValues & {chosenRepair?: RepairChoice};
 
 export interface EditState {
   fieldId: string;
@@ -40,6 +50,8 @@ export interface PromptState {
   note?: 'asset' | 'location' | 'workOrder' | 'text';
   /** The notes as they were before the first note prompt: Esc puts them back. */
   notesBefore?: Notes;
+  /** Saving over unsaved edits before loading this preset (save as, then load). */
+  thenLoad?: string;
 }
 
 export type ConfirmKind = 'delete' | 'overwritePreset' | 'overwriteFile' | 'overwriteExport';
@@ -49,6 +61,8 @@ export interface ConfirmState {
   target: string;
   text?: string;
   preset?: string;
+  /** Replacing a preset to save unsaved edits before loading this one. */
+  thenLoad?: string;
 }
 
 export interface Message {
@@ -63,17 +77,20 @@ export interface WorkbenchState {
   backTo: Screen;
   step: number;
   field: number;
-  values: FormValues;
+  values: Values;
   edit?: EditState;
   picker?: PickerState;
   prompt?: PromptState;
   confirm?: ConfirmState;
   /** Values with the value being typed or marked in a list applied: what the readout shows. */
-  preview?: FormValues;
+  preview?: Values;
   units: UnitSystem;
   ascii: boolean;
   showFlags: boolean;
-  preset: {name: string; readOnly: boolean; saved: string};
+  /** The open preset; `kind` is what it was saved as (a joint preset stays a joint preset). */
+  preset: {name: string; readOnly: boolean; saved: string; kind?: Mode};
+  /** Loading another preset while the open one has unsaved edits: save, discard or cancel. */
+  unsaved?: {target: string};
   message?: Message;
   presetList: {query: string; index: number};
   report: {format: 'text' | 'markdown'; scroll: number};
@@ -82,16 +99,18 @@ export interface WorkbenchState {
   draftOffer?: Draft;
   size: {columns: number; rows: number};
   quit?: 'quit' | 'interrupt';
+  /** Set when quitting kept the unsaved edits as a draft (the launcher says so after the exit). */
+  draftKept?: boolean;
 }
 
-export const snapshot = (v: FormValues): string => JSON.stringify(v);
+export const snapshot = (v: Values): string => JSON.stringify(v);
 export const isDirty = (s: WorkbenchState): boolean => snapshot(s.values) !== s.preset.saved;
-export const shownValues = (s: WorkbenchState): FormValues => s.preview ?? s.values;
+export const shownValues = (s: WorkbenchState): Values => s.preview ?? s.values;
 
 export function initialState(opts: {
   name: string;
   readOnly: boolean;
-  values: FormValues;
+  values: Values;
   units: UnitSystem;
   ascii: boolean;
   draft?: Draft;
@@ -109,7 +128,7 @@ export function initialState(opts: {
     units: opts.units,
     ascii: opts.ascii,
     showFlags: false,
-    preset: {name: opts.name, readOnly: opts.readOnly, saved: snapshot(opts.values)},
+    preset: {name: opts.name, readOnly: opts.readOnly, saved: snapshot(opts.values), kind: opts.mode ?? 'joint'},
     presetList: {query: '', index: 0},
     report: {format: 'markdown', scroll: 0},
     helpScroll: 0,
@@ -124,6 +143,7 @@ export function initialState(opts: {
 export function contextsOf(s: WorkbenchState): Context[] {
   if (s.draftOffer) return ['draft', 'any'];
   if (s.confirm) return ['confirm', 'any'];
+  if (s.unsaved) return ['unsaved', 'any'];
   if (s.prompt) return ['prompt', 'any'];
   if (s.picker) return ['picker', 'any'];
   if (s.edit) return ['edit', 'any'];

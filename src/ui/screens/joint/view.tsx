@@ -1,21 +1,23 @@
 /**
- * The joint screen: the steps of inputs on the left, the live results (or the
- * full flags) on the right, the most important flags underneath.
+ * The joint screen (a thin view): the steps of inputs on the left, the live
+ * results (or the full flags) on the right, the most important flags
+ * underneath. It renders what use-derived.ts computed; it decides nothing.
  */
 import React from 'react';
 import {Box, Text} from 'ink';
-import type {Flag} from '../../core/types.js';
-import {formatQuantity} from '../../core/units.js';
-import {limitsSides, methodWords} from '../../core/threads/limits-provenance.js';
-import {STEPS, getValue, stepsFor, type FieldDef} from '../state/fields.js';
-import {fieldUnit, formatField} from '../state/field-text.js';
-import {currentField, currentFields, pickerItems, shownValues, type WorkbenchState} from '../state/workbench.js';
-import type {Evaluation, ScrewEvaluation} from '../state/evaluate.js';
+import type {Flag} from '../../../core/types.js';
+import {CONVERSION, formatQuantity} from '../../../core/units.js';
+import {limitsSides, methodWords} from '../../../core/threads/limits-provenance.js';
+import {STEPS, getValue, stepsFor, type FieldDef} from '../../state/fields.js';
+import {fieldUnit, formatField} from '../../state/field-text.js';
+import {currentField, currentFields, pickerItems, shownValues, type WorkbenchState} from '../../state/workbench.js';
+import type {Evaluation, ScrewEvaluation} from '../../state/evaluate.js';
 import {ScrewReadout} from './screw-readout.js';
-import type {WorkbenchServices} from '../services.js';
-import {useTheme, fit, pad, wrap, type Theme} from '../theme.js';
-import {loadShareLines} from '../components/pictures.js';
-import {Lines, type Line} from '../components/lines.js';
+import type {WorkbenchServices} from '../../services.js';
+import {useTheme, fit, pad, wrap, type Theme} from '../../theme.js';
+import {loadShareLines} from '../../components/pictures.js';
+import {Lines, type Line} from '../../components/lines.js';
+import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
 
 interface Props {
@@ -27,6 +29,9 @@ interface Props {
   width: number;
   height: number;
 }
+
+/** Square inches per square millimetre, from the core's inch. */
+const IN2_PER_MM2 = 1 / (CONVERSION.IN_MM * CONVERSION.IN_MM);
 
 const LEVEL_WORD: Record<Flag['level'], string> = {fail: 'FAIL', watch: 'WATCH', info: 'NOTE'};
 const LEVEL_ORDER: Record<Flag['level'], number> = {fail: 0, watch: 1, info: 2};
@@ -103,7 +108,7 @@ function threadInfoLines(ev: Evaluation, state: WorkbenchState, width: number, h
   const g = ev.result?.geometry;
   if (!g || height <= 0) return [];
   const L = (v: number) => formatQuantity(v, 'length', state.units, {ascii: t.ascii, significant: 4});
-  const a = (v: number) => (state.units === 'si' ? `${v.toFixed(1)} mm²` : `${(v / 645.16).toFixed(4)} in²`).replace('²', t.ascii ? '^2' : '²');
+  const a = (v: number) => (state.units === 'si' ? `${v.toFixed(1)} mm²` : `${(v * IN2_PER_MM2).toFixed(4)} in²`).replace('²', t.ascii ? '^2' : '²');
   const lines = [
     `${g.spec.designation} (${g.spec.family}${g.spec.series ? ` ${g.spec.series}` : ''})`,
     `pitch ${L(g.pitch)}${g.spec.tpi ? ` (${g.spec.tpi} tpi)` : ''}${g.spec.isStandardPitch ? '' : ' special pitch'}`,
@@ -190,29 +195,10 @@ function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag
   return <Lines lines={lines} width={width} height={rows} />;
 }
 
-/**
- * A joint whose hole is recorded as stripped (Hole state step): the check above is of a
- * sound thread, so the flags say so and point to the repairs. The workbench's own flag;
- * the check itself knows nothing of the hole's state.
- */
-export function strippedHoleFlag(state: WorkbenchState, t: Theme): Flag | undefined {
-  const hole = shownValues(state).hole;
-  if (state.mode !== 'joint' || hole.holeState !== 'stripped') return undefined;
-  const depth = typeof hole.strippedDepth === 'number' ? ` to ${formatQuantity(hole.strippedDepth, 'length', state.units, {ascii: t.ascii, significant: 3})}` : '';
-  return {
-    code: 'hole-stripped',
-    level: 'watch',
-    message: `The hole is recorded as stripped${depth}: the results are for a sound thread. The Repairs screen (r) ranks the fixes.`,
-    summary: `Hole stripped${depth}: results assume a sound thread; r: repairs`,
-  };
-}
-
-export function JointScreen(props: Props) {
-  const {state, width, height} = props;
-  const t = useTheme();
+export function JointView({state, derived, svc, width, height}: ScreenProps) {
+  const props: Props = {state, ev: derived.ev, ...(derived.sev ? {sev: derived.sev} : {}), svc, width, height};
   const checked = state.mode === 'screw' && props.sev ? props.sev : props.ev;
-  const stripped = strippedHoleFlag(state, t);
-  const ev = stripped && checked.result ? {...checked, result: {...checked.result, flags: [stripped, ...checked.result.flags]}} : checked;
+  const ev = checked.result ? {...checked, result: {...checked.result, flags: derived.flags}} : checked;
   // The readout needs 14 lines; a taller terminal gives the rest to the flags.
   const flagLines = Math.max(2, height - 1 - 14);
   const bodyH = height - 1 - flagLines;

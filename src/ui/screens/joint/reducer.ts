@@ -1,8 +1,14 @@
-/** Editing commands: start, preview, keep or drop a typed or picked value; move between fields and steps. */
-import type {WorkbenchServices} from '../services.js';
-import {fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef} from './fields.js';
-import {editText, parseField} from './field-text.js';
-import {currentFields, fail, info, pickerItems, type Screen, type WorkbenchState} from './workbench.js';
+/**
+ * The joint screen's reducer (pure): start, preview, keep or drop a typed or
+ * picked value; move between fields and steps; switch joint / power screw;
+ * the hole-state flag of the joint on screen.
+ */
+import type {Flag} from '../../../core/types.js';
+import {holeStateFlags} from '../../../core/joint/hole-flags.js';
+import type {WorkbenchServices} from '../../services.js';
+import {FIELDS, fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef, type Mode, type StepId} from '../../state/fields.js';
+import {editText, parseField} from '../../state/field-text.js';
+import {currentFields, fail, info, pickerItems, shownValues, type Values, type WorkbenchState} from '../../state/workbench.js';
 
 export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   if (!s.picker) return s;
@@ -22,12 +28,30 @@ export function withEditPreview(s: WorkbenchState): WorkbenchState {
   return {...s, preview: setValue(s.values, f.id, p.value), edit: {...s.edit, error: undefined}};
 }
 
+/**
+ * Values without what the hole step now hides (the stripped depth of a hole set
+ * back to intact), so no hidden value can stop the repair planner; with the
+ * labels of the fields cleared.
+ */
+export function withoutHidden(v: Values, step: StepId): {values: Values; cleared: string[]} {
+  let values = v;
+  const cleared: string[] = [];
+  for (const f of FIELDS) {
+    if (f.step !== step || !f.isVisible || f.isVisible(values) || getValue(values, f.id) === undefined) continue;
+    values = setValue(values, f.id, undefined);
+    cleared.push(f.label.toLowerCase());
+  }
+  return {values, cleared};
+}
+
 export function startEdit(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices, typed?: string): WorkbenchState {
   const value = getValue(s.values, f.id) ?? fieldBounds(f.id).default;
   if (f.kind === 'choice') {
     const choices = f.choices ?? [];
     const next = choices[(choices.indexOf(String(value ?? choices[0])) + 1) % choices.length];
-    return {...s, values: setValue(s.values, f.id, next), message: info(`${f.label}: ${next}`)};
+    const set = setValue(s.values, f.id, next);
+    const {values, cleared} = f.step === 'hole' ? withoutHidden(set, 'hole') : {values: set, cleared: []};
+    return {...s, values, message: info(`${f.label}: ${next}${cleared.length ? `; ${cleared.join(', ')} cleared` : ''}`)};
   }
   if (f.kind === 'bool') {
     return {...s, values: setValue(s.values, f.id, !value), message: info(`${f.label}: ${value ? 'no' : 'yes'}`)};
@@ -70,7 +94,33 @@ export function moveStep(s: WorkbenchState, delta: number): WorkbenchState {
   return {...s, step, field: 0};
 }
 
-export function go(s: WorkbenchState, screen: Screen): WorkbenchState {
-  if (s.screen === screen) return s;
-  return {...s, screen, backTo: s.screen === 'help' ? s.backTo : s.screen, message: undefined};
+/** Empty an optional field (its default applies). */
+export function clearField(s: WorkbenchState, f: FieldDef | undefined): WorkbenchState {
+  if (!f) return s;
+  if (!f.optional) return {...s, message: fail(`${f.label} cannot be empty; Enter to edit it`)};
+  return {...s, values: setValue(s.values, f.id, undefined), message: info(`${f.label}: emptied, the default applies`)};
+}
+
+/** Threaded joint <-> power screw (the preset keeps its kind until saved as another). */
+export function toggleMode(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
+  if (!svc.checkScrew) return {...s, message: fail('The power-screw mode is not in this build; use tapwright screw')};
+  const mode: Mode = s.mode === 'joint' ? 'screw' : 'joint';
+  const values = mode === 'screw' && !s.values.screw ? {...s.values, screw: {thread: 'Tr24x5', load: 10000, nutLength: 24}} : s.values;
+  return {
+    ...s,
+    mode,
+    values,
+    step: 0,
+    field: 0,
+    message: info(mode === 'screw' ? 'Power-screw mode: lead screw and nut (m: back to the joint)' : 'Joint mode: bolt or screw in a tapped hole or nut'),
+  };
+}
+
+/**
+ * The hole-state flag of the joint on screen (the rule is the core's
+ * holeStateFlags; the joint screen shows it above the check's flags).
+ */
+export function strippedHoleFlag(state: WorkbenchState, t: {ascii: boolean}): Flag | undefined {
+  if (state.mode !== 'joint') return undefined;
+  return holeStateFlags(shownValues(state).hole, state.units, t.ascii)[0];
 }

@@ -1,20 +1,24 @@
 /**
- * Help, generated: the keys come from the keymap table, the methods and their
- * sources from the check result, the cautions from core/cautions.ts, and the
- * ranking rule from the repair planner.
+ * Help, generated (pure): the keys come from the keymap table, the methods and
+ * their sources from the check result, the cautions from core/cautions.ts, and
+ * the ranking rule from the repair planner; and its scroll.
  */
-import React from 'react';
-import {CAUTION_LINES} from '../../core/cautions.js';
-import {EFFORT_SCALE_TEXT} from '../../core/repair/rank.js';
-import {CONTEXT_TITLES, KEYMAP, keyLabel, type Context} from '../keymap.js';
-import {ScrollView} from './scroll-view.js';
+import {CAUTION_LINES} from '../../../core/cautions.js';
+import {EFFORT_SCALE_TEXT} from '../../../core/repair/rank.js';
+import {CONTEXT_TITLES, KEYMAP, keyLabel, type Binding, type Context} from '../../keymap.js';
+import type {WorkbenchServices} from '../../services.js';
+import {bodyHeight} from '../../layout.js';
+import {wrapLines} from '../../components/scroll-view.js';
+import {evaluate, evaluateRepairs} from '../../state/evaluate.js';
+import {shownValues, type WorkbenchState} from '../../state/workbench.js';
 
 export const SCREEN_GUIDE: readonly string[] = [
   'Joint: the inputs in five steps on the left (Thread, Parts, Engagement,',
   '  Tightening, Hole state); the results on the right change as you type.',
-  'Repairs: the fixes for a weak or stripped hole, best first. When the hole is',
-  '  stripped or the check fails, the report carries the ranked repairs and the',
-  '  one marked here as the repair chosen.',
+  'Repairs: the fixes for a weak or stripped hole, best first. c chooses the',
+  '  marked repair for the work order: the choice follows the repair (not its',
+  '  row) when the list re-ranks, is saved with the preset and named on the',
+  '  report, which says when it no longer meets the required margin.',
   'Presets: saved joints; shipped demos are read-only, "save as" copies them.',
   'Report: the work-order report, written to a Markdown or text file; n edits the',
   '  preset\'s work-order notes (asset tag, location, work order, free text).',
@@ -32,11 +36,12 @@ export const SCREEN_GUIDE: readonly string[] = [
 
 export function helpLines(opts: {ascii: boolean; sources: readonly string[]; rankingRule?: string}): string[] {
   const lines: string[] = ['Screens', ...SCREEN_GUIDE.map(l => `  ${l.replace('SELECT', opts.ascii ? '>' : '▶')}`), ''];
-  const contexts = [...new Set(KEYMAP.map(b => b.context))] as Context[];
+  const table: readonly Binding[] = KEYMAP;
+  const contexts = [...new Set(table.map(b => b.context))] as Context[];
   lines.push('Keys');
   for (const ctx of contexts) {
     lines.push(`  ${CONTEXT_TITLES[ctx]}`);
-    for (const b of KEYMAP.filter(x => x.context === ctx)) {
+    for (const b of table.filter(x => x.context === ctx)) {
       const keys = b.keys.map(k => keyLabel(k, opts.ascii)).join(' / ');
       lines.push(`    ${keys.padEnd(16)} ${b.description}`);
     }
@@ -51,14 +56,11 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
   return lines;
 }
 
-export function HelpScreen(props: {ascii: boolean; sources: readonly string[]; rankingRule?: string; scroll: number; width: number; height: number}) {
-  return (
-    <ScrollView
-      lines={helpLines(props)}
-      scroll={props.scroll}
-      width={props.width}
-      height={props.height}
-      title="Help: keys, methods, cautions (Esc back)"
-    />
-  );
+/** Scroll the help by d lines, within the help as drawn. */
+export function scrollHelp(s: WorkbenchState, svc: WorkbenchServices, d: number): WorkbenchState {
+  const ev = evaluate(shownValues(s), svc, s.units, s.ascii);
+  const rule = evaluateRepairs(shownValues(s), svc, ev, s.units).plan?.rankingRule;
+  const lines = wrapLines(helpLines({ascii: s.ascii, sources: ev.result?.sources ?? [], rankingRule: rule}), s.size.columns);
+  const rows = bodyHeight(s.size) - 1;
+  return {...s, helpScroll: Math.max(0, Math.min(s.helpScroll + d, lines.length - rows))};
 }

@@ -2,7 +2,7 @@
 import React from 'react';
 import {Box, Text} from 'ink';
 import {useTheme, fit, wrap} from '../theme.js';
-import {Lines} from '../components/lines.js';
+import {Lines} from './lines.js';
 
 /** Hard-wrap lines to the width, keeping each line's indent. */
 export function wrapLines(lines: readonly string[], width: number): string[] {

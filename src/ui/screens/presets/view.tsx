@@ -1,18 +1,11 @@
-/** The presets screen: the list with search, and the marked preset's details. */
+/** The presets screen (a thin view): the list with search, and the marked preset's details. */
 import React from 'react';
 import {Box, Text} from 'ink';
-import {filteredPresets, type WorkbenchState} from '../state/workbench.js';
-import type {WorkbenchServices} from '../services.js';
-import {useTheme, fit, pad} from '../theme.js';
+import {filteredPresets} from '../../state/workbench.js';
+import {useTheme, fit, pad} from '../../theme.js';
+import type {ScreenProps} from '../types.js';
 
-interface Props {
-  state: WorkbenchState;
-  svc: WorkbenchServices;
-  width: number;
-  height: number;
-}
-
-export function PresetsScreen({state, svc, width, height}: Props) {
+export function PresetsView({state, svc, width, height}: ScreenProps) {
   const t = useTheme();
   const list = filteredPresets(state, svc);
   const rows = Math.max(1, height - 3);

@@ -1,10 +1,10 @@
 /** The live results of a power screw, every number from the core's ScrewResult. */
 import React from 'react';
-import type {ScrewResult} from '../../core/screw/result.js';
-import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../core/units.js';
-import {useTheme, pad, fit, wrap} from '../theme.js';
-import {Lines, type Line} from '../components/lines.js';
-import {marginGauge} from '../components/pictures.js';
+import type {ScrewResult} from '../../../core/screw/result.js';
+import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../../core/units.js';
+import {useTheme, pad, fit, wrap} from '../../theme.js';
+import {Lines, type Line} from '../../components/lines.js';
+import {marginGauge} from '../../components/pictures.js';
 
 interface Props {
   result?: ScrewResult;

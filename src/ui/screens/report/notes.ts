@@ -6,9 +6,9 @@
  * changed, go into the draft and are saved with the preset.
  */
 import * as z from 'zod';
-import {NotesSchema, type Notes} from '../../store/schema.js';
-import type {FormValues} from './fields.js';
-import {fail, info, type WorkbenchState} from './workbench.js';
+import {NotesSchema, type Notes} from '../../../store/schema.js';
+import type {FormValues} from '../../state/fields.js';
+import {fail, info, type WorkbenchState} from '../../state/workbench.js';
 
 export type NoteKey = keyof Notes;
 

@@ -4,12 +4,12 @@
  */
 import {limitsUsedText} from '../../core/joint/measured.js';
 import React from 'react';
-import {Lines, type Line} from '../components/lines.js';
-import type {CheckResult} from '../../core/joint/result.js';
-import type {JointInput} from '../../core/joint/input.js';
-import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../core/units.js';
-import {useTheme, pad, fit, wrap} from '../theme.js';
-import {engagementScale, marginGauge} from '../components/pictures.js';
+import {Lines, type Line} from '../../components/lines.js';
+import type {CheckResult} from '../../../core/joint/result.js';
+import type {JointInput} from '../../../core/joint/input.js';
+import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../../core/units.js';
+import {useTheme, pad, fit, wrap} from '../../theme.js';
+import {engagementScale, marginGauge} from '../../components/pictures.js';
 
 interface Props {
   result?: CheckResult;
