@@ -101,6 +101,10 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
     throw new JointInputError('clamp', '--clamp: with a tapped hole list the parts under the head and, last, the part that holds the thread (at least two entries)');
   }
   const grip = effectiveGrip(parts.map(p => ({thickness: p.thickness, modulus: p.modulus})), d, tapped);
+  const through = tapped ? grip.grip - (grip.layers[grip.layers.length - 1]?.thickness ?? 0) : grip.grip;
+  if (service.boltLength !== undefined && service.boltLength <= through) {
+    throw new JointInputError('boltLength', `--bolt-length ${service.boltLength.toFixed(1)} mm does not reach ${tapped ? 'the tapped part' : 'past the clamped parts'} (${through.toFixed(1)} mm${tapped ? ' above the tapped part' : ' of parts'}); give the bolt length under the head`);
+  }
   const kbOut = boltStiffness({d, stressArea: At, modulus: Eb, grip: grip.grip, inch, ...(service.boltLength !== undefined ? {boltLength: service.boltLength} : {}), ...(service.threadLength !== undefined ? {threadLength: service.threadLength} : {})});
   if (service.boltLength === undefined && service.threadLength !== undefined) notes.push('Thread length given without the bolt length: the bolt is taken as threaded through the grip.');
   const kb = kbOut.stiffness;
@@ -116,6 +120,9 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
       ? embeddingAmount({roughness: service.roughness, bearingFaces: tapped ? 1 : 2, interfaces: parts.length - 1, shear: transverse > 0})
       : service.embedding;
   const FZ = embeddingLoss(fz, kb, km);
+  if (service.embedding === 'auto' && parts.some(p => p.modulus < 150_000)) {
+    notes.push('Embedding guide values are for steel parts: softer parts (aluminium, cast iron, copper alloys) settle more, so the loss shown may be low.');
+  }
   const embeddingSource = service.embedding === 'auto' ? `${EMBEDDING_SOURCE}; Rz ${service.roughness} um` : fz === 0 ? 'switched off (--embedding 0)' : 'amount given by the user';
 
   let dF = 0;
@@ -172,6 +179,7 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
     ...(pHead > worstLimit ? {washerDiameter: washerDiameterFor(boltLoadMax, worstLimit, dh)} : {}),
   };
   if (limit === null) notes.push(`Limiting surface pressure not known for ${first.name}: the head pressure is shown without a limit.`);
+  notes.push('Surface pressure checked on the first part under the head' + (tapped ? '' : ' and the last part above the nut') + '; how a washer spreads the load onto the part beneath it is not computed.');
   if (!tapped) notes.push('Nut bearing face taken as the head\'s (same width across flats); the nut pressure equals the head pressure.');
 
   let slip: ServiceResult['slip'];

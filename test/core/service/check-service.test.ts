@@ -71,3 +71,9 @@ describe('checkService', () => {
     expect(s.grip).toBe(15); // h + d/2 (Shigley 9th ed. Table 8-7)
   });
 });
+
+describe('checkService on any reasonable input', () => {
+  it('a bolt length that does not reach past the parts is named', () => {
+    expect(() => run({...M12_NUT}, {clamp: [{thickness: 30, material: 'steel'}], boltLength: 25})).toThrow(/--bolt-length/);
+  });
+});
