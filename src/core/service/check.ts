@@ -152,10 +152,15 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
   if (load.cyclic) {
     const se = enduranceStrength(input.boltGrade, d);
     const seValue = se?.value ?? vdiThreadEndurance(d);
-    const seSource = se?.source ?? {source: `no Shigley Table 8-17 value for grade ${input.boltGrade}: the VDI 2230 thread endurance limit used instead (from memory)`, kind: 'memory' as const};
+    const seSource = se?.source ?? {
+      source: `no Shigley Table 8-17 value for grade ${input.boltGrade}: the VDI 2230 thread endurance limit (an amplitude limit, from memory) is compared with the alternating stress directly instead of a Goodman line`,
+      kind: 'memory' as const,
+    };
     const f = threadFatigue({C, pMin: load.min, pMax: load.max, preload: FiHigh, stressArea: At, se: seValue, seSource, sut, sp, d});
-    fatigue = {alternatingStress: f.alternatingStress, meanStress: f.meanStress, enduranceStrength: f.enduranceStrength, enduranceSource: f.enduranceSource.source, goodman: f.goodman, yieldCheck: f.yieldCheck, vdiEndurance: f.vdiEndurance, vdiFactor: f.vdiFactor};
-    factors.fatigue = f.goodman;
+    // Without a Table 8-17 value the VDI limit already is the permissible amplitude: its factor replaces Goodman.
+    const goodman = se ? f.goodman : f.vdiFactor;
+    fatigue = {alternatingStress: f.alternatingStress, meanStress: f.meanStress, enduranceStrength: f.enduranceStrength, enduranceSource: f.enduranceSource.source, goodman, yieldCheck: f.yieldCheck, vdiEndurance: f.vdiEndurance, vdiFactor: f.vdiFactor};
+    factors.fatigue = goodman;
     if (clampUnderLoad <= 0) notes.push('The joint opens under the largest load: the fatigue figures assume it stays closed and are not conservative.');
   }
 

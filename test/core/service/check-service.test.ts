@@ -77,3 +77,12 @@ describe('checkService on any reasonable input', () => {
     expect(() => run({...M12_NUT}, {clamp: [{thickness: 30, material: 'steel'}], boltLength: 25})).toThrow(/--bolt-length/);
   });
 });
+
+describe('fatigue without a Shigley Table 8-17 row', () => {
+  it('A2-70 compares the VDI 2230 thread endurance limit with the alternating stress (from memory)', () => {
+    const s = run({thread: 'M12x1.75', boltGrade: 'A2-70', internal: 'nut', nutClass: '8', engagement: 10}, {clamp: [{thickness: 30, material: 'steel'}], serviceLoad: {min: 0, max: 8000}});
+    expect(s.fatigue?.enduranceStrength).toBeCloseTo(0.85 * (150 / 12 + 45), 6);
+    expect(s.factors.fatigue).toBeCloseTo(s.fatigue!.vdiFactor, 9);
+    expect(s.fatigue?.enduranceSource).toMatch(/no Shigley Table 8-17 value/);
+  });
+});
