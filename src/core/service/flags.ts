@@ -39,6 +39,7 @@ function len(u: UnitSystem | undefined, x: number): string {
   return u === 'us' ? `${toDisplay(x, 'length', 'us').toFixed(2)} in` : `${x.toFixed(0)} mm`;
 }
 
+/** `joint-separates` (fail): clamp load left under the largest load <= 0 N, i.e. separation factor <= 1 (Shigley 9th ed. Eq. 8-30). */
 export function jointSeparates(c: ServiceFlagContext): Flag | undefined {
   if (c.clampUnderLoad > 0) return undefined;
   return {
@@ -49,6 +50,7 @@ export function jointSeparates(c: ServiceFlagContext): Flag | undefined {
   };
 }
 
+/** `fatigue-low`: Goodman factor < 1 fails (Shigley 9th ed. Eq. 8-45); Goodman or VDI 2230 endurance factor < 1.2 is a watch (from memory). */
 export function fatigueLow(c: ServiceFlagContext): Flag | undefined {
   const f = c.fatigue;
   if (!f || (f.goodman >= FATIGUE_WATCH && f.vdiFactor >= FATIGUE_WATCH)) return undefined;
@@ -61,6 +63,7 @@ export function fatigueLow(c: ServiceFlagContext): Flag | undefined {
   };
 }
 
+/** `bearing-pressure-high` (fail): surface pressure (MPa) above the part's limiting pressure p_G (VDI 2230 Part 1). */
 export function bearingPressureHigh(c: ServiceFlagContext): Flag | undefined {
   const b = c.bearing;
   if (!b || b.pressure <= b.limit) return undefined;
@@ -72,6 +75,7 @@ export function bearingPressureHigh(c: ServiceFlagContext): Flag | undefined {
   };
 }
 
+/** `slips`: clamp load left / clamp load needed (F_Q / mu_T, VDI 2230 R12/2) below 1 fails, below 1.2 is a watch (from memory). */
 export function slips(c: ServiceFlagContext): Flag | undefined {
   const s = c.slip;
   if (!s || s.factor >= SLIP_WATCH) return undefined;
