@@ -2,7 +2,7 @@
  * The live results beside the inputs: every number from the core's CheckResult,
  * with its unit, plus the margin gauge and the engagement scale.
  */
-import {limitsUsedText} from '../../core/joint/measured.js';
+import {limitsUsedText} from '../../../core/joint/measured.js';
 import React from 'react';
 import {Lines, type Line} from '../../components/lines.js';
 import type {CheckResult} from '../../../core/joint/result.js';
