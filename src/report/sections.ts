@@ -170,7 +170,12 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
       title: `First engaged thread (carries ${pct(result.firstThreadShare)} of ${q(result.boltLoad, 'force', f)})`,
       rows: [
         {label: 'Axial normal stress', value: q(s.axial, 'stress', f)},
-        {label: 'Root bending stress', value: q(s.bending, 'stress', f)},
+        {
+          label: 'Root bending stress',
+          value: q(s.bending, 'stress', f),
+          note: `tooth cantilever, ${result.geometry.spec.family === 'unified' || result.geometry.spec.family === 'metric' ? '60 deg' : result.geometry.spec.family} profile (root width from memory)` +
+            (s.bendingSquareThread !== undefined ? `; the square-thread formula 6F/(pi dr p) gives ${q(s.bendingSquareThread, 'stress', f)}` : ''),
+        },
         {label: 'Tangential shear stress', value: q(s.shear, 'stress', f)},
         {label: 'Body torsion stress', value: q(s.torsion, 'stress', f)},
         {label: 'Thread bearing stress', value: q(s.bearing, 'stress', f)},

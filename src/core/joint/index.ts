@@ -24,6 +24,7 @@ export {resolveJoint} from './resolve.js';
 export const SOURCES: readonly string[] = [
   'VDI 2230 Part 1: tightening torque, thread torque, permissible assembly preload (friction as defined in ISO 16047)',
   'Shigley, Mechanical Engineering Design, 9th ed., section 8-2, Eqs. 8-7 to 8-12 and p. 419 (first thread 0.38 of the load); Eq. 5-14 (von Mises)',
+  'Root bending: tooth cantilever 6 F h/(pi dr (w p)^2) with root widths w per profile (R. L. Norton, Machine Design: An Integrated Approach, 4th ed., chapter "Screws and Fasteners"; from memory); the square-thread value 6F/(pi dr p), Shigley Eq. 8-11, beside it',
   'Spring-chain load share of the Sopwith (1948) / Yamamoto (1980) type, calibrated to the 0.38 first-thread share',
   'FED-STD-H28/2B shear areas and Formula 1 with J (also Machinery\'s Handbook, "length of engagement"), least-material limits',
   'Alexander (1977), as used in VDI 2230 Part 1: C1, C2, C3 factors (from memory)',
@@ -92,9 +93,9 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   // Stresses at the largest bolt load: max preload plus the full service load (conservative).
   const boltLoad = t.preload.max + input.serviceLoad;
   const threadTorqueNmm = t.threadTorque * 1000;
-  const root = rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1});
+  const root = rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1, family: g.spec.family});
   const shank = shankStresses(boltLoad, threadTorqueNmm, g.stressArea, stressDiameter(section));
-  const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare);
+  const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare, g.spec.family, g.pitchDiameter);
 
   // Stripping at the least-material limits.
   const limits: StrippingLimits = {
@@ -133,7 +134,10 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       threadTorque: t.threadTorque,
     },
     stress: {
-      firstThread: {axial: root.axial, bending: root.bending, shear: root.shear, torsion: root.torsion, bearing: root.bearing, vonMises: root.vonMises},
+      firstThread: {
+        axial: root.axial, bending: root.bending, shear: root.shear, torsion: root.torsion, bearing: root.bearing, vonMises: root.vonMises,
+        bendingSquareThread: root.bendingSquareThread, vonMisesSquareThread: rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1}).vonMises,
+      },
       shank,
     },
     loadShare,

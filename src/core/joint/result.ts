@@ -26,6 +26,14 @@ export interface StressSet {
   vonMises: number;
 }
 
+/** The first thread's stresses: the profile-aware set plus the square-thread textbook values beside it. */
+export interface FirstThreadStressSet extends StressSet {
+  /** Square-thread cantilever 6 F1/(pi dr p) (Shigley 9th ed. Eq. 8-11), MPa: the textbook value, exact for square threads only (always set by checkJoint). */
+  bendingSquareThread?: number;
+  /** The von Mises built on bendingSquareThread, MPa (always set by checkJoint). */
+  vonMisesSquareThread?: number;
+}
+
 export interface StrippingSide {
   /** Stripping force, N. */
   force: number;
@@ -64,7 +72,8 @@ export interface CheckResult {
     threadTorque: number;
   };
   stress: {
-    firstThread: StressSet;
+    /** `bending` is profile-aware (root width per profile, src/core/thread-stress.ts); the von Mises is built on it. */
+    firstThread: FirstThreadStressSet;
     /** Threaded body on d0 = (d2 + d3)/2 at max preload + service load with the full thread torque,
      *  elastic torsion 16T/(pi d0^3): higher than assemblyVonMises, which uses VDI's plastic modulus. */
     shank: {axial: number; torsion: number; vonMises: number};

@@ -66,7 +66,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
   const body = bodyStresses(F, raise, g.rootDiameter, compression);
   const engaged = input.nutLength / g.pitch;
   const share = engaged >= SHARE_THREADS ? FIRST_THREAD_SHARE : Math.min(1, Math.max(FIRST_THREAD_SHARE, 1 / engaged));
-  const root = threadRootStresses({load: F, torque: raise, rootDiameter: g.rootDiameter, meanDiameter: g.meanDiameter, pitch: g.pitch, share, threads: 1, compression});
+  const root = threadRootStresses({load: F, torque: raise, rootDiameter: g.rootDiameter, meanDiameter: g.meanDiameter, pitch: g.pitch, share, threads: 1, compression, family: g.spec.family});
 
   const strip = stripping({
     load: F, major: g.major, nutMinor: g.nutMinorDiameter, pitch: g.pitch, nutLength: input.nutLength,
@@ -93,7 +93,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     stress: {
       body: {axial: body.axial, torsion: body.torsion, vonMises: body.vonMises},
       firstThread: {
-        bearing: root.bearing, bending: root.bending, shear: root.shear, transverseShear: root.transverseShear,
+        bearing: root.bearing, bending: root.bending, bendingSquareThread: root.bendingSquareThread, shear: root.shear, transverseShear: root.transverseShear,
         axial: root.axial, torsion: root.torsion, vonMises: root.vonMises, maxShear: root.maxShear, principal: root.principal,
         vonMisesTextbook: root.vonMisesTextbook, maxShearTextbook: root.maxShearTextbook, principalTextbook: root.principalTextbook, share,
       },

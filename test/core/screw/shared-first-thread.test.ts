@@ -60,7 +60,7 @@ describe('first-thread stresses: screw and joint give identical components for t
     }));
     const s = threadRootStresses({
       load: r.boltLoad, torque: r.tightening.threadTorque * 1000, rootDiameter: r.geometry.minorDiameterExternal,
-      meanDiameter: r.geometry.pitchDiameter, pitch: r.geometry.pitch, share: r.firstThreadShare, threads: 1, compression: false,
+      meanDiameter: r.geometry.pitchDiameter, pitch: r.geometry.pitch, share: r.firstThreadShare, threads: 1, compression: false, family: 'metric',
     });
     for (const k of KEYS) expect(r.stress.firstThread[k], k).toBe(s[k]);
   });
