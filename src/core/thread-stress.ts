@@ -49,6 +49,19 @@ export function cantileverRootBending(f1: number, rootDiameter: number, nt: numb
   return (6 * f1 * arm) / (Math.PI * rootDiameter * nt * (width * pitch) ** 2);
 }
 
+/**
+ * What the first-thread von Mises is, in shop words, for the reports and the workbench readout
+ * (the reading of Shigley 9th ed. p. 419's nominal first-thread stresses; VDI 2230 Part 1 judges a
+ * tightened bolt by its assembly utilisation and the stripping check, not by the thread-root peak).
+ */
+export const FIRST_THREAD_VON_MISES_NOTE =
+  'Elastic peak estimate at the root of the first engaged thread. Local yielding there is normal in a tightened bolt and is not the failure criterion; the margins that decide are stripping, bolt-breaks-first and the tightening utilisation.';
+/** The same in a few words, for one line beside the number (about 50 characters). */
+export const FIRST_THREAD_VON_MISES_SHORT = 'elastic peak: local yield here is normal, not failure';
+/** The power-screw form: the same reading, with the screw's deciding checks. */
+export const SCREW_FIRST_THREAD_NOTE =
+  'This is an elastic peak estimate at the root of the first engaged thread; local yielding there is not the failure criterion by itself (the load spreads to the next threads); the checks that decide are thread stripping, the nut bearing pressure and, in compression, buckling.';
+
 /** Share of the load and the torque carried by the first thread when 6 or more threads are engaged
  *  (Shigley 9th ed., section 8-2, p. 419: 0.38 of the load on the first thread). */
 export const FIRST_THREAD_SHARE_LONG = 0.38;

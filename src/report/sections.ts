@@ -7,7 +7,7 @@
 import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {Flag, Range} from '../core/types.js';
-import {flagsInUnits, notesInUnits} from '../core/joint/index.js';
+import {FIRST_THREAD_VON_MISES_NOTE, FIRST_THREAD_VON_MISES_SHORT, flagsInUnits, notesInUnits} from '../core/joint/index.js';
 import {CONVERSION, formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../core/units.js';
 import {limitsSides, limitsSummary} from '../core/threads/limits-provenance.js';
 
@@ -179,7 +179,7 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
         {label: 'Tangential shear stress', value: q(s.shear, 'stress', f)},
         {label: 'Body torsion stress', value: q(s.torsion, 'stress', f)},
         {label: 'Thread bearing stress', value: q(s.bearing, 'stress', f)},
-        {label: 'von Mises equivalent', value: q(s.vonMises, 'stress', f)},
+        {label: 'von Mises equivalent', value: q(s.vonMises, 'stress', f), note: FIRST_THREAD_VON_MISES_SHORT},
         {label: 'Shank von Mises', value: q(result.stress.shank.vonMises, 'stress', f)},
         {label: 'Load share per thread', value: shareList(result.loadShare), note: 'loaded face first'},
       ],
@@ -204,7 +204,7 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
         {
           label: 'First-thread von Mises / yield',
           value: `bolt ${ratio(m.firstThreadYieldBolt)}, ${internalSide} ${ratio(m.firstThreadYieldInternal)}`,
-          note: 'above 1.00: local yield at the thread root',
+          note: `above 1.00: local yield at the thread root. ${result.stress.firstThreadNote ?? FIRST_THREAD_VON_MISES_NOTE}`,
         },
       ],
     },

@@ -10,6 +10,7 @@ import {JointInputError} from './errors.js';
 import {lengthText, resolveJoint, resolveNotes, type ResolvedJoint} from './resolve.js';
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
+import {FIRST_THREAD_VON_MISES_NOTE} from '../thread-stress.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
@@ -20,6 +21,7 @@ export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputD
 export type {CheckResult} from './result.js';
 export {JointInputError} from './errors.js';
 export {resolveJoint} from './resolve.js';
+export {FIRST_THREAD_VON_MISES_NOTE, FIRST_THREAD_VON_MISES_SHORT} from '../thread-stress.js';
 
 export const SOURCES: readonly string[] = [
   'VDI 2230 Part 1: tightening torque, thread torque, permissible assembly preload (friction as defined in ISO 16047)',
@@ -139,6 +141,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
         bendingSquareThread: root.bendingSquareThread, vonMisesSquareThread: rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1}).vonMises,
       },
       shank,
+      firstThreadNote: FIRST_THREAD_VON_MISES_NOTE,
     },
     loadShare,
     firstThreadShare: firstShare,

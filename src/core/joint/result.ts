@@ -74,6 +74,8 @@ export interface CheckResult {
   stress: {
     /** `bending` is profile-aware (root width per profile, src/core/thread-stress.ts); the von Mises is built on it. */
     firstThread: FirstThreadStressSet;
+    /** What the first-thread von Mises means and what decides instead (FIRST_THREAD_VON_MISES_NOTE); always set by checkJoint. */
+    firstThreadNote?: string;
     /** Threaded body on d0 = (d2 + d3)/2 at max preload + service load with the full thread torque,
      *  elastic torsion 16T/(pi d0^3): higher than assemblyVonMises, which uses VDI's plastic modulus. */
     shank: {axial: number; torsion: number; vonMises: number};

@@ -5,7 +5,7 @@
  */
 import type {Flag} from '../types.js';
 import type {ScrewResult} from './result.js';
-import {LONG_ENGAGEMENT_THREADS} from '../thread-stress.js';
+import {LONG_ENGAGEMENT_THREADS, SCREW_FIRST_THREAD_NOTE} from '../thread-stress.js';
 
 export const WATCH_MARGIN = {stripping: 2, buckling: 2, yield: 1.5} as const;
 /** Self-locking with f sec(alpha) below this multiple of tan(lambda) is marked marginal (common practice, no source). */
@@ -92,9 +92,9 @@ export function screwFlags(c: FlagContext): Flag[] {
   const sy = r.screw.yield;
   const vm = r.stress.firstThread.vonMises;
   if (vm >= sy) {
-    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`, summary: `First thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`});
+    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`});
   } else if (sy / vm < WATCH_MARGIN.yield) {
-    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${f0(vm)} MPa is ${f2(sy / vm)} times below the screw yield ${f0(sy)} MPa`, summary: `First thread root ${f0(vm)} MPa, yield ${f0(sy)} MPa only ${f2(sy / vm)} times it`});
+    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${f0(vm)} MPa is ${f2(sy / vm)} times below the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa, yield ${f0(sy)} MPa only ${f2(sy / vm)} times it`});
   }
   const b = r.buckling;
   if (b.checked && b.criticalLoad !== null && b.margin !== null) {
