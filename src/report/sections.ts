@@ -202,7 +202,13 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
         {label: 'Full thread engaged', value: `${q(st.effectiveEngagement, 'length', f)} (${formatNumber(st.engagedThreads, 2)} threads)`},
         {label: 'Bolt thread strips at', value: q(st.external.force, 'force', f), note: `shear area ${area(st.external.shearArea, f)} x ${q(st.external.shearStrength, 'stress', f)}`},
         {label: `The ${internalSide} strips at`, value: q(st.internal.force, 'force', f), note: `shear area ${area(st.internal.shearArea, f)} x ${q(st.internal.shearStrength, 'stress', f)}`},
-        {label: 'Bolt breaks at', value: q(st.boltBreakForce, 'force', f), note: 'stress area x Rm'},
+        st.boltBreakForceUpper !== undefined
+          ? {
+              label: 'Bolt breaks at',
+              value: `${q(st.boltBreakForce, 'force', f)} to ${q(st.boltBreakForceUpper, 'force', f)}`,
+              note: `stress area x Rm,min to x Rm,max; ${result.materials.bolt.rmUpperSource ?? ''}`,
+            }
+          : {label: 'Bolt breaks at', value: q(st.boltBreakForce, 'force', f), note: 'stress area x Rm'},
         {label: 'Weaker thread', value: st.weaker === 'external' ? 'bolt thread' : internalSide},
         {label: 'Required engagement, FED-STD-H28', value: q(st.requiredEngagement.fedStd, 'length', f), note: `Formula 1 with J = ${ratio(st.fedStd.j)}`},
         {label: 'Required engagement, Alexander', value: q(st.requiredEngagement.alexander, 'length', f), note: `as in VDI 2230, RS = ${ratio(st.alexander.rs)}`},
@@ -212,7 +218,13 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
       title: 'Margins',
       rows: [
         {label: 'Stripping margin', value: ratio(m.stripping), note: `weaker strip force / largest load; required ${ratio(input.requiredMargin)}`},
-        {label: 'Bolt breaks first', value: ratio(m.boltBreaksFirst), note: 'weaker strip force / bolt break force; 1.00 or more: the bolt breaks first'},
+        m.boltBreaksFirstMinStrength !== undefined
+          ? {
+              label: 'Bolt breaks first',
+              value: `${ratio(m.boltBreaksFirst)} at Rm,max (${ratio(m.boltBreaksFirstMinStrength)} at Rm,min)`,
+              note: 'weaker strip force / bolt break force; 1.00 or more at Rm,max: even the strongest bolt of the grade breaks first (VDI 2230 Part 1 uses Rm,max, from memory)',
+            }
+          : {label: 'Bolt breaks first', value: ratio(m.boltBreaksFirst), note: 'weaker strip force / bolt break force; 1.00 or more: the bolt breaks first'},
         {
           label: 'First-thread von Mises / yield',
           value: `bolt ${ratio(m.firstThreadYieldBolt)}, ${internalSide} ${ratio(m.firstThreadYieldInternal)}`,

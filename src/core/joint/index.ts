@@ -11,6 +11,7 @@ import {lengthText, resolveJoint, resolveNotes, type ResolvedJoint} from './reso
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
 import {FIRST_THREAD_VON_MISES_NOTE} from '../thread-stress.js';
+import {upperTensileStrength} from '../materials/bolt-upper-strength.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
 import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './flags.js';
@@ -30,6 +31,7 @@ export const SOURCES: readonly string[] = [
   'Spring-chain load share of the Sopwith (1948) / Yamamoto (1980) type, calibrated to the 0.38 first-thread share',
   'FED-STD-H28/2B shear areas and Formula 1 with J (also Machinery\'s Handbook, "length of engagement"), least-material limits',
   'Alexander (1977), as used in VDI 2230 Part 1: C1, C2, C3 factors (from memory)',
+  'Bolt-breaks-first at the upper bolt strength Rm,max, as VDI 2230 Part 1 section 5.5.5 does (from memory); the margin at Rm,min is shown beside it',
 ];
 
 /** Full thread engaged, mm: the engaged length less the chamfer, cut to the nut height or the blind hole's full thread. */
@@ -111,7 +113,10 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const asN = internalShearAreaPerMm(limits) * le;
   const externalForce = r.bolt.shear * asS;
   const internalForce = r.internal.shear * asN;
-  const boltBreakForce = g.stressArea * r.bolt.rm;
+  const boltBreakForceMin = g.stressArea * r.bolt.rm;
+  // VDI 2230 Part 1 minimum engagement: the strongest bolt the grade allows must still break first (Rm,max; from memory).
+  const upper = upperTensileStrength(r.bolt.id, r.bolt.rm, g.nominal);
+  const boltBreakForce = g.stressArea * upper.rm;
   const weaker = externalForce <= internalForce ? 'external' : 'internal';
   const weakerForce = Math.min(externalForce, internalForce);
   const fed = fedStdEngagement(limits, g.stressArea, r.bolt.rm, r.internal.rm);
@@ -120,7 +125,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const result: CheckResult = {
     geometry: g,
     materials: {
-      bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance},
+      bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance, rmUpper: upper.rm, rmUpperSource: upper.source},
       internal: {id: r.internal.id, name: r.internal.name, rm: r.internal.rm, shear: r.internal.shear, provenance: r.internal.provenance},
     },
     tightening: {
@@ -150,7 +155,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     stripping: {
       external: {force: externalForce, shearArea: asS, shearStrength: r.bolt.shear},
       internal: {force: internalForce, shearArea: asN, shearStrength: r.internal.shear},
-      boltBreakForce,
+      boltBreakForce: boltBreakForceMin,
+      boltBreakForceUpper: boltBreakForce,
       weaker,
       requiredEngagement: {fedStd: fed.required, alexander: alex.required},
       requiredEngagedLength: {fedStd: fed.required + input.chamfer, alexander: alex.required + input.chamfer},
@@ -164,6 +170,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     margin: {
       stripping: weakerForce / boltLoad,
       boltBreaksFirst: weakerForce / boltBreakForce,
+      boltBreaksFirstMinStrength: weakerForce / boltBreakForceMin,
       firstThreadYieldBolt: root.vonMises / r.bolt.rp,
       firstThreadYieldInternal: internalVm / r.internal.yield,
     },
@@ -186,7 +193,7 @@ function flagContext(result: CheckResult, input: JointInput, units: UnitSystem):
     serviceLoad: input.serviceLoad,
     weaker: st.weaker,
     weakerForce: Math.min(st.external.force, st.internal.force),
-    boltBreakForce: st.boltBreakForce,
+    boltBreakForce: st.boltBreakForceUpper ?? st.boltBreakForce,
     requiredMargin: input.requiredMargin,
     engagedThreads: st.engagedThreads,
     firstShare: result.firstThreadShare,

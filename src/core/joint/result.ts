@@ -47,7 +47,8 @@ export interface CheckResult {
   geometry: ThreadGeometry;
   /** Resolved materials with their provenance, for display and the report. */
   materials: {
-    bolt: {id: string; name: string; rm: number; rp: number; shear: number; provenance: Provenance};
+    /** rm is the minimum tensile strength; rmUpper the upper one used for bolt-breaks-first, with its source (always set by checkJoint). */
+    bolt: {id: string; name: string; rm: number; rp: number; shear: number; provenance: Provenance; rmUpper?: number; rmUpperSource?: string};
     internal: {id: string; name: string; rm: number; shear: number; provenance: Provenance};
   };
   tightening: {
@@ -94,8 +95,10 @@ export interface CheckResult {
   stripping: {
     external: StrippingSide;
     internal: StrippingSide;
-    /** Bolt break force As x Rm, N. */
+    /** Bolt break force at the minimum strength As x Rm,min, N. */
     boltBreakForce: number;
+    /** Bolt break force at the upper strength As x Rm,max (materials.bolt.rmUpper), N: what bolt-breaks-first uses. */
+    boltBreakForceUpper?: number;
     weaker: 'external' | 'internal';
     /** Required effective engagement so the bolt breaks first, mm. */
     requiredEngagement: {fedStd: number; alexander: number};
@@ -127,8 +130,10 @@ export interface CheckResult {
   margin: {
     /** Weaker thread's stripping force / largest load it can see. */
     stripping: number;
-    /** Weaker stripping force / bolt break force. */
+    /** Weaker stripping force / bolt break force at the upper strength Rm,max (VDI 2230 Part 1, from memory). */
     boltBreaksFirst: number;
+    /** The same at the minimum strength Rm,min (optional in the type; always set by checkJoint). */
+    boltBreaksFirstMinStrength?: number;
     /** First-thread von Mises / yield, bolt and internal part. */
     firstThreadYieldBolt: number;
     firstThreadYieldInternal: number;
