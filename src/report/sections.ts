@@ -107,7 +107,11 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
     if (input.nutFlats !== undefined) rows.push({label: 'Nut width across flats', value: q(input.nutFlats, 'length', f)});
   }
   rows.push({label: 'Engaged length', value: q(input.engagement, 'length', f), note: 'from the loaded face, including the chamfer'});
-  rows.push({label: 'Countersink or chamfer', value: q(input.chamfer, 'length', f)});
+  rows.push(
+    result.stripping.engagementLoss !== undefined && result.stripping.engagementLoss !== input.chamfer
+      ? {label: 'Countersink or chamfer', value: q(result.stripping.engagementLoss, 'length', f), note: 'the standard nut countersinks (see the notes)'}
+      : {label: 'Countersink or chamfer', value: q(input.chamfer, 'length', f)},
+  );
   if (input.internal === 'tapped') {
     // Without --hole-depth nothing says the hole is through: say what was assumed (tapwright repair reads the same joint as blind).
     rows.push(

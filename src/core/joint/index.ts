@@ -34,14 +34,24 @@ export const SOURCES: readonly string[] = [
   'Bolt-breaks-first at the upper bolt strength Rm,max, as VDI 2230 Part 1 section 5.5.5 does (from memory); the margin at Rm,min is shown beside it',
 ];
 
-/** Full thread engaged, mm: the engaged length less the chamfer, cut to the nut height or the blind hole's full thread. */
-export function effectiveEngagement(input: JointInput, pitch: number, nutHeight: number | undefined): number {
+/**
+ * Thread length lost at the faces, mm: the chamfer given; for a nut without one, the standard
+ * countersink on the loaded face, and on the far face too when the bolt passes through the nut
+ * (`countersink` per face from resolveJoint: ISO 4032 da max / ASME B18.2.2, 120 deg, from memory).
+ */
+export function engagementLoss(input: JointInput, nut: {height: number; countersink?: number} | undefined): number {
+  if (input.chamfer > 0 || input.internal !== 'nut' || !nut?.countersink) return input.chamfer;
+  return nut.countersink * (input.engagement >= nut.height - 1e-9 ? 2 : 1);
+}
+
+/** Full thread engaged, mm: the engaged length less the chamfer (or a nut's countersinks), cut to the nut height or the blind hole's full thread. */
+export function effectiveEngagement(input: JointInput, pitch: number, nutHeight: number | undefined, loss: number = input.chamfer): number {
   let usable = input.engagement;
   if (input.internal === 'nut' && nutHeight !== undefined) usable = Math.min(usable, nutHeight);
   if (input.internal === 'tapped' && input.holeDepth !== undefined) {
     usable = Math.min(usable, input.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * pitch);
   }
-  return Math.max(0, usable - input.chamfer);
+  return Math.max(0, usable - loss);
 }
 
 /** Check a joint. Throws JointInputError (with the field at fault) when it cannot be computed. */
@@ -76,7 +86,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   });
 
   // Engagement and load share.
-  const le = effectiveEngagement(input, P, r.nut?.height);
+  const loss = engagementLoss(input, r.nut);
+  const le = effectiveEngagement(input, P, r.nut?.height, loss);
   const engagedThreads = le / P;
   const beta = chainBeta({
     nominal: g.nominal,
@@ -159,7 +170,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       boltBreakForceUpper: boltBreakForce,
       weaker,
       requiredEngagement: {fedStd: fed.required, alexander: alex.required},
-      requiredEngagedLength: {fedStd: fed.required + input.chamfer, alexander: alex.required + input.chamfer},
+      requiredEngagedLength: {fedStd: fed.required + loss, alexander: alex.required + loss},
+      engagementLoss: loss,
       effectiveEngagement: le,
       engagedThreads,
       limitsUsed: 'worst-case',
@@ -174,6 +186,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       firstThreadYieldBolt: root.vonMises / r.bolt.rp,
       firstThreadYieldInternal: internalVm / r.internal.yield,
     },
+    ...(r.nut?.matchesBolt !== undefined ? {nutMatchesBolt: r.nut.matchesBolt} : {}),
     flags: [],
     notes: [...r.notes, ...g.notes],
     sources: [...SOURCES],
@@ -194,6 +207,8 @@ function flagContext(result: CheckResult, input: JointInput, units: UnitSystem):
     weaker: st.weaker,
     weakerForce: Math.min(st.external.force, st.internal.force),
     boltBreakForce: st.boltBreakForceUpper ?? st.boltBreakForce,
+    boltBreakForceMin: st.boltBreakForce,
+    ...(result.nutMatchesBolt ? {matchingNut: true} : {}),
     requiredMargin: input.requiredMargin,
     engagedThreads: st.engagedThreads,
     firstShare: result.firstThreadShare,

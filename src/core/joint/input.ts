@@ -54,6 +54,8 @@ export const JointInputSchema = z.object({
   parentShear: z.number().min(10).max(1500).optional(),
   /** Nut property class (ISO 898-2, e.g. "8", "10"; or a SAE J995 grade). */
   nutClass: z.string().min(1).max(20).optional(),
+  /** Inch nut style for the standard dimensions (ASME B18.2.2): hex (default) or heavy hex. Metric nuts are ISO 4032. */
+  nutStyle: z.enum(['hex', 'heavy-hex']).optional(),
   /** Nut height m, mm. */
   nutHeight: z.number().min(0.5).max(500).optional(),
   /** Nut width across flats s, mm. */

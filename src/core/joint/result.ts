@@ -105,6 +105,8 @@ export interface CheckResult {
     /** The same as an engaged length to compare with the input engagement (adds the chamfer), mm;
      *  a blind hole also needs the incomplete threads at its bottom below this. */
     requiredEngagedLength?: {fedStd: number; alexander: number};
+    /** Thread length lost at the faces, mm: the chamfer given, or a nut's standard countersinks (always set by checkJoint). */
+    engagementLoss?: number;
     /** Effective (fully formed) engagement used, mm. */
     effectiveEngagement: number;
     /** Engaged full threads (effective engagement / pitch). */
@@ -138,6 +140,8 @@ export interface CheckResult {
     firstThreadYieldBolt: number;
     firstThreadYieldInternal: number;
   };
+  /** Nut only: a nut of the bolt's matching property class at standard height (ISO 898-2 design basis: the bolt breaks first). */
+  nutMatchesBolt?: boolean;
   flags: Flag[];
   /** Plain-language notes on defaults and data used. */
   notes: string[];
