@@ -138,7 +138,14 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt): Row[]
         : (BEARING_WORDS[result.tightening.bearingSource] ?? result.tightening.bearingSource),
   });
   rows.push({label: 'Service load', value: input.serviceLoad > 0 ? q(input.serviceLoad, 'force', f) : 'none'});
-  rows.push({label: 'Scatter factor alphaA', value: ratio(input.scatter), note: input.scatter === 1 ? 'friction range only' : 'FM,max / FM,min'});
+  const spread = result.tightening.preload.min > 0 ? result.tightening.preload.max / result.tightening.preload.min : 1;
+  rows.push({
+    label: 'Scatter factor alphaA',
+    value: ratio(input.scatter),
+    note: input.scatter === 1
+      ? 'friction range only'
+      : `total FM,max / FM,min (VDI 2230 Part 1; it includes the friction scatter, so only the part beyond the friction range is added); preload spread shown ${ratio(spread)}`,
+  });
   rows.push({label: 'Required stripping margin', value: ratio(input.requiredMargin), note: 'on bolt break'});
   return rows;
 }

@@ -84,7 +84,10 @@ export const JointInputSchema = z.object({
   bearingDiameter: z.number().min(1).max(2000).optional(),
   /** External axial service load on the bolt, N. */
   serviceLoad: z.number().min(0).max(1e8).default(0),
-  /** Tightening-method scatter factor alphaA = FMmax/FMmin beyond the friction range (1 = friction range only). */
+  /**
+   * Tightening factor alphaA = FM,max / FM,min in total (VDI 2230 Part 1; it includes the friction
+   * scatter): only the part beyond the friction range's own spread is added (1 = friction range only).
+   */
   scatter: z.number().min(1).max(4).default(1),
   /** Required stripping margin on bolt break (1.0 = the bolt must break first). */
   requiredMargin: z.number().min(0.5).max(5).default(1),
