@@ -74,8 +74,10 @@ export interface FirstThreadInput {
    * (a bolt, a screw that pulls), compression - (a power screw that pushes, Shigley Eq. 8-8).
    */
   force: number;
-  /** Torque carried by the body at the first thread and passed through the thread, N·mm. */
+  /** Torque carried by the body at the first thread, N·mm (and passed through the thread unless `threadTorque` is given). */
   torque: number;
+  /** Torque passed through the thread flanks, N·mm, when it differs from the body torque (a power screw's collar torque does not pass the flanks); default `torque`. */
+  threadTorque?: number;
   /** Root (minor) diameter dr, mm. */
   dr: number;
   /** Mean (pitch) diameter dm, mm. */
@@ -152,7 +154,7 @@ export function bodyRootStresses(force: number, torque: number, dr: number): {ax
  */
 export function firstThreadStresses(i: FirstThreadInput): FirstThreadStresses {
   const f1 = Math.abs(i.force) * i.share;
-  const t1 = i.torque * i.share;
+  const t1 = (i.threadTorque ?? i.torque) * i.share;
   const {axial, torsion} = bodyRootStresses(i.force, i.torque, i.dr);
   const tooth = Math.PI * i.dr * i.nt * i.pitch;
   const bendingSquareThread = (6 * f1) / tooth;

@@ -46,6 +46,8 @@ export interface ThreadRootInput {
   load: number;
   /** Torque in the screw body at the nut, N·mm. */
   torque: number;
+  /** Torque passed through the thread flanks (the thread torque, without the collar), N·mm; default `torque`. */
+  threadTorque?: number;
   rootDiameter: number;
   meanDiameter: number;
   pitch: number;
@@ -93,6 +95,7 @@ export function threadRootStresses(i: ThreadRootInput): ThreadRootStresses {
   const r = firstThreadStresses({
     force: i.compression ? -i.load : i.load, torque: i.torque, dr: i.rootDiameter, dm: i.meanDiameter,
     pitch: i.pitch, share: i.share, nt: i.threads, ...(i.family !== undefined ? {family: i.family} : {}),
+    ...(i.threadTorque !== undefined ? {threadTorque: i.threadTorque} : {}),
   });
   const principal = principalStresses(r.state);
   const principalTextbook = principalStresses(r.textbookState);
