@@ -173,8 +173,9 @@ export function nutDimensions(
  * Default nut class for a bolt grade (ISO 898-2 design basis: a class-N nut serves bolts up to N.8,
  * from memory): an ISO 898-1 class N.M takes the lowest ISO 898-2 regular-nut class of at least N;
  * a SAE J429 bolt takes the SAE J995 nut of its grade (grade 2: the grade 5 nut, the lowest on
- * file). On an inch thread an ISO bolt class takes an inch nut too: up to 9.8 the SAE J995 grade 5
- * nut (120 ksi, about 830 MPa), above it grade 8 (common practice, no source). Undefined when none fits.
+ * file). On an inch thread an ISO bolt class takes an inch nut too: up to 8.8 the SAE J995 grade 5
+ * nut (120 ksi, about 830 MPa), above it grade 8 (150 ksi, about 1030 MPa) (common practice, no
+ * source). Undefined when none fits.
  */
 export function defaultNutClass(boltGrade: string, nominalMm: number, inch: boolean): string | undefined {
   const g = boltGrade.trim().toUpperCase();
@@ -182,7 +183,7 @@ export function defaultNutClass(boltGrade: string, nominalMm: number, inch: bool
   let id: string | undefined;
   if (/^SAE-(5|8)$/.test(g)) id = g;
   else if (g === 'SAE-2') id = 'SAE-5';
-  else if (iso && inch) id = Number(iso[1]) <= 9 ? 'SAE-5' : 'SAE-8';
+  else if (iso && inch) id = Number(iso[1]) <= 8 ? 'SAE-5' : 'SAE-8';
   else if (iso) id = [5, 6, 8, 9, 10, 12].map(String).find(k => Number(k) >= Number(iso[1]));
   return id !== undefined && nutClass(id, nominalMm) ? id : undefined;
 }
@@ -191,15 +192,16 @@ export function defaultNutClass(boltGrade: string, nominalMm: number, inch: bool
  * Whether a nut of class `nutId` is the matching class for bolt grade `boltGrade`: the bolt is
  * then designed to break before the threads strip (ISO 898-2 design basis, Alexander 1977; from
  * memory). ISO: nut class N >= the bolt's first number (thin nuts 04, 05 never); SAE J995 grade 5
- * for J429 grades 2 and 5, grade 8 for all three.
+ * for J429 grades 2 and 5, grade 8 for all three; an ISO bolt in an SAE nut as defaultNutClass
+ * pairs them (grade 5 nut up to class 8.8, grade 8 up to 10.9; common practice, no source).
  */
 export function nutMatchesBolt(nutId: string, boltGrade: string): boolean {
   const n = nutId.trim().toUpperCase();
   const b = boltGrade.trim().toUpperCase();
   const iso = /^(\d{1,2})\.\d$/.exec(b);
   if (/^\d{1,2}$/.test(n) && !n.startsWith('0') && iso) return Number(n) >= Number(iso[1]);
-  if (n === 'SAE-8') return /^SAE-(2|5|8)$/.test(b);
-  if (n === 'SAE-5') return /^SAE-(2|5)$/.test(b);
+  if (n === 'SAE-8') return /^SAE-(2|5|8)$/.test(b) || (iso !== null && Number(iso[1]) <= 10);
+  if (n === 'SAE-5') return /^SAE-(2|5)$/.test(b) || (iso !== null && Number(iso[1]) <= 8);
   return false;
 }
 

@@ -70,6 +70,8 @@ describe('matching nuts: info, not a warning', () => {
     expect(nutMatchesBolt('04', '4.6')).toBe(false);
     expect(nutMatchesBolt('SAE-5', 'SAE-5')).toBe(true);
     expect(nutMatchesBolt('SAE-5', 'SAE-8')).toBe(false);
+    expect(nutMatchesBolt('SAE-5', '8.8')).toBe(true); // the inch default for an ISO 8.8 bolt
+    expect(nutMatchesBolt('SAE-5', '10.9')).toBe(false);
   });
   it('M10 8.8 in an ISO 4032 class-8 nut: short-engagement at info, saying the bolt is designed to break first', () => {
     const r = checkJoint(JointInputSchema.parse({thread: 'M10', boltGrade: '8.8', internal: 'nut', nutClass: '8', engagement: 8.04}));
