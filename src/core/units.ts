@@ -94,16 +94,39 @@ export function acceptedUnits(dimension: Dimension): string {
     .join(', ');
 }
 
-const NUMBER_RE = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:e[+-]?\d+)?)\s*(.*)$/i;
+const NUMBER_RE = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i;
+
+/**
+ * The message for a number written with a comma, or undefined when there is none. A comma
+ * between digits is either a digit group ("5,000" = 5000) or a decimal comma ("5,000" = 5.0);
+ * the two readings differ a thousandfold, so neither is guessed: the message names the field
+ * (when given) and shows both readings. ISO 80000-1:2009 clause 7.3.2 and NIST SP 811 (2008)
+ * section 10.5.3 group digits with a space, never a comma (from memory).
+ */
+export function commaNumberError(raw: string, field?: string): string | undefined {
+  if (!raw.includes(',')) return undefined;
+  const num = /^[+-]?[\d.,]*\d/.exec(raw)?.[0] ?? raw;
+  const grouped = num.replace(/,/g, '');
+  const first = num.indexOf(',');
+  const decimalText = num.slice(0, first) + '.' + num.slice(first + 1).replace(/[,.]/g, '');
+  const decimalValue = Number(decimalText);
+  const decimal = Number.isFinite(decimalValue) ? (Number.isInteger(decimalValue) ? decimalValue.toFixed(1) : String(decimalValue)) : decimalText;
+  const readings = grouped.includes('.') || (num.match(/,/g) ?? []).length > 1 ? `write ${grouped}` : `write ${grouped} or ${decimal}`;
+  const who = field ? `${field}: ` : '';
+  return `${who}${num} has a comma, which may group digits or mark decimals: ${readings} (no commas in numbers)`;
+}
 
 /**
  * Parse a typed quantity into working units.
  * A bare number takes `defaultUnit` (a name from the table), or the working unit when omitted.
- * Fractions of an inch are accepted for lengths ("1/2in", "5/16").
+ * Fractions of an inch are accepted for lengths ("1/2in", "5/16"). A comma is never read as a
+ * decimal point or a digit group: the result is an error naming `field` (see commaNumberError).
  */
-export function parseQuantity(text: string, dimension: Dimension, defaultUnit?: string): Parsed<number> {
+export function parseQuantity(text: string, dimension: Dimension, defaultUnit?: string, field?: string): Parsed<number> {
   const raw = text.trim();
   if (raw === '') return {ok: false, error: 'is empty; type a number'};
+  const comma = commaNumberError(raw, field);
+  if (comma !== undefined) return {ok: false, error: comma};
   let value: number;
   let unitText: string;
   const fraction = /^(\d+)\s*\/\s*(\d+)\s*(.*)$/.exec(raw);
@@ -119,7 +142,7 @@ export function parseQuantity(text: string, dimension: Dimension, defaultUnit?: 
   } else {
     const m = NUMBER_RE.exec(raw);
     if (!m) return {ok: false, error: `"${raw}" is not a number`};
-    value = Number((m[1] ?? '').replace(',', '.'));
+    value = Number(m[1] ?? '');
     unitText = m[2] ?? '';
   }
   if (!Number.isFinite(value)) return {ok: false, error: `"${raw}" is not a finite number`};

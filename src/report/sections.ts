@@ -8,7 +8,7 @@ import {limitsUsedText} from '../core/joint/measured.js';
 import type {CheckResult} from '../core/joint/result.js';
 import type {JointInput} from '../core/joint/input.js';
 import type {Flag, Range} from '../core/types.js';
-import {flagsInUnits, notesInUnits} from '../core/joint/index.js';
+import {FIRST_THREAD_VON_MISES_NOTE, FIRST_THREAD_VON_MISES_SHORT, flagsInUnits, notesInUnits} from '../core/joint/index.js';
 import {CONVERSION, formatNumber, formatQuantity, type Dimension, type UnitSystem} from '../core/units.js';
 import {limitsSides, limitsSummary} from '../core/threads/limits-provenance.js';
 
@@ -115,7 +115,11 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt, hole?:
     if (input.nutFlats !== undefined) rows.push({label: 'Nut width across flats', value: q(input.nutFlats, 'length', f)});
   }
   rows.push({label: 'Engaged length', value: q(input.engagement, 'length', f), note: 'from the loaded face, including the chamfer'});
-  rows.push({label: 'Countersink or chamfer', value: q(input.chamfer, 'length', f)});
+  rows.push(
+    result.stripping.engagementLoss !== undefined && result.stripping.engagementLoss !== input.chamfer
+      ? {label: 'Countersink or chamfer', value: q(result.stripping.engagementLoss, 'length', f), note: 'the standard nut countersinks (see the notes)'}
+      : {label: 'Countersink or chamfer', value: q(input.chamfer, 'length', f)},
+  );
   if (input.internal === 'tapped') {
     // Without --hole-depth nothing says the hole is through: say what was assumed (tapwright repair reads the same joint as blind).
     rows.push(
@@ -153,7 +157,14 @@ export function inputRows(result: CheckResult, input: JointInput, f: Fmt, hole?:
         : (BEARING_WORDS[result.tightening.bearingSource] ?? result.tightening.bearingSource),
   });
   rows.push({label: 'Service load', value: input.serviceLoad > 0 ? q(input.serviceLoad, 'force', f) : 'none'});
-  rows.push({label: 'Scatter factor alphaA', value: ratio(input.scatter), note: input.scatter === 1 ? 'friction range only' : 'FM,max / FM,min'});
+  const spread = result.tightening.preload.min > 0 ? result.tightening.preload.max / result.tightening.preload.min : 1;
+  rows.push({
+    label: 'Scatter factor alphaA',
+    value: ratio(input.scatter),
+    note: input.scatter === 1
+      ? 'friction range only'
+      : `total FM,max / FM,min (VDI 2230 Part 1; it includes the friction scatter, so only the part beyond the friction range is added); preload spread shown ${ratio(spread)}`,
+  });
   rows.push({label: 'Required stripping margin', value: ratio(input.requiredMargin), note: 'on bolt break'});
   return rows;
 }
@@ -162,6 +173,13 @@ function tighteningRow(input: JointInput, f: Fmt): Row {
   if (input.tightening === 'torque' && input.torque !== undefined) return {label: 'Tightening', value: `to torque ${q(input.torque, 'torque', f)}`};
   if (input.tightening === 'preload' && input.preload !== undefined) return {label: 'Tightening', value: `to preload ${q(input.preload, 'force', f)}`};
   return {label: 'Tightening', value: `to ${pct(input.utilisation)} of Rp0.2 (von Mises)`};
+}
+
+/** Which method gave the first-thread share: Shigley's fixed 0.38 from 6 threads, else the chain's rise over it. */
+export function firstShareMethod(result: CheckResult): string {
+  return result.stripping.engagedThreads >= 6
+    ? 'Shigley 0.38 for 6 or more threads'
+    : 'Shigley 0.38 raised by the spring chain for fewer than 6 threads';
 }
 
 /** The result groups, each value with its unit. */
@@ -188,14 +206,24 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
     {
       title: `First engaged thread (carries ${pct(result.firstThreadShare)} of ${q(result.boltLoad, 'force', f)})`,
       rows: [
+        {label: 'First-thread share', value: pct(result.firstThreadShare), note: firstShareMethod(result)},
         {label: 'Axial normal stress', value: q(s.axial, 'stress', f)},
-        {label: 'Root bending stress', value: q(s.bending, 'stress', f)},
+        {
+          label: 'Root bending stress',
+          value: q(s.bending, 'stress', f),
+          note: `tooth cantilever, ${result.geometry.spec.family === 'unified' || result.geometry.spec.family === 'metric' ? '60 deg' : result.geometry.spec.family} profile (root width from memory)` +
+            (s.bendingSquareThread !== undefined ? `; the square-thread formula 6F/(pi dr p) gives ${q(s.bendingSquareThread, 'stress', f)}` : ''),
+        },
         {label: 'Tangential shear stress', value: q(s.shear, 'stress', f)},
         {label: 'Body torsion stress', value: q(s.torsion, 'stress', f)},
         {label: 'Thread bearing stress', value: q(s.bearing, 'stress', f)},
-        {label: 'von Mises equivalent', value: q(s.vonMises, 'stress', f)},
+        {label: 'von Mises equivalent', value: q(s.vonMises, 'stress', f), note: FIRST_THREAD_VON_MISES_SHORT},
         {label: 'Shank von Mises', value: q(result.stress.shank.vonMises, 'stress', f)},
-        {label: 'Load share per thread', value: shareList(result.loadShare), note: 'loaded face first'},
+        {
+          label: 'Load share per thread',
+          value: shareList(result.loadShare),
+          note: 'loaded face first; elastic spring chain for this joint, calibrated only to the 38 % first-thread share of a steel bolt in a steel nut (it gives 38/24/15 % there, the book 38/25/18 %); the stresses above use the first-thread share in the heading',
+        },
       ],
     },
     {
@@ -204,7 +232,13 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
         {label: 'Full thread engaged', value: `${q(st.effectiveEngagement, 'length', f)} (${formatNumber(st.engagedThreads, 2)} threads)`},
         {label: 'Bolt thread strips at', value: q(st.external.force, 'force', f), note: `shear area ${area(st.external.shearArea, f)} x ${q(st.external.shearStrength, 'stress', f)}`},
         {label: `The ${internalSide} strips at`, value: q(st.internal.force, 'force', f), note: `shear area ${area(st.internal.shearArea, f)} x ${q(st.internal.shearStrength, 'stress', f)}`},
-        {label: 'Bolt breaks at', value: q(st.boltBreakForce, 'force', f), note: 'stress area x Rm'},
+        st.boltBreakForceUpper !== undefined
+          ? {
+              label: 'Bolt breaks at',
+              value: `${q(st.boltBreakForce, 'force', f)} to ${q(st.boltBreakForceUpper, 'force', f)}`,
+              note: `stress area x Rm,min to x Rm,max; ${result.materials.bolt.rmUpperSource ?? ''}`,
+            }
+          : {label: 'Bolt breaks at', value: q(st.boltBreakForce, 'force', f), note: 'stress area x Rm'},
         {label: 'Weaker thread', value: st.weaker === 'external' ? 'bolt thread' : internalSide},
         {label: 'Required engagement, FED-STD-H28', value: q(st.requiredEngagement.fedStd, 'length', f), note: `Formula 1 with J = ${ratio(st.fedStd.j)}`},
         {label: 'Required engagement, Alexander', value: q(st.requiredEngagement.alexander, 'length', f), note: `as in VDI 2230, RS = ${ratio(st.alexander.rs)}`},
@@ -214,11 +248,17 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
       title: 'Margins',
       rows: [
         {label: 'Stripping margin', value: ratio(m.stripping), note: `weaker strip force / largest load; required ${ratio(input.requiredMargin)}`},
-        {label: 'Bolt breaks first', value: ratio(m.boltBreaksFirst), note: 'weaker strip force / bolt break force; 1.00 or more: the bolt breaks first'},
+        m.boltBreaksFirstMinStrength !== undefined
+          ? {
+              label: 'Bolt breaks first',
+              value: `${ratio(m.boltBreaksFirst)} at Rm,max (${ratio(m.boltBreaksFirstMinStrength)} at Rm,min)`,
+              note: 'weaker strip force / bolt break force; 1.00 or more at Rm,max: even the strongest bolt of the grade breaks first (VDI 2230 Part 1 uses Rm,max, from memory)',
+            }
+          : {label: 'Bolt breaks first', value: ratio(m.boltBreaksFirst), note: 'weaker strip force / bolt break force; 1.00 or more: the bolt breaks first'},
         {
           label: 'First-thread von Mises / yield',
           value: `bolt ${ratio(m.firstThreadYieldBolt)}, ${internalSide} ${ratio(m.firstThreadYieldInternal)}`,
-          note: 'above 1.00: local yield at the thread root',
+          note: `above 1.00: local yield at the thread root. ${result.stress.firstThreadNote ?? FIRST_THREAD_VON_MISES_NOTE}`,
         },
       ],
     },

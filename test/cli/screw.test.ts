@@ -32,10 +32,10 @@ describe('tapwright screw --json (contract keys, SI)', () => {
     expect(j.stress.body.torsion).toBeCloseTo(6.07317, 4);
     expect(j.stress.firstThread.bearing).toBeCloseTo(-12.90216, 4);
     expect(j.stress.firstThread.bending).toBeCloseTo(41.47123, 4);
-    // shear: tangential, from 0.38 TR (as tapwright check); transverseShear: Eq. 8-12
-    expect(j.stress.firstThread.shear).toBeCloseTo(4.03865, 4);
+    // shear: tangential, from 0.38 of the thread torque (the collar torque does not pass the flanks); transverseShear: Eq. 8-12
+    expect(j.stress.firstThread.shear).toBeCloseTo(2.4588, 4); // thread torque only: 4 x 0.38 x 15 936.95/(pi 28^2 x 4), collar torque excluded
     expect(j.stress.firstThread.transverseShear).toBeCloseTo(20.73562, 4);
-    expect(j.stress.firstThread.vonMises).toBeCloseTo(49.1784, 3);
+    expect(j.stress.firstThread.vonMises).toBeCloseTo(48.8643, 3); // Eq. 5-14 with tzx = 2.4588
     expect(j.stress.firstThread.vonMisesTextbook).toBeCloseTo(48.6784, 3);
     // p = 2F / (pi dm Le) = 12 800 / (pi 30 x 48) = 2.8294 MPa (Shigley 9th ed. Eq. 8-10, all turns)
     expect(j.nut.bearingPressure).toBeCloseTo(2.82942, 4);

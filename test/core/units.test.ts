@@ -11,7 +11,26 @@ describe('units', () => {
     expect(parseQuantity('1/2', 'length')).toEqual({ok: true, value: 12.7});
     const mixed = parseQuantity('1-1/2 in', 'length');
     expect(mixed.ok && mixed.value).toBeCloseTo(38.1, 9);
-    expect(parseQuantity('12,5 mm', 'length')).toEqual({ok: true, value: 12.5});
+  });
+  // ISO 80000-1:2009 clause 7.3.2 and NIST SP 811 (2008) section 10.5.3 (from memory): digits are
+  // grouped with a space, never a comma, and the decimal sign may be a point or a comma. So a comma
+  // is ambiguous, and "5,000lbf" read either way is off a thousandfold: never read, always rejected.
+  it('rejects a comma in a number, naming the field and both readings', () => {
+    const r = parseQuantity('5,000lbf', 'force', undefined, 'service load');
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error).toMatch(/^service load: 5,000 /);
+      expect(r.error).toContain('write 5000 or 5.0');
+    }
+    const p = parseQuantity('23,780lbf', 'force', undefined, '--preload');
+    expect(!p.ok && p.error).toContain('--preload: 23,780');
+    expect(!p.ok && p.error).toContain('write 23780 or 23.78');
+    const d = parseQuantity('1,5', 'length', 'mm');
+    expect(!d.ok && d.error).toContain('write 15 or 1.5');
+    expect(parseQuantity('12,5 mm', 'length').ok).toBe(false);
+    expect(parseQuantity('0,10', 'ratio').ok).toBe(false);
+    const many = parseQuantity('1,234,567 N', 'force');
+    expect(!many.ok && many.error).toContain('write 1234567');
   });
   it('parses torques in N·m and ft-lbf (NIST SP 811: 1 ft·lbf = 1.355818 N·m)', () => {
     expect(parseQuantity('40Nm', 'torque')).toEqual({ok: true, value: 40});

@@ -38,6 +38,13 @@ export interface FlagContext {
   modelRangeNotes: string[];
   bearingEstimated: boolean;
   bearingDiameter: number;
+  /**
+   * A nut of the bolt's matching property class at standard height (ISO 898-2 design basis: the bolt
+   * breaks first; from memory). Lowers short-engagement and the model-only stripping findings to info.
+   */
+  matchingNut?: boolean;
+  /** Bolt break force at the minimum strength As x Rm,min, N (boltBreakForce is at Rm,max). */
+  boltBreakForceMin?: number;
   /** Preload at which the assembly stress reaches the yield (utilisation 1) at the lowest friction, N (optional). */
   yieldPreload?: number;
   /**
@@ -86,8 +93,19 @@ export function stripsAtPreload(c: FlagContext): Flag | undefined {
   };
 }
 
+/** The reason a matching nut is trusted, in one sentence. */
+const MATCHING_NUT = 'A nut of the matching property class at standard height is designed so the bolt breaks first (ISO 898-2 design basis).';
+
 export function shortEngagement(c: FlagContext): Flag | undefined {
   if (c.engagedThreads >= SHORT_ENGAGEMENT_THREADS) return undefined;
+  if (c.matchingNut) {
+    return {
+      code: 'short-engagement',
+      level: 'info',
+      message: `${c.engagedThreads.toFixed(1)} full threads engaged in the nut; the first thread takes about ${pct(c.firstShare)} of the load. ${MATCHING_NUT}`,
+      summary: `${c.engagedThreads.toFixed(1)} threads in a matching nut: bolt designed to break first`,
+    };
+  }
   return {
     code: 'short-engagement',
     level: 'watch',
@@ -98,6 +116,15 @@ export function shortEngagement(c: FlagContext): Flag | undefined {
 
 export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   const ratio = c.weakerForce / c.boltBreakForce;
+  const ratioMin = c.boltBreakForceMin !== undefined ? c.weakerForce / c.boltBreakForceMin : ratio;
+  if (ratio < c.requiredMargin && c.matchingNut && ratioMin >= c.requiredMargin) {
+    return {
+      code: 'strips-before-break',
+      level: 'watch',
+      message: `At the bolt's upper strength the model puts stripping first: ${side(c)} strips at ${force(c, c.weakerForce)}, the strongest bolt of the grade breaks at ${force(c, c.boltBreakForce)} (ratio ${ratio.toFixed(2)}; ${ratioMin.toFixed(2)} at the minimum strength). ${MATCHING_NUT} Use a nut of that class from a known source.`,
+      summary: `Strips first at bolt Rm,max: ${ratio.toFixed(2)} (${ratioMin.toFixed(2)} at Rm,min); matching nut`,
+    };
+  }
   if (ratio < c.requiredMargin) {
     return {
       code: 'strips-before-break',
@@ -109,8 +136,8 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   if (c.effectiveEngagement < c.requiredAlexander) {
     return {
       code: 'strips-before-break',
-      level: 'watch',
-      message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.`,
+      level: c.matchingNut ? 'info' : 'watch',
+      message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.${c.matchingNut ? ` ${MATCHING_NUT}` : ''}`,
       summary: `Alexander/VDI 2230 wants ${len(c, c.requiredAlexander)} full thread; ${len(c, c.effectiveEngagement)} engaged`,
     };
   }
@@ -119,8 +146,8 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   if (c.effectiveEngagement < c.requiredFedStd) {
     return {
       code: 'strips-before-break',
-      level: 'watch',
-      message: `FED-STD-H28 Formula 1 calls for ${len(c, c.requiredFedStd)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged. The stripping forces still put the bolt first (ratio ${ratio.toFixed(2)}), but only because of the shear strengths assumed: confirm them or engage more thread.`,
+      level: c.matchingNut ? 'info' : 'watch',
+      message: `FED-STD-H28 Formula 1 calls for ${len(c, c.requiredFedStd)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged. The stripping forces still put the bolt first (ratio ${ratio.toFixed(2)}), but only because of the shear strengths assumed: confirm them or engage more thread.${c.matchingNut ? ` ${MATCHING_NUT}` : ''}`,
       summary: `FED-STD-H28 wants ${len(c, c.requiredFedStd)} full thread; ${len(c, c.effectiveEngagement)} engaged`,
     };
   }

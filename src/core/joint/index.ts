@@ -10,6 +10,8 @@ import {JointInputError} from './errors.js';
 import {lengthText, resolveJoint, resolveNotes, type ResolvedJoint} from './resolve.js';
 import {stressDiameter, tighten, type ThreadSection} from './tightening.js';
 import {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS, internalRootVonMises, rootStresses, shankStresses} from './thread-stress.js';
+import {FIRST_THREAD_VON_MISES_NOTE} from '../thread-stress.js';
+import {upperTensileStrength} from '../materials/bolt-upper-strength.js';
 import {chainBeta, hexNutArea, longEngagementFirstShare, tappedBodyArea, threadShares} from './load-share.js';
 import {alexander, externalShearAreaPerMm, fedStdEngagement, internalShearAreaPerMm, type StrippingLimits} from './stripping.js';
 import {measuredStrippingLimits} from './measured.js';
@@ -23,23 +25,36 @@ export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputD
 export type {CheckResult} from './result.js';
 export {JointInputError} from './errors.js';
 export {resolveJoint} from './resolve.js';
+export {FIRST_THREAD_VON_MISES_NOTE, FIRST_THREAD_VON_MISES_SHORT} from '../thread-stress.js';
 
 export const SOURCES: readonly string[] = [
   'VDI 2230 Part 1: tightening torque, thread torque, permissible assembly preload (friction as defined in ISO 16047)',
   'Shigley, Mechanical Engineering Design, 9th ed., section 8-2, Eqs. 8-7 to 8-12 and p. 419 (first thread 0.38 of the load); Eq. 5-14 (von Mises)',
+  'Root bending: tooth cantilever 6 F h/(pi dr (w p)^2) with root widths w per profile (R. L. Norton, Machine Design: An Integrated Approach, 4th ed., chapter "Screws and Fasteners"; from memory); the square-thread value 6F/(pi dr p), Shigley Eq. 8-11, beside it',
   'Spring-chain load share of the Sopwith (1948) / Yamamoto (1980) type, calibrated to the 0.38 first-thread share',
   'FED-STD-H28/2B shear areas and Formula 1 with J (also Machinery\'s Handbook, "length of engagement"), least-material limits',
   'Alexander (1977), as used in VDI 2230 Part 1: C1, C2, C3 factors (from memory)',
+  'Bolt-breaks-first at the upper bolt strength Rm,max, as VDI 2230 Part 1 section 5.5.5 does (from memory); the margin at Rm,min is shown beside it',
 ];
 
-/** Full thread engaged, mm: the engaged length less the chamfer, cut to the nut height or the blind hole's full thread. */
-export function effectiveEngagement(input: JointInput, pitch: number, nutHeight: number | undefined): number {
+/**
+ * Thread length lost at the faces, mm: the chamfer given; for a nut without one, the standard
+ * countersink on the loaded face, and on the far face too when the bolt passes through the nut
+ * (`countersink` per face from resolveJoint: ISO 4032 da max / ASME B18.2.2, 120 deg, from memory).
+ */
+export function engagementLoss(input: JointInput, nut: {height: number; countersink?: number} | undefined): number {
+  if (input.chamfer > 0 || input.internal !== 'nut' || !nut?.countersink) return input.chamfer;
+  return nut.countersink * (input.engagement >= nut.height - 1e-9 ? 2 : 1);
+}
+
+/** Full thread engaged, mm: the engaged length less the chamfer (or a nut's countersinks), cut to the nut height or the blind hole's full thread. */
+export function effectiveEngagement(input: JointInput, pitch: number, nutHeight: number | undefined, loss: number = input.chamfer): number {
   let usable = input.engagement;
   if (input.internal === 'nut' && nutHeight !== undefined) usable = Math.min(usable, nutHeight);
   if (input.internal === 'tapped' && input.holeDepth !== undefined) {
     usable = Math.min(usable, input.holeDepth - BLIND_HOLE_INCOMPLETE_PITCHES * pitch);
   }
-  return Math.max(0, usable - input.chamfer);
+  return Math.max(0, usable - loss);
 }
 
 /** Check a joint. Throws JointInputError (with the field at fault) when it cannot be computed. */
@@ -74,7 +89,8 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   });
 
   // Engagement and load share.
-  const le = effectiveEngagement(input, P, r.nut?.height);
+  const loss = engagementLoss(input, r.nut);
+  const le = effectiveEngagement(input, P, r.nut?.height, loss);
   const engagedThreads = le / P;
   const beta = chainBeta({
     nominal: g.nominal,
@@ -95,9 +111,9 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   // Stresses at the largest bolt load: max preload plus the full service load (conservative).
   const boltLoad = t.preload.max + input.serviceLoad;
   const threadTorqueNmm = t.threadTorque * 1000;
-  const root = rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1});
+  const root = rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1, family: g.spec.family});
   const shank = shankStresses(boltLoad, threadTorqueNmm, g.stressArea, stressDiameter(section));
-  const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare);
+  const internalVm = internalRootVonMises(boltLoad, threadTorqueNmm, g.nominal, P, firstShare, g.spec.family, g.pitchDiameter);
 
   // Stripping at the measured diameters where given, the least-material limits elsewhere.
   const asMeasured = measuredStrippingLimits(g, input.measured);
@@ -106,7 +122,10 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const asN = internalShearAreaPerMm(limits) * le;
   const externalForce = r.bolt.shear * asS;
   const internalForce = r.internal.shear * asN;
-  const boltBreakForce = g.stressArea * r.bolt.rm;
+  const boltBreakForceMin = g.stressArea * r.bolt.rm;
+  // VDI 2230 Part 1 minimum engagement: the strongest bolt the grade allows must still break first (Rm,max; from memory).
+  const upper = upperTensileStrength(r.bolt.id, r.bolt.rm, g.nominal);
+  const boltBreakForce = g.stressArea * upper.rm;
   const weaker = externalForce <= internalForce ? 'external' : 'internal';
   const weakerForce = Math.min(externalForce, internalForce);
   const fed = fedStdEngagement(limits, g.stressArea, r.bolt.rm, r.internal.rm);
@@ -115,7 +134,7 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
   const result: CheckResult = {
     geometry: g,
     materials: {
-      bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance},
+      bolt: {id: r.bolt.id, name: r.bolt.name, rm: r.bolt.rm, rp: r.bolt.rp, shear: r.bolt.shear, provenance: r.bolt.provenance, rmUpper: upper.rm, rmUpperSource: upper.source},
       internal: {id: r.internal.id, name: r.internal.name, rm: r.internal.rm, shear: r.internal.shear, provenance: r.internal.provenance},
     },
     tightening: {
@@ -131,8 +150,12 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
       threadTorque: t.threadTorque,
     },
     stress: {
-      firstThread: {axial: root.axial, bending: root.bending, shear: root.shear, torsion: root.torsion, bearing: root.bearing, vonMises: root.vonMises},
+      firstThread: {
+        axial: root.axial, bending: root.bending, shear: root.shear, torsion: root.torsion, bearing: root.bearing, vonMises: root.vonMises,
+        bendingSquareThread: root.bendingSquareThread, vonMisesSquareThread: rootStresses({force: boltLoad, torque: threadTorqueNmm, dr: g.minorDiameterExternal, dm: g.pitchDiameter, pitch: P, share: firstShare, nt: 1}).vonMises,
+      },
       shank,
+      firstThreadNote: FIRST_THREAD_VON_MISES_NOTE,
     },
     loadShare,
     firstThreadShare: firstShare,
@@ -141,10 +164,12 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     stripping: {
       external: {force: externalForce, shearArea: asS, shearStrength: r.bolt.shear},
       internal: {force: internalForce, shearArea: asN, shearStrength: r.internal.shear},
-      boltBreakForce,
+      boltBreakForce: boltBreakForceMin,
+      boltBreakForceUpper: boltBreakForce,
       weaker,
       requiredEngagement: {fedStd: fed.required, alexander: alex.required},
-      requiredEngagedLength: {fedStd: fed.required + input.chamfer, alexander: alex.required + input.chamfer},
+      requiredEngagedLength: {fedStd: fed.required + loss, alexander: alex.required + loss},
+      engagementLoss: loss,
       effectiveEngagement: le,
       engagedThreads,
       limitsUsed: asMeasured.limitsUsed,
@@ -158,9 +183,11 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     margin: {
       stripping: weakerForce / boltLoad,
       boltBreaksFirst: weakerForce / boltBreakForce,
+      boltBreaksFirstMinStrength: weakerForce / boltBreakForceMin,
       firstThreadYieldBolt: root.vonMises / r.bolt.rp,
       firstThreadYieldInternal: internalVm / r.internal.yield,
     },
+    ...(r.nut?.matchesBolt !== undefined ? {nutMatchesBolt: r.nut.matchesBolt} : {}),
     flags: [],
     notes: [...r.notes, ...g.notes],
     sources: input.measured?.overWires !== undefined ? [...SOURCES, WIRE_METHOD_SOURCE] : [...SOURCES],
@@ -180,7 +207,9 @@ function flagContext(result: CheckResult, input: JointInput, units: UnitSystem):
     serviceLoad: input.serviceLoad,
     weaker: st.weaker,
     weakerForce: Math.min(st.external.force, st.internal.force),
-    boltBreakForce: st.boltBreakForce,
+    boltBreakForce: st.boltBreakForceUpper ?? st.boltBreakForce,
+    boltBreakForceMin: st.boltBreakForce,
+    ...(result.nutMatchesBolt ? {matchingNut: true} : {}),
     requiredMargin: input.requiredMargin,
     engagedThreads: st.engagedThreads,
     firstShare: result.firstThreadShare,

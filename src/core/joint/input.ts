@@ -56,6 +56,8 @@ export const JointInputSchema = z.object({
   parentShear: z.number().min(10).max(1500).optional(),
   /** Nut property class (ISO 898-2, e.g. "8", "10"; or a SAE J995 grade). */
   nutClass: z.string().min(1).max(20).optional(),
+  /** Inch nut style for the standard dimensions (ASME B18.2.2): hex (default) or heavy hex. Metric nuts are ISO 4032. */
+  nutStyle: z.enum(['hex', 'heavy-hex']).optional(),
   /** Nut height m, mm. */
   nutHeight: z.number().min(0.5).max(500).optional(),
   /** Nut width across flats s, mm. */
@@ -84,7 +86,10 @@ export const JointInputSchema = z.object({
   bearingDiameter: z.number().min(1).max(2000).optional(),
   /** External axial service load on the bolt, N. */
   serviceLoad: z.number().min(0).max(1e8).default(0),
-  /** Tightening-method scatter factor alphaA = FMmax/FMmin beyond the friction range (1 = friction range only). */
+  /**
+   * Tightening factor alphaA = FM,max / FM,min in total (VDI 2230 Part 1; it includes the friction
+   * scatter): only the part beyond the friction range's own spread is added (1 = friction range only).
+   */
   scatter: z.number().min(1).max(4).default(1),
   /** Required stripping margin on bolt break (1.0 = the bolt must break first). */
   requiredMargin: z.number().min(0.5).max(5).default(1),

@@ -25,6 +25,13 @@ export interface ChainInput {
 }
 
 /**
+ * What the chain is calibrated to, and what not: ONLY the first thread's 38 % share (Shigley,
+ * Mechanical Engineering Design, 9th ed., section 8-2, p. 419). A one-parameter elastic chain decays
+ * geometrically from the loaded face, so for the reference joint with 10 threads it gives about
+ * 38 / 23.6 / 14.6 % for the first three threads, not the book's 38 / 25 / 18 % (measured shares,
+ * with a slower tail than an elastic chain can give). The report therefore labels the per-thread row
+ * "spring chain" and the first-thread stresses "Shigley's 0.38" (see firstThreadShare in checkJoint).
+ *
  * Calibration (our model choice): for a long engagement the first thread's share tends to
  * 1 - 1/r, r = ((2 + beta) + sqrt(beta^2 + 4 beta))/2. Setting it to 0.38 (Shigley,
  * Mechanical Engineering Design, 9th ed., section 8-2, p. 419) gives beta = 0.2329 for the

@@ -5,7 +5,8 @@
  */
 import type {Provenance, ThreadGeometry} from '../types.js';
 import {parseThread, threadGeometry} from '../threads/index.js';
-import {boltGrade, boltGradeProblem, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, parentMaterial, parentMaterialProblem} from '../materials/index.js';
+import {boltGrade, boltGradeProblem, defaultNutClass, hexHeadBearing, nutClass, nutClassProblem, nutDimensions, nutMatchesBolt, parentMaterial, parentMaterialProblem} from '../materials/index.js';
+import {countersinkThreadLoss} from '../materials/nut-countersink.js';
 import type {JointInput} from './input.js';
 import {JointInputError} from './errors.js';
 import {toDisplay, type UnitSystem} from '../units.js';
@@ -36,8 +37,12 @@ export interface ResolvedJoint {
   geometry: ThreadGeometry;
   bolt: ResolvedBolt;
   internal: ResolvedInternal;
-  /** Nut height and flats, mm (nut only). */
-  nut?: {height: number; flats: number};
+  /**
+   * Nut height and flats, mm (nut only); the thread length one countersunk face takes off, mm (0 when
+   * the size has no tabulated countersink); the class used; whether it is the bolt's matching class
+   * at standard height (ISO 898-2 design basis: the bolt breaks first).
+   */
+  nut?: {height: number; flats: number; countersink?: number; classId?: string; matchesBolt?: boolean};
   /** Effective bearing diameter DKm, mm, and how it was found. */
   bearingDiameter: number;
   bearingSource: 'input' | 'standard' | 'estimate';
@@ -159,10 +164,12 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
   let internal: ResolvedInternal;
   let nut: ResolvedJoint['nut'];
   if (input.internal === 'nut') {
-    if (input.nutClass === undefined) throw new JointInputError('nutClass', 'a nut needs its property class (ISO 898-2 "8", "10", ... or SAE J995 "SAE-5", "SAE-8")');
-    const n = nutClass(input.nutClass, d);
-    if (!n) throw new JointInputError('nutClass', nutClassProblem(input.nutClass, d) ?? `unknown nut class "${input.nutClass}"`);
-    const dims = nutDimensions(d);
+    const inch = geometry.spec.family === 'unified';
+    const nutId = input.nutClass ?? defaultNutClass(bolt.id === 'custom' ? input.boltGrade : bolt.id, d, inch);
+    if (nutId === undefined) throw new JointInputError('nutClass', 'a nut needs its property class (ISO 898-2 "8", "10", ... or SAE J995 "SAE-5", "SAE-8")');
+    const n = nutClass(nutId, d);
+    if (!n) throw new JointInputError('nutClass', nutClassProblem(nutId, d) ?? `unknown nut class "${nutId}"`);
+    const dims = nutDimensions(d, input.nutStyle ?? 'hex');
     const height = input.nutHeight ?? dims?.heightMin;
     const flats = input.nutFlats ?? dims?.flats;
     if (height === undefined) throw new JointInputError('nutHeight', `no tabulated nut height for ${sizeWords(geometry)}; give the nut height`);
@@ -171,7 +178,11 @@ export function resolveJoint(input: JointInput): ResolvedJoint {
       const text = (u: UnitSystem) => `width across flats ${lengthText(flats, u)} must exceed the thread diameter ${lengthText(d, u)}`;
       throw new JointInputError('nutFlats', text('si'), text('us'));
     }
-    nut = {height, flats};
+    // Countersink on each face (ISO 4032 da max / ASME B18.2.2 rule, 120 deg; see nut-countersink.ts).
+    const countersink = dims?.countersinkMax !== undefined ? countersinkThreadLoss(dims.countersinkMax, d) : 0;
+    // Matching class at full standard height: the bolt is designed to break first (ISO 898-2 basis).
+    const fullHeight = dims !== undefined && height >= dims.heightMin - 1e-9;
+    nut = {height, flats, countersink, classId: n.id, matchesBolt: fullHeight && nutMatchesBolt(n.id, bolt.id === 'custom' ? input.boltGrade : bolt.id)};
     internal = {id: n.id, name: n.name, rm: n.rm, shear: n.shearRatio * n.rm, yield: n.rm, elasticModulus: bolt.elasticModulus, provenance: n.provenance};
   } else {
     internal = resolveParent(input, bolt);
@@ -213,8 +224,17 @@ export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units:
   const num = (x: number): string => (units === 'us' ? toDisplay(x, 'length', 'us').toFixed(3) : round(x));
   const notes: string[] = [];
   if (input.internal === 'nut') {
-    const dims = nutDimensions(d);
+    const dims = nutDimensions(d, input.nutStyle ?? 'hex');
+    if (input.nutClass === undefined) {
+      const id = defaultNutClass(input.boltGrade, d, geometry.spec.family === 'unified');
+      if (id !== undefined) notes.push(`Nut class ${id} taken from the bolt grade ${input.boltGrade} (a nut of the matching class; give the nut class to change it).`);
+    }
     if (input.nutHeight === undefined && dims) notes.push(`Nut height ${len(dims.heightMin)} (m min, ${dims.provenance.source}).`);
+    if (dims?.countersinkMax !== undefined && input.chamfer === 0) {
+      const loss = countersinkThreadLoss(dims.countersinkMax, d);
+      const partial = countersinkThreadLoss(dims.countersinkMax, geometry.minorDiameterInternal) - loss;
+      notes.push(`Nut countersink ${len(dims.countersinkMax)} diameter on each face (${geometry.spec.family === 'unified' ? 'ASME B18.2.2' : 'ISO 4032 da max'}; 120 deg, from memory) leaves no thread over ${len(loss)} per face, taken off the engagement; the thread is truncated over a further ${len(partial)} and counted.`);
+    }
     const height = input.nutHeight ?? dims?.heightMin;
     if (height !== undefined && input.engagement > height + 1e-9) {
       notes.push(`Engaged length ${len(input.engagement)} is longer than the nut (${len(height)}): only the nut height is counted.`);
@@ -234,13 +254,13 @@ export function resolveNotes(input: JointInput, geometry: ThreadGeometry, units:
 }
 
 /**
- * The size in a message: "M64", "#10", "1/4 in (the nut table is ISO 4032, metric only)".
- * The ISO 4032 table is the only nut table shipped, so an inch size never has one.
+ * The size in a message: "M64", "#10", "2 in (the inch nut tables, ...)": the nut tables are
+ * ISO 4032 (metric) and ASME B18.2.2 (inch, 1/4 to 1-1/2 in).
  */
 export function sizeWords(geometry: ThreadGeometry): string {
   const label = geometry.spec.sizeLabel;
   if (geometry.spec.family !== 'unified') return label;
-  return `${label.startsWith('#') ? label : `${label} in`} (the nut table is ISO 4032, metric only)`;
+  return `${label.startsWith('#') ? label : `${label} in`} (the inch nut tables, ASME B18.2.2, cover 1/4 to 1-1/2 in)`;
 }
 
 /** A stress for a message: MPa (SI) or ksi (US), 4 significant figures, no float noise. */

@@ -28,6 +28,14 @@ export interface StressSet {
   vonMises: number;
 }
 
+/** The first thread's stresses: the profile-aware set plus the square-thread textbook values beside it. */
+export interface FirstThreadStressSet extends StressSet {
+  /** Square-thread cantilever 6 F1/(pi dr p) (Shigley 9th ed. Eq. 8-11), MPa: the textbook value, exact for square threads only (always set by checkJoint). */
+  bendingSquareThread?: number;
+  /** The von Mises built on bendingSquareThread, MPa (always set by checkJoint). */
+  vonMisesSquareThread?: number;
+}
+
 export interface StrippingSide {
   /** Stripping force, N. */
   force: number;
@@ -41,7 +49,8 @@ export interface CheckResult {
   geometry: ThreadGeometry;
   /** Resolved materials with their provenance, for display and the report. */
   materials: {
-    bolt: {id: string; name: string; rm: number; rp: number; shear: number; provenance: Provenance};
+    /** rm is the minimum tensile strength; rmUpper the upper one used for bolt-breaks-first, with its source (always set by checkJoint). */
+    bolt: {id: string; name: string; rm: number; rp: number; shear: number; provenance: Provenance; rmUpper?: number; rmUpperSource?: string};
     internal: {id: string; name: string; rm: number; shear: number; provenance: Provenance};
   };
   tightening: {
@@ -66,7 +75,10 @@ export interface CheckResult {
     threadTorque: number;
   };
   stress: {
-    firstThread: StressSet;
+    /** `bending` is profile-aware (root width per profile, src/core/thread-stress.ts); the von Mises is built on it. */
+    firstThread: FirstThreadStressSet;
+    /** What the first-thread von Mises means and what decides instead (FIRST_THREAD_VON_MISES_NOTE); always set by checkJoint. */
+    firstThreadNote?: string;
     /** Threaded body on d0 = (d2 + d3)/2 at max preload + service load with the full thread torque,
      *  elastic torsion 16T/(pi d0^3): higher than assemblyVonMises, which uses VDI's plastic modulus. */
     shank: {axial: number; torsion: number; vonMises: number};
@@ -85,14 +97,18 @@ export interface CheckResult {
   stripping: {
     external: StrippingSide;
     internal: StrippingSide;
-    /** Bolt break force As x Rm, N. */
+    /** Bolt break force at the minimum strength As x Rm,min, N. */
     boltBreakForce: number;
+    /** Bolt break force at the upper strength As x Rm,max (materials.bolt.rmUpper), N: what bolt-breaks-first uses. */
+    boltBreakForceUpper?: number;
     weaker: 'external' | 'internal';
     /** Required effective engagement so the bolt breaks first, mm. */
     requiredEngagement: {fedStd: number; alexander: number};
     /** The same as an engaged length to compare with the input engagement (adds the chamfer), mm;
      *  a blind hole also needs the incomplete threads at its bottom below this. */
     requiredEngagedLength?: {fedStd: number; alexander: number};
+    /** Thread length lost at the faces, mm: the chamfer given, or a nut's standard countersinks (always set by checkJoint). */
+    engagementLoss?: number;
     /** Effective (fully formed) engagement used, mm. */
     effectiveEngagement: number;
     /** Engaged full threads (effective engagement / pitch). */
@@ -125,12 +141,16 @@ export interface CheckResult {
   margin: {
     /** Weaker thread's stripping force / largest load it can see. */
     stripping: number;
-    /** Weaker stripping force / bolt break force. */
+    /** Weaker stripping force / bolt break force at the upper strength Rm,max (VDI 2230 Part 1, from memory). */
     boltBreaksFirst: number;
+    /** The same at the minimum strength Rm,min (optional in the type; always set by checkJoint). */
+    boltBreaksFirstMinStrength?: number;
     /** First-thread von Mises / yield, bolt and internal part. */
     firstThreadYieldBolt: number;
     firstThreadYieldInternal: number;
   };
+  /** Nut only: a nut of the bolt's matching property class at standard height (ISO 898-2 design basis: the bolt breaks first). */
+  nutMatchesBolt?: boolean;
   flags: Flag[];
   /** Plain-language notes on defaults and data used. */
   notes: string[];

@@ -5,7 +5,8 @@
  * screws use; this module adds the nut-thread tooth and the shank. Units: N, N·mm, mm, MPa.
  */
 import {vonMisesAxialShear} from '../von-mises.js';
-import {firstThreadStresses, type FirstThreadInput, type FirstThreadStresses} from '../thread-stress.js';
+import {cantileverRootBending, firstThreadStresses, rootWidthFactor, type FirstThreadInput, type FirstThreadStresses} from '../thread-stress.js';
+import type {ThreadFamily} from '../types.js';
 
 export {FIRST_THREAD_SHARE_LONG, LONG_ENGAGEMENT_THREADS} from '../thread-stress.js';
 
@@ -22,13 +23,17 @@ export type RootStresses = FirstThreadStresses;
 export const rootStresses: (i: RootStressInput) => RootStresses = firstThreadStresses;
 
 /**
- * Root stress of the first internal-thread tooth, MPa: the same tooth formulas with the internal
- * thread's root at the major diameter D in place of dr (bending 6F1/(pi D p), tangential shear
- * 4T1/(pi D^2 p)), combined as sqrt(sigma^2 + 3 tau^2). Adaptation of Shigley Eqs. 8-11 to the nut
- * thread (common practice, no source).
+ * Root stress of the first internal-thread tooth, MPa: the tooth cantilever with the internal
+ * thread's root at the major diameter D (bending 6 F1 h/(pi D (wo p)^2), wo from rootWidthFactor,
+ * load at the pitch line, h = (D - d2)/2; R. L. Norton, Machine Design: An Integrated Approach, 4th ed.,
+ * from memory), tangential shear 4T1/(pi D^2 p), combined as sqrt(sigma^2 + 3 tau^2). Without a
+ * family the square-thread form 6F1/(pi D p) (adaptation of Shigley 9th ed. Eq. 8-11; common practice,
+ * no source).
  */
-export function internalRootVonMises(force: number, torque: number, major: number, pitch: number, share: number): number {
-  const bending = (6 * force * share) / (Math.PI * major * pitch);
+export function internalRootVonMises(force: number, torque: number, major: number, pitch: number, share: number, family?: ThreadFamily, pitchDiameter?: number): number {
+  const bending = family !== undefined && pitchDiameter !== undefined
+    ? cantileverRootBending(force * share, major, 1, pitch, rootWidthFactor(family, 'internal'), (major - pitchDiameter) / 2)
+    : (6 * force * share) / (Math.PI * major * pitch);
   const shear = (4 * torque * share) / (Math.PI * major * major * pitch);
   return vonMisesAxialShear(bending, shear);
 }

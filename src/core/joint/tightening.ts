@@ -124,11 +124,25 @@ function muSamples(r: FrictionRange): number[] {
 }
 
 /**
+ * The part of the tightening factor alphaA not already covered by the friction range, >= 1:
+ * max(1, alphaA / Rf), Rf = FM,max / FM,min from the friction range alone at one torque. alphaA is
+ * VDI 2230 Part 1's FM,max / FM,min (Table A8; its values include the friction scatter of a
+ * friction class, from memory), so alphaA and the friction range combine to a total spread of
+ * max(alphaA, Rf), never alphaA x Rf.
+ */
+export function scatterBeyondFriction(alphaA: number, frictionSpread: number): number {
+  return Math.max(1, alphaA / Math.max(1, frictionSpread));
+}
+
+/**
  * Preload range, torque and utilisation for one tightening specification.
  * Torque mode: the largest preload comes with the lowest friction, the smallest with the highest
- * (FM = MA / (0.16P + 0.58 d2 muG + muK DKm/2), VDI 2230 Part 1). The scatter factor alphaA
- * widens the range symmetrically beyond the friction spread: max x sqrt(alphaA), min / sqrt(alphaA)
- * (our convention; VDI 2230 defines alphaA = FM,max / FM,min).
+ * (FM = MA / (0.16P + 0.58 d2 muG + muK DKm/2), VDI 2230 Part 1). The scatter factor alphaA is the
+ * TOTAL spread FM,max / FM,min, as VDI 2230 Part 1 defines it (Table A8 values include the friction
+ * scatter; from memory). So it is not applied on top of the friction range: when alphaA exceeds the
+ * friction spread Rf = K(muG,max, muK,max) / K(muG,min, muK,min) at one torque, only the rest,
+ * alphaA / Rf, widens the range symmetrically (max x sqrt, min / sqrt), so FM,max / FM,min = alphaA;
+ * when alphaA <= Rf the friction range already covers it and nothing is added (scatterBeyondFriction).
  * Utilisation mode: the torque is set so that the largest assembly stress in the friction range
  * reaches nu Rp0.2; with one friction value and alphaA = 1 this is VDI's MA for FM,zul.
  * Preload mode: the target is the nominal preload at the middle of the friction range.
@@ -138,7 +152,7 @@ export function tighten(t: TighteningInput): TighteningResult {
   const useK = t.nutFactor !== undefined;
   const kOf = (muG: number, muK: number): number =>
     useK ? torquePerPreloadNutFactor(s, t.nutFactor as number) : torquePerPreload(s, muG, muK, t.bearingDiameter);
-  const root = Math.sqrt(t.scatter);
+  const root = Math.sqrt(scatterBeyondFriction(t.scatter, kOf(t.muThread.max, t.muHead.max) / kOf(t.muThread.min, t.muHead.min)));
   const muGmid = (t.muThread.min + t.muThread.max) / 2;
   const muKmid = (t.muHead.min + t.muHead.max) / 2;
   const kMid = kOf(muGmid, muKmid);

@@ -16,6 +16,8 @@ import {PARENT_MATERIAL_ROWS} from './parent-materials.js';
 import {HEX_HEAD_ROWS, NUT_DIMENSION_ROWS} from './hardware.js';
 import {INCH_HEX_HEAD_ROWS} from './inch-hex-heads.js';
 import {didYouMean} from './suggest.js';
+import {inchNutDimensions, type InchNutStyle} from './inch-nuts.js';
+import {isoNutCountersink} from './nut-countersink.js';
 
 export type {BoltGrade, NutClass, ParentMaterial, MaterialData} from './schema.js';
 export {validateMaterialData, MEMORY_WORDING, MaterialDataSchema, BoltGradeSchema, NutClassSchema, ParentMaterialSchema} from './schema.js';
@@ -150,12 +152,57 @@ export function inchHexHead(nominalMm: number): {size: string; flatsMax: number;
 }
 
 /**
- * ISO 4032 style 1 hexagon nut for a metric nominal diameter (mm): height m min/max
- * and width across flats s, mm. Undefined for sizes not tabulated.
+ * Standard hexagon nut for a nominal diameter (mm): height m min/max, width across flats s and the
+ * countersink diameter max, mm. Metric sizes: ISO 4032 style 1 (countersink: ISO 4032 da max, see
+ * nut-countersink.ts). Inch sizes (no metric size coincides with one): ASME B18.2.2 hex nut, or the
+ * heavy hex nut with style 'heavy-hex' (inch-nuts.ts). Undefined for sizes not tabulated.
  */
-export function nutDimensions(nominalMm: number): {heightMin: number; heightMax: number; flats: number; provenance: Provenance} | undefined {
+export function nutDimensions(
+  nominalMm: number,
+  style: InchNutStyle = 'hex',
+): {heightMin: number; heightMax: number; flats: number; countersinkMax?: number; provenance: Provenance} | undefined {
   const r = DATA.nutDimensions.find(n => Math.abs(n.d - nominalMm) < 1e-3);
-  return r ? {heightMin: r.heightMin, heightMax: r.heightMax, flats: r.flats, provenance: r.provenance} : undefined;
+  if (r) {
+    const da = isoNutCountersink(r.d);
+    return {heightMin: r.heightMin, heightMax: r.heightMax, flats: r.flats, ...(da !== undefined ? {countersinkMax: da} : {}), provenance: r.provenance};
+  }
+  return inchNutDimensions(nominalMm, style);
+}
+
+/**
+ * Default nut class for a bolt grade (ISO 898-2 design basis: a class-N nut serves bolts up to N.8,
+ * from memory): an ISO 898-1 class N.M takes the lowest ISO 898-2 regular-nut class of at least N;
+ * a SAE J429 bolt takes the SAE J995 nut of its grade (grade 2: the grade 5 nut, the lowest on
+ * file). On an inch thread an ISO bolt class takes an inch nut too: up to 8.8 the SAE J995 grade 5
+ * nut (120 ksi, about 830 MPa), above it grade 8 (150 ksi, about 1030 MPa) (common practice, no
+ * source). Undefined when none fits.
+ */
+export function defaultNutClass(boltGrade: string, nominalMm: number, inch: boolean): string | undefined {
+  const g = boltGrade.trim().toUpperCase();
+  const iso = /^(\d{1,2})\.\d$/.exec(g);
+  let id: string | undefined;
+  if (/^SAE-(5|8)$/.test(g)) id = g;
+  else if (g === 'SAE-2') id = 'SAE-5';
+  else if (iso && inch) id = Number(iso[1]) <= 8 ? 'SAE-5' : 'SAE-8';
+  else if (iso) id = [5, 6, 8, 9, 10, 12].map(String).find(k => Number(k) >= Number(iso[1]));
+  return id !== undefined && nutClass(id, nominalMm) ? id : undefined;
+}
+
+/**
+ * Whether a nut of class `nutId` is the matching class for bolt grade `boltGrade`: the bolt is
+ * then designed to break before the threads strip (ISO 898-2 design basis, Alexander 1977; from
+ * memory). ISO: nut class N >= the bolt's first number (thin nuts 04, 05 never); SAE J995 grade 5
+ * for J429 grades 2 and 5, grade 8 for all three; an ISO bolt in an SAE nut as defaultNutClass
+ * pairs them (grade 5 nut up to class 8.8, grade 8 up to 10.9; common practice, no source).
+ */
+export function nutMatchesBolt(nutId: string, boltGrade: string): boolean {
+  const n = nutId.trim().toUpperCase();
+  const b = boltGrade.trim().toUpperCase();
+  const iso = /^(\d{1,2})\.\d$/.exec(b);
+  if (/^\d{1,2}$/.test(n) && !n.startsWith('0') && iso) return Number(n) >= Number(iso[1]);
+  if (n === 'SAE-8') return /^SAE-(2|5|8)$/.test(b) || (iso !== null && Number(iso[1]) <= 10);
+  if (n === 'SAE-5') return /^SAE-(2|5)$/.test(b) || (iso !== null && Number(iso[1]) <= 8);
+  return false;
 }
 
 /** An unknown parent material, with the nearest ids and the accepted list. */

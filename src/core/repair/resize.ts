@@ -11,31 +11,64 @@ import type {ThreadBasics} from './helical.js';
 import type {RepairOption} from './types.js';
 
 /** How many oversize candidates the planner offers. */
-export const OVERSIZE_CANDIDATES = 2;
+export const OVERSIZE_CANDIDATES = 3;
+
+/** A series size the planner considered and did not offer, with the reason in plain words. */
+export interface LeftOutSize {
+  designation: string;
+  reason: string;
+}
+
+/** Basic minor diameter of the internal thread D1 = D - 1.082532 P, mm (ISO 68-1 / ASME B1.1). */
+function basicMinor(s: SeriesThread): number {
+  return s.nominal - 1.082532 * s.pitch;
+}
 
 /**
- * Candidate sizes: larger nominal, pitch not coarser than the present one, and a
- * basic minor diameter D1 = D - 1.082532P (ISO 68-1 / ASME B1.1) at least the old
- * major diameter, so the new tap drill removes the old thread (common practice,
- * no source). Smallest first; at equal size the coarser allowed pitch first.
+ * Candidate sizes: larger nominal with a basic minor diameter D1 = D - 1.082532P (ISO 68-1 /
+ * ASME B1.1) at least the old major diameter, so the new tap drill removes the old thread (common
+ * practice, no source). Smallest size first; at one size the coarse pitch (the largest in the
+ * series, the usual choice: M8 -> M10x1.5, tap drill 8.5 mm) first, then the finer ones. The first
+ * OVERSIZE_CANDIDATES are offered; the sizes up to the last offered one that were passed over are
+ * returned with the reason (D1 does not clear the old thread, or the list is full).
  */
+export function oversizeSelection(
+  thread: ThreadBasics,
+  series: readonly SeriesThread[],
+  length: (mm: number) => string = mm => `${mm.toFixed(2)} mm`,
+): {offered: SeriesThread[]; leftOut: LeftOutSize[]} {
+  const larger = series.filter(s => s.nominal > thread.nominal + 1e-9).sort((a, b) => a.nominal - b.nominal || b.pitch - a.pitch);
+  const offered: SeriesThread[] = [];
+  const leftOut: LeftOutSize[] = [];
+  for (const s of larger) {
+    if (basicMinor(s) < thread.nominal - 1e-9) {
+      leftOut.push({designation: s.designation, reason: `its minor diameter D1 ${length(basicMinor(s))} would leave the old ${length(thread.nominal)} thread in the hole`});
+    } else if (offered.length < OVERSIZE_CANDIDATES) {
+      offered.push(s);
+    } else {
+      leftOut.push({designation: s.designation, reason: `only the nearest ${OVERSIZE_CANDIDATES} sizes are offered`});
+    }
+  }
+  const last = offered[offered.length - 1];
+  return {offered, leftOut: last ? leftOut.filter(l => (larger.find(s => s.designation === l.designation)?.nominal ?? Infinity) <= last.nominal + 1e-9) : leftOut.slice(0, 3)};
+}
+
+/** The offered sizes of oversizeSelection. */
 export function oversizeCandidates(thread: ThreadBasics, series: readonly SeriesThread[]): SeriesThread[] {
-  return series
-    .filter(s => s.nominal > thread.nominal + 1e-9 && s.pitch <= thread.pitch + 1e-9 && s.nominal - 1.082532 * s.pitch >= thread.nominal - 1e-9)
-    .sort((a, b) => a.nominal - b.nominal || b.pitch - a.pitch)
-    .slice(0, OVERSIZE_CANDIDATES);
+  return oversizeSelection(thread, series).offered;
 }
 
 /** Oversize thread options (oversizeCandidates), each checked by checkJoint with the larger screw, mm/N/N·m. */
 export function oversizeOptions(ctx: PlanContext): RepairOption[] {
   const {deps, repair, joint, base} = ctx;
   const series = deps.seriesAbove ? deps.seriesAbove(base.geometry.spec) : [];
-  const candidates = oversizeCandidates(ctx.thread, series);
+  const {offered: candidates, leftOut} = oversizeSelection(ctx.thread, series, mm => len(ctx, mm, 2));
   if (candidates.length === 0) {
     const o = skeleton(ctx, 'oversize', 'oversize thread');
-    return [infeasible(o, deps.seriesAbove ? `no larger series size with pitch ${ctx.thread.pitch} mm or finer clears the old thread` : 'thread series list not available')];
+    return [infeasible(o, deps.seriesAbove ? 'no larger series size has a minor diameter that clears the old thread' : 'thread series list not available')];
   }
-  return candidates.map(c => {
+  const leftOutNote = leftOut.length > 0 ? `left out: ${leftOut.map(l => `${l.designation} (${l.reason})`).join('; ')}` : undefined;
+  return candidates.map((c, i) => {
     const o = skeleton(ctx, 'oversize', `oversize ${c.designation}`);
     o.tapThread = c.designation;
     o.boltThread = c.designation;
@@ -53,6 +86,7 @@ export function oversizeOptions(ctx: PlanContext): RepairOption[] {
     applyResult(o, r.result);
     o.margin = {stripping: r.result.margin.stripping, boltBreaksFirst: r.result.margin.boltBreaksFirst};
     o.notes.push(`fit a ${c.designation} screw and open the clamped part's hole to suit; tightened by the utilisation rule (${joint.utilisation} of yield)`);
+    if (i === 0 && leftOutNote) o.notes.push(leftOutNote);
     const wall = wallProblem(repair.wall, c.nominal, `the ${c.designation} thread`, ctx.units);
     if (wall) return infeasible(o, wall);
     if (repair.through) {

@@ -5,7 +5,8 @@
  */
 import type {Flag} from '../types.js';
 import type {ScrewResult} from './result.js';
-import {LONG_ENGAGEMENT_THREADS} from '../thread-stress.js';
+import {LONG_ENGAGEMENT_THREADS, SCREW_FIRST_THREAD_NOTE} from '../thread-stress.js';
+import {PUBLISHED_THREAD_FRICTION} from './torque-solve.js';
 
 export const WATCH_MARGIN = {stripping: 2, buckling: 2, yield: 1.5} as const;
 /** Self-locking with f sec(alpha) below this multiple of tan(lambda) is marked marginal (common practice, no source). */
@@ -92,9 +93,9 @@ export function screwFlags(c: FlagContext): Flag[] {
   const sy = r.screw.yield;
   const vm = r.stress.firstThread.vonMises;
   if (vm >= sy) {
-    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`, summary: `First thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`});
+    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`});
   } else if (sy / vm < WATCH_MARGIN.yield) {
-    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${f0(vm)} MPa is ${f2(sy / vm)} times below the screw yield ${f0(sy)} MPa`, summary: `First thread root ${f0(vm)} MPa, yield ${f0(sy)} MPa only ${f2(sy / vm)} times it`});
+    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${f0(vm)} MPa is ${f2(sy / vm)} times below the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa, yield ${f0(sy)} MPa only ${f2(sy / vm)} times it`});
   }
   const b = r.buckling;
   if (b.checked && b.criticalLoad !== null && b.margin !== null) {
@@ -109,6 +110,16 @@ export function screwFlags(c: FlagContext): Flag[] {
   }
   if (c.collarIncomplete) {
     out.push({code: 'collar-incomplete', level: 'info', message: 'collar friction given without a collar diameter (or the reverse): collar torque taken as 0', summary: 'Collar friction or diameter missing: collar torque taken as 0'});
+  }
+  const ts = r.torqueSolve;
+  if (ts?.outsidePublished) {
+    const f = ts.friction.toFixed(3);
+    out.push({
+      code: 'friction-outside-tables',
+      level: 'watch',
+      message: `thread friction ${f} ${ts.solves === 'friction' ? 'implied by the torque' : 'used with the torque'} is outside the published pairs, ${PUBLISHED_THREAD_FRICTION.min} to ${PUBLISHED_THREAD_FRICTION.max} (Shigley 9th ed. Table 8-5): check the torque, the load and the lubrication`,
+      summary: `Thread friction ${f} outside the published ${PUBLISHED_THREAD_FRICTION.min} to ${PUBLISHED_THREAD_FRICTION.max}`,
+    });
   }
   return out;
 }

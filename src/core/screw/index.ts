@@ -18,6 +18,7 @@ import {buckling, END_CONDITION_SOURCE} from './buckling.js';
 import {nutMaterial, nutMaterialIds, screwMaterial, screwMaterialIds} from './materials.js';
 import {screwFlags, SHARE_THREADS} from './flags.js';
 import {applyDuty} from '../duty.js';
+import {classShearAreaFactor, solveTorque} from './torque-use.js';
 
 export type {ScrewInput, ScrewInputDraft} from './input.js';
 export {ScrewInputSchema, ScrewFrictionSchema, END_CONDITION_IDS} from './input.js';
@@ -50,9 +51,13 @@ export function checkScrew(input: ScrewInput): ScrewResult {
   if (!scr) throw new ScrewInputError('screwMaterial', `unknown screw material "${input.screwMaterial}"; accepted: ${screwMaterialIds().join(', ')}`);
   const screwYield = input.screwYield ?? scr.yield;
 
-  const mu = typeof input.muThread === 'number' ? {min: input.muThread, max: input.muThread} : input.muThread;
-  const F = input.load;
+  let mu = typeof input.muThread === 'number' ? {min: input.muThread, max: input.muThread} : input.muThread;
   const collarOn = input.muCollar > 0 && input.collarDiameter > 0;
+  const solvedOrError = solveTorque(input, g, mu, collarOn);
+  if (solvedOrError && !solvedOrError.ok) throw new ScrewInputError(solvedOrError.field, solvedOrError.message);
+  const solved = solvedOrError;
+  const F = solved?.load ?? input.load;
+  if (solved) mu = {min: solved.friction, max: solved.friction};
   const base = {load: F, meanDiameter: g.meanDiameter, lead: g.lead, flankAngle: g.flankAngle, muCollar: collarOn ? input.muCollar : 0, collarDiameter: collarOn ? input.collarDiameter : 0};
   if (raisingLocks({...base, muThread: mu.max})) {
     throw new ScrewInputError('muThread', `thread friction ${mu.max} is too high for a lead angle this steep: no torque raises the load; accepted: below ${(Math.PI * g.meanDiameter / g.lead * Math.cos((g.flankAngle * Math.PI) / 180)).toFixed(2)}`);
@@ -67,11 +72,14 @@ export function checkScrew(input: ScrewInput): ScrewResult {
   const body = bodyStresses(F, raise, g.rootDiameter, compression);
   const engaged = input.nutLength / g.pitch;
   const share = engaged >= SHARE_THREADS ? FIRST_THREAD_SHARE : Math.min(1, Math.max(FIRST_THREAD_SHARE, 1 / engaged));
-  const root = threadRootStresses({load: F, torque: raise, rootDiameter: g.rootDiameter, meanDiameter: g.meanDiameter, pitch: g.pitch, share, threads: 1, compression});
+  // Body torsion carries the full raising torque (conservative); only the thread torque passes the flanks.
+  const root = threadRootStresses({load: F, torque: raise, threadTorque: raiseThread, rootDiameter: g.rootDiameter, meanDiameter: g.meanDiameter, pitch: g.pitch, share, threads: 1, compression, family: g.spec.family});
 
+  const tolerance = classShearAreaFactor(g);
   const strip = stripping({
     load: F, major: g.major, nutMinor: g.nutMinorDiameter, pitch: g.pitch, nutLength: input.nutLength,
     shearWidthFactor: g.shearWidthFactor, nutShear: nut.shear, screwShear: scr.shear, wear: input.nutWear,
+    areaFactor: tolerance.factor,
   });
   const allow = allowablePressure(nut.bearingClass, input.speed);
   const column = compression && input.length > 0 ? buckling(F, g.rootDiameter, input.length, input.ends, screwYield, scr.elasticModulus) : undefined;
@@ -94,7 +102,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     stress: {
       body: {axial: body.axial, torsion: body.torsion, vonMises: body.vonMises},
       firstThread: {
-        bearing: root.bearing, bending: root.bending, shear: root.shear, transverseShear: root.transverseShear,
+        bearing: root.bearing, bending: root.bending, bendingSquareThread: root.bendingSquareThread, shear: root.shear, transverseShear: root.transverseShear,
         axial: root.axial, torsion: root.torsion, vonMises: root.vonMises, maxShear: root.maxShear, principal: root.principal,
         vonMisesTextbook: root.vonMisesTextbook, maxShearTextbook: root.maxShearTextbook, principalTextbook: root.principalTextbook, share,
       },
@@ -120,6 +128,7 @@ export function checkScrew(input: ScrewInput): ScrewResult {
       source: END_CONDITION_SOURCE,
     },
     input: {loadDirection: input.loadDirection, load: F, nutLength: input.nutLength},
+    ...(solved ? {torqueSolve: {torque: solved.torque, solves: solved.solves, load: F, friction: solved.friction, outsidePublished: solved.outside}} : {}),
     sources: [
       g.source,
       "Shigley's Mechanical Engineering Design, 9th ed.: Eqs. 8-1 to 8-6 (torque, efficiency, self-locking), Eqs. 8-7 to 8-12 and p. 419 (stresses, 0.38 first-thread share; first-thread stresses shared with tapwright check, plus the tangential shear from the thread torque: common practice, no source), Eq. 5-14 (von Mises), Eqs. 4-42/4-43 and 8-9 with Table 4-2 (columns)",
@@ -127,8 +136,9 @@ export function checkScrew(input: ScrewInput): ScrewResult {
     ].filter(s => s !== ''),
     notes: [
       ...g.notes,
-      `nut stripping: basic profile, threads sheared on the cylinders d and D1 over the nut length, every turn loaded; no tolerance allowance (a few per cent high)`,
-      `body torsion and the first thread's tangential shear use the full raising torque with collar (conservative)`,
+      tolerance.note,
+      `body torsion uses the full raising torque with collar (conservative); the first thread's tangential shear only the thread torque (the collar torque does not pass the flanks)`,
+      ...(solved ? [solved.note] : []),
       `first thread: von Mises with the tangential shear from the thread torque (as tapwright check); the textbook value without it (Shigley p. 419 state) is vonMisesTextbook`,
       ...(column ? [] : [compression ? 'no column check: give --length' : 'screw in tension: no column check']),
     ],

@@ -46,6 +46,14 @@ export const ScrewInputSchema = z.object({
   ends: z.enum(END_CONDITION_IDS).default('pinned-pinned'),
   /** Sliding speed at the thread mean diameter, m/s, for the allowable bearing pressure (0 = hand-operated, slow). */
   speed: z.number().min(0).max(10).optional(),
+  /**
+   * Known raising torque at the screw (thread + collar), N·m, e.g. a motor or handwheel torque.
+   * With it, `torqueSolves` says what is found: the load it raises ('load', replacing `load`) or
+   * the thread friction it implies at `load` ('friction', replacing `muThread`).
+   */
+  torque: z.number().min(0.001).max(1e6).optional(),
+  /** What a given `torque` solves for (default: the load). */
+  torqueSolves: z.enum(['load', 'friction']).default('load'),
   /** Allowable nut bearing pressure, MPa; overrides the table. */
   allowablePressure: z.number().min(0.1).max(500).optional(),
   /** What the screw is for: general, or lifting / pressure / safety-critical (stricter flags, sign-off required). */

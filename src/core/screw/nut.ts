@@ -12,9 +12,9 @@
  *   diameter D1, over the engaged length Le; the thread thickness on those cylinders is
  *   w P with w = 0.5 + 0.5 tan(alpha) for the basic profile (0.5 for a square thread):
  *     A_nut = pi d Le (w - wear / P),   A_screw = pi D1 Le w,   F_strip = tau_u A.
- *   Basic dimensions, no tolerance allowance: an upper estimate for a new nut (for Acme
- *   the basic screw-thread area is 4 to 6 % above the class 3G shear areas of Machinery's
- *   Handbook 27th ed. Table 3); `wear`
+ *   Basic dimensions, no tolerance allowance, unless `areaFactor` scales both areas: for the
+ *   general-purpose Acme sizes checkScrew passes class 3G shear area / basic area (Machinery's
+ *   Handbook 27th ed. Table 3; the basic screw-thread area is 4 to 6 % above it); `wear`
  *   (loss of nut-thread thickness, mm, e.g. measured as extra axial backlash) lowers it.
  */
 
@@ -51,18 +51,21 @@ export interface StrippingInput {
   screwShear: number;
   /** Nut-thread thickness lost to wear, mm. */
   wear: number;
+  /** Factor on both shear areas for the tolerance class (class 3G / basic; 1 = basic profile). */
+  areaFactor?: number;
 }
 
 /** Stripping forces of the nut and screw threads (model in the file header). */
 export function stripping(i: StrippingInput): StrippingResult {
+  const k = i.areaFactor ?? 1;
   const wNut = Math.max(0, i.shearWidthFactor - i.wear / i.pitch);
-  const nutArea = Math.PI * i.major * i.nutLength * wNut;
-  const screwArea = Math.PI * i.nutMinor * i.nutLength * i.shearWidthFactor;
+  const nutArea = Math.PI * i.major * i.nutLength * wNut * k;
+  const screwArea = Math.PI * i.nutMinor * i.nutLength * i.shearWidthFactor * k;
   const nutForce = nutArea * i.nutShear;
   const screwForce = screwArea * i.screwShear;
   const weaker = nutForce <= screwForce ? 'nut' : 'screw';
   const weakest = Math.min(nutForce, screwForce);
-  const wearLimit = i.pitch * (i.shearWidthFactor - i.load / (i.nutShear * Math.PI * i.major * i.nutLength));
+  const wearLimit = i.pitch * (i.shearWidthFactor - i.load / (i.nutShear * Math.PI * i.major * i.nutLength * k));
   const wearToStrip = Math.max(0, wearLimit - i.wear);
   return {nutArea, screwArea, nutForce, screwForce, weaker, wearToStrip, margin: i.load > 0 ? Math.min(MARGIN_CAP, weakest / i.load) : Infinity};
 }

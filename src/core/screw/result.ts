@@ -74,6 +74,11 @@ export interface ScrewResult {
   };
   /** Load direction as computed. */
   input: {loadDirection: 'compression' | 'tension'; load: number; nutLength: number};
+  /**
+   * With a given raising torque: the torque (N·m), what it solved for, the load (N) and thread friction
+   * used, and whether that friction lies outside the published pairs (Shigley 9th ed. Table 8-5).
+   */
+  torqueSolve?: {torque: number; solves: 'load' | 'friction'; load: number; friction: number; outsidePublished: boolean};
   flags: Flag[];
   sources: string[];
   notes: string[];

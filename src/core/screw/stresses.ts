@@ -6,7 +6,8 @@
  *   body torsion        tau     = 16 T / (pi dr^3)                (Eq. 8-7)
  *   body axial          sigma   = -+ 4 F / (pi dr^2)              (Eq. 8-8; - in compression)
  *   thread bearing      sigmaB  = -2 F1 / (pi dm nt p)            (Eq. 8-10)
- *   root bending        sigmab  =  6 F1 / (pi dr nt p)            (Eq. 8-11)
+ *   root bending        sigmab  =  6 F1 / (pi dr nt p)            (Eq. 8-11, square thread; other profiles
+ *                       use the root-width cantilever of thread-stress.ts, `bendingSquareThread` keeps this)
  *   transverse shear    tau     =  3 F1 / (pi dr nt p)            (Eq. 8-12, at the centre of the root)
  *   tangential shear    tau     =  4 T1 / (pi dr^2 nt p)          (thread torque; common practice, no source)
  *
@@ -17,6 +18,7 @@
  */
 import {principalStresses, vonMises, vonMisesAxialShear, type StressState} from '../von-mises.js';
 import {bodyRootStresses, firstThreadStresses} from '../thread-stress.js';
+import type {ThreadFamily} from '../types.js';
 
 export {principalStresses};
 /** The six stress components (same shape as the joint's StressState). */
@@ -44,6 +46,8 @@ export interface ThreadRootInput {
   load: number;
   /** Torque in the screw body at the nut, N·mm. */
   torque: number;
+  /** Torque passed through the thread flanks (the thread torque, without the collar), N·mm; default `torque`. */
+  threadTorque?: number;
   rootDiameter: number;
   meanDiameter: number;
   pitch: number;
@@ -52,13 +56,17 @@ export interface ThreadRootInput {
   /** Number of threads that share the `share` of the load (1 for the first thread). */
   threads: number;
   compression: boolean;
+  /** Thread profile for the profile-aware root bending (square: Shigley's 6F/(pi dr nt p)). */
+  family?: ThreadFamily;
 }
 
 export interface ThreadRootStresses {
   /** Flank bearing, MPa (negative, compressive). */
   bearing: number;
-  /** Root bending, MPa (magnitude). */
+  /** Root bending, MPa (magnitude), profile-aware. */
   bending: number;
+  /** Square-thread textbook bending 6 F1/(pi dr nt p), MPa (Shigley 9th ed. Eq. 8-11). */
+  bendingSquareThread: number;
   /** Tangential shear at the root from the thread torque, MPa (the joint's `shear`). */
   shear: number;
   /** Transverse shear at the centre of the root section (Eq. 8-12), MPa. */
@@ -86,13 +94,15 @@ export interface ThreadRootStresses {
 export function threadRootStresses(i: ThreadRootInput): ThreadRootStresses {
   const r = firstThreadStresses({
     force: i.compression ? -i.load : i.load, torque: i.torque, dr: i.rootDiameter, dm: i.meanDiameter,
-    pitch: i.pitch, share: i.share, nt: i.threads,
+    pitch: i.pitch, share: i.share, nt: i.threads, ...(i.family !== undefined ? {family: i.family} : {}),
+    ...(i.threadTorque !== undefined ? {threadTorque: i.threadTorque} : {}),
   });
   const principal = principalStresses(r.state);
   const principalTextbook = principalStresses(r.textbookState);
   return {
     bearing: r.bearing,
     bending: r.bending,
+    bendingSquareThread: r.bendingSquareThread,
     shear: r.shear,
     transverseShear: r.transverseShear,
     axial: r.axial,

@@ -88,7 +88,9 @@ describe('checkJoint', () => {
     expect(field({thread: 'M10', boltGrade: '99.9', parent: 'S355', engagement: 10})).toBe('boltGrade');
     expect(field({thread: 'M10', parent: 'unobtainium', engagement: 10})).toBe('parent');
     expect(field({thread: 'M10', engagement: 10})).toBe('parent');
-    expect(field({thread: 'M10', internal: 'nut', engagement: 10})).toBe('nutClass');
+    // a nut without a class takes the class matching the bolt grade (8.8: class 8); a stainless bolt has no default
+    expect(field({thread: 'M10', internal: 'nut', engagement: 10})).toBe('none');
+    expect(field({thread: 'M10', boltGrade: 'A2-70', internal: 'nut', engagement: 10})).toBe('nutClass');
     expect(field({thread: 'M10', internal: 'nut', nutClass: 'zz', engagement: 10})).toBe('nutClass');
     expect(field({thread: 'M10', parent: 'S355', engagement: 10, chamfer: 10})).toBe('chamfer');
     expect(field({thread: 'M10', parent: 'S355', engagement: 10, tightening: 'torque'})).toBe('torque');

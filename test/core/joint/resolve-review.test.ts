@@ -63,17 +63,22 @@ describe('input errors in US units', () => {
 });
 
 describe('sizes in messages', () => {
-  it('an inch size with no nut table says "in" and why (was "no tabulated width across flats for 1/2")', () => {
-    const e = inputError(() => run({thread: '1/2-13 UNC', internal: 'nut', nutClass: 'SAE-5', parent: undefined, nutHeight: 11.1, engagement: 11.1}));
+  // The inch nut tables (ASME B18.2.2 hex and heavy hex) cover 1/4 to 1-1/2 in: 1/2 in now has its
+  // hex nut; a #12 size still has none and the message says which tables there are.
+  it('an inch size with no nut table says why (was "no tabulated width across flats for 1/2")', () => {
+    const e = inputError(() => run({thread: '#12-24 UNC', internal: 'nut', nutClass: '8', parent: undefined, nutHeight: 4, engagement: 4}));
     expect(e.field).toBe('nutFlats');
-    expect(e.message).toBe("no tabulated width across flats for 1/2 in (the nut table is ISO 4032, metric only); give the nut's width across flats");
+    expect(e.message).toBe("no tabulated width across flats for #12 (the inch nut tables, ASME B18.2.2, cover 1/4 to 1-1/2 in); give the nut's width across flats");
+    const half = run({thread: '1/2-13 UNC', internal: 'nut', nutClass: 'SAE-5', parent: undefined, nutHeight: 11.1, engagement: 11.1});
+    expect(half.notes.join(' ')).toMatch(/ASME B18\.2\.2/);
   });
 });
 
 describe('engagement longer than the nut', () => {
   it('is cut to the nut height and says so (was silent); ISO 4032 M10 m min 8.04 mm', () => {
     const r = run({internal: 'nut', nutClass: '8', parent: undefined, engagement: 20});
-    expect(r.stripping.effectiveEngagement).toBeCloseTo(8.04, 6);
+    // less the two countersinks: ISO 4032 da max 10.8 mm, 120 deg: (10.8 - 10)/(2 tan 60) = 0.2309 mm per face
+    expect(r.stripping.effectiveEngagement).toBeCloseTo(8.04 - 2 * 0.23094, 4);
     expect(r.notes).toContain('Engaged length 20 mm is longer than the nut (8.04 mm): only the nut height is counted.');
     expect(run({internal: 'nut', nutClass: '8', parent: undefined, engagement: 8.04}).notes.join(' ')).not.toMatch(/longer than the nut/);
   });

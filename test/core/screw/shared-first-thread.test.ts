@@ -36,7 +36,8 @@ describe('first-thread stresses: screw and joint give identical components for t
     const r = checkScrew(ScrewInputSchema.parse({
       thread: 'square 32x4', starts: 2, load: 6400, muThread: 0.08, muCollar: 0.08, collarDiameter: 40, nutLength: 48, nutMaterial: 'bronze',
     }));
-    const j = rootStresses({force: -6400, torque: r.torque.raise * 1000, dr: r.geometry.rootDiameter, dm: r.geometry.meanDiameter, pitch: r.geometry.pitch, share: 0.38, nt: 1});
+    // body torque TR with the collar; the thread flanks pass only the thread torque (collar excluded)
+    const j = rootStresses({force: -6400, torque: r.torque.raise * 1000, threadTorque: r.torque.raiseThread * 1000, dr: r.geometry.rootDiameter, dm: r.geometry.meanDiameter, pitch: r.geometry.pitch, share: 0.38, nt: 1, family: 'square'});
     for (const k of KEYS) expect(r.stress.firstThread[k], k).toBe(j[k]);
     expect(r.stress.body.axial).toBe(j.axial);
     expect(r.stress.body.torsion).toBe(j.torsion);
@@ -60,7 +61,7 @@ describe('first-thread stresses: screw and joint give identical components for t
     }));
     const s = threadRootStresses({
       load: r.boltLoad, torque: r.tightening.threadTorque * 1000, rootDiameter: r.geometry.minorDiameterExternal,
-      meanDiameter: r.geometry.pitchDiameter, pitch: r.geometry.pitch, share: r.firstThreadShare, threads: 1, compression: false,
+      meanDiameter: r.geometry.pitchDiameter, pitch: r.geometry.pitch, share: r.firstThreadShare, threads: 1, compression: false, family: 'metric',
     });
     for (const k of KEYS) expect(r.stress.firstThread[k], k).toBe(s[k]);
   });
