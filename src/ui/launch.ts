@@ -7,7 +7,7 @@
  */
 import React from 'react';
 import {render} from 'ink';
-import type {CliIo} from '../cli/io.js';
+import type {CliIo} from '../app/io.js';
 import {DEFAULT_PRESET} from '../store/shipped.js';
 import type {SettingsHandle} from '../store/settings.js';
 import {wantsAscii, wantsColor} from './terminal/env.js';
