@@ -71,11 +71,20 @@ export function boundsOf(group: InputGroup, key: string): Bounds {
   return boundsCache.get(fieldId({group, key})) ?? {};
 }
 
-/** Unit of a bare number for a row in a unit system ("mm", "in", "Nm", "ft-lbf"). */
+/** Unit of a bare number on the command line, by dimension (the workbench reads the unit shown beside the field). */
+const OPTION_BARE: Record<Exclude<Dimension, 'ratio'>, {si: string; us: string}> = {
+  length: {si: 'mm', us: 'in'},
+  force: {si: 'N', us: 'lbf'},
+  torque: {si: 'Nm', us: 'ft-lbf'},
+  stress: {si: 'MPa', us: 'ksi'},
+  speed: {si: 'm/s', us: 'ft/min'},
+};
+
+/** Unit of a bare number for a row's option in a unit system ("mm", "in", "N", "lbf"). */
 export function bareUnit(row: FieldRow, units: UnitSystem): string | undefined {
   if (row.bare) return row.bare[units];
   if (!row.dimension || row.dimension === 'ratio') return undefined;
-  return displayUnit(row.dimension, units, true);
+  return OPTION_BARE[row.dimension][units];
 }
 
 /** A number without trailing zeros, to 5 significant figures ("12", "0.472"). */

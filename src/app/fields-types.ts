@@ -64,7 +64,7 @@ export interface FieldRow {
   step?: StepId;
   kind: FieldKind;
   dimension?: Dimension;
-  /** Unit of a bare number, SI and US; default: the display unit of the dimension. */
+  /** Unit of a bare number in the CLI, SI and US; default by dimension (mm/in, N/lbf, Nm/ft-lbf, MPa/ksi, m/s / ft/min). */
   bare?: {si: string; us: string};
   choices?: readonly string[];
   pick?: PickSource;

@@ -73,7 +73,7 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'utilisation', label: 'Utilisation', step: 'tightening', kind: 'ratio', optional: true, isVisible: tighten('utilisation'), section: 'tightening',
     cli: {name: '--utilisation', arg: 'R', help: 'von Mises utilisation of the bolt yield while tightening (0.9 or 90%)'},
     help: 'Von Mises stress during tightening over yield; 0.9 is usual. 90% also accepted.'},
-  {group: 'joint', key: 'torque', label: 'Torque', step: 'tightening', kind: 'quantity', dimension: 'torque', bare: {si: 'Nm', us: 'ft-lbf'}, optional: false, isVisible: tighten('torque'), section: 'tightening',
+  {group: 'joint', key: 'torque', label: 'Torque', step: 'tightening', kind: 'quantity', dimension: 'torque', optional: false, isVisible: tighten('torque'), section: 'tightening',
     example: '40Nm', cli: {name: '--torque', arg: 'T', help: 'tightening torque (40Nm, 30ft-lbf)'},
     help: 'Tightening torque; 40Nm or 30ft-lbf accepted.'},
   {group: 'joint', key: 'preload', label: 'Target preload', step: 'tightening', kind: 'quantity', dimension: 'force', optional: false, isVisible: tighten('preload'), section: 'tightening',
