@@ -39,6 +39,7 @@ export const SCHEMAS = {joint: JointInputSchema, hole: RepairInputSchema, screw:
 
 interface JsonSchemaNode {
   type?: string;
+  maxLength?: number;
   minimum?: number;
   maximum?: number;
   default?: unknown;
@@ -69,6 +70,12 @@ export function boundsOf(group: InputGroup, key: string): Bounds {
     }
   }
   return boundsCache.get(fieldId({group, key})) ?? {};
+}
+
+/** Longest text a string property of an object schema accepts (e.g. the work-order notes), from `z.toJSONSchema`. */
+export function textLimit(schema: z.ZodType, key: string): number | undefined {
+  const js = z.toJSONSchema(schema, {io: 'input', unrepresentable: 'any'}) as JsonSchemaNode;
+  return js.properties?.[key]?.maxLength;
 }
 
 /** Unit of a bare number on the command line, by dimension (the workbench reads the unit shown beside the field). */
@@ -123,13 +130,13 @@ export function optionRangeText(row: FieldRow, units: UnitSystem): string {
 const OTHER_OPTIONS: Record<string, string> = {internal: '--parent or --nut', tightening: '--torque, --preload or --utilisation', parentData: '--parent'};
 
 /** A FieldError for a key of a group, with the accepted range of its row in `units`. */
-export function fieldError(group: InputGroup, key: string, message: string, source: FieldError['source'], units: UnitSystem = 'si'): FieldError {
+export function fieldError(group: InputGroup, key: string, message: string, source: FieldError['source'], units: UnitSystem = 'si', ascii = true): FieldError {
   const row = rowOf(group, key);
   const out: FieldError = {group, key, field: fieldId({group, key}), option: row?.cli?.name ?? OTHER_OPTIONS[key] ?? `--${key}`, label: row?.label ?? key, message, source};
   if (row && source !== 'core') {
-    const accepted = rangeText(row, units, true);
+    const accepted = rangeText(row, units, ascii);
     if (accepted) out.accepted = accepted;
-    const optionAccepted = row.cli ? optionRangeText(row, units) : accepted;
+    const optionAccepted = row.cli ? optionRangeText(row, units) : rangeText(row, units, true);
     if (optionAccepted) out.optionAccepted = optionAccepted;
     if (source === 'needed' && row.example) out.example = row.example;
   }

@@ -72,11 +72,9 @@ export interface FieldRow {
   table?: PickSource;
   /** May be left empty (the core then uses its default or leaves it out). */
   optional: boolean;
-  /** Needed although `optional` (empty is fine in some cases only): e.g. the engaged length for a tapped hole (a nut's is its height). */
-  required?: (v: FormValues) => boolean;
   /** Whole numbers only (shown without decimals). */
   integer?: boolean;
-  /** What applies when the field is empty, shown in its place ("from grade"). */
+  /** What applies when the field is empty, shown in its place ("from grade"); a needed field may have one when the resolver fills it (a nut's engaged length). */
   empty?: string;
   /** One line shown under the fields in the workbench when this one is selected. */
   help: string;

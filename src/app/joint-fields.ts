@@ -56,7 +56,7 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'nutFlats', label: 'Nut flats s', empty: 'standard nut', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut, section: 'joint',
     cli: {name: '--nut-flats', arg: 'LEN', help: 'nut width across flats s (default ISO 4032)'},
     help: 'Width across flats of the nut; empty = standard for the size.'},
-  {group: 'joint', key: 'engagement', label: 'Engaged length', empty: 'nut height', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true, required: isTapped, example: '15mm', section: 'joint',
+  {group: 'joint', key: 'engagement', label: 'Engaged length', empty: 'nut: its height', step: 'engagement', kind: 'quantity', dimension: 'length', optional: false, example: '15mm', section: 'joint',
     cli: {name: '--engage', arg: 'LEN', help: 'engaged length from the loaded face (default for a nut: its height)'},
     help: 'From the loaded face, chamfer included; empty for a nut = its height. 12mm, 0.5in.'},
   {group: 'joint', key: 'chamfer', label: 'Chamfer', step: 'engagement', kind: 'quantity', dimension: 'length', optional: true, section: 'joint',
