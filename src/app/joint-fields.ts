@@ -21,7 +21,8 @@ export const JOINT_SECTIONS: readonly {id: JointSection; title: string}[] = [
   {id: 'loads', title: 'Loads and margins'},
 ];
 
-type JointRow = FieldRow & {group: 'joint'; section?: JointSection};
+/** A joint row; `section` places its option in `check --help`. Rows of a feature may live in a file of their own and be spread in below. */
+export type JointRow = FieldRow & {group: 'joint'; section?: JointSection};
 
 export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'thread', label: 'Designation', step: 'thread', kind: 'thread', optional: false, example: 'M10x1.5-6H/6g', section: 'joint',

@@ -45,13 +45,14 @@ export function rowHelp(rows: readonly FieldRow[]): string[] {
 export function rowSummary(rows: readonly FieldRow[], width = 80): string[] {
   const words = rows.flatMap(r => (r.cli ? [`${r.cli.name}${r.cli.arg ? ` ${r.cli.arg}` : ''}`] : []));
   const lines: string[] = [];
-  let line = ' ';
+  let line = '';
   for (const [i, w] of words.entries()) {
     const piece = `${w}${i < words.length - 1 ? ',' : ''}`;
-    if (line.length + 1 + piece.length > width) {
+    if (line !== '' && line.length + 1 + piece.length > width) {
       lines.push(line);
-      line = ` ${piece}`;
-    } else line = `${line} ${piece}`;
+      line = '';
+    }
+    line = line === '' ? `  ${piece}` : `${line} ${piece}`;
   }
   lines.push(line);
   return lines;
