@@ -41,15 +41,15 @@ ${JOINT_OPTIONS_HELP}
 The hole and the repair:
 ${rowHelp(HOLE_ROWS).join('\n')}
   --margin M           required margin, 0.5 to 5 (default 1: bolt breaks first)
-  --solid-table T       solid key-locked insert table: a name from tapwright
-                        inserts list, or a JSON file; default: your first
-                        stored table, else the shipped demo table (demo
-                        values: use the insert maker's data)
-  --preset NAME         joint and hole state from a saved or shipped preset
+  --solid-table T      solid key-locked insert table: a name from tapwright
+                       inserts list, or a JSON file; default: your first
+                       stored table, else the shipped demo table (demo
+                       values: use the insert maker's data)
+  --preset NAME        joint and hole state from a saved or shipped preset
 Output:
   --format text|markdown|json   markdown: the work-order report
-  --json                the plan as JSON, always SI (same as --format json)
-  --help                this text
+  --json               the plan as JSON, always SI (same as --format json)
+  --help               this text
 
 Lengths take units (12mm, 0.5in); a bare number is in the --units system.
 Exit codes: 0 at least one option meets the margin; 3 computed, but none

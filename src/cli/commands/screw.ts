@@ -29,8 +29,8 @@ Options:
 ${rowHelp(SCREW_ROWS).join('\n')}
   --units U            si (default) or us: the text output, and the unit of a
                        bare number (N, mm, MPa, m/s or lbf, in, ksi, ft/min)
-  --format F            text (default) or json; --json is short for json
-  --help                this text
+  --format F           text (default) or json; --json is short for json
+  --help               this text
 
 Torques: Shigley, Mechanical Engineering Design, 9th ed., Eqs. 8-1 to 8-6.
 With a friction range the raise torque uses the max and lowering and
