@@ -6,6 +6,7 @@ import {parseArgs, type ParseArgsConfig} from 'node:util';
 import {parseQuantity, type Dimension, acceptedUnits} from '../core/units.js';
 import type {Range} from '../core/types.js';
 import {UsageError} from './io.js';
+import {parseUnitSystem} from '../app/units-option.js';
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 
@@ -106,11 +107,9 @@ export function range(option: string, text: string, rule: QuantityRule = {}): Ra
   return {min, max};
 }
 
-/** --units si|us, the same check and wording in every command; `si` when not given. */
+/** --units si|us, the same check and wording in every command (src/app/units-option.ts); `si` when not given. */
 export function unitsOption(values: ParsedOptions['values']): 'si' | 'us' {
-  const u = (str(values, 'units') ?? 'si').trim().toLowerCase();
-  if (u !== 'si' && u !== 'us') throw new UsageError(`--units is "${u}"; accepted: si, us`, '--units');
-  return u;
+  return parseUnitSystem(str(values, 'units'));
 }
 
 /**

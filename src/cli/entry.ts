@@ -28,12 +28,8 @@ async function launchWorkbench(args: string[], cliIo: CliIo): Promise<number> {
     for (const key of ['CI', 'CONTINUOUS_INTEGRATION']) if (key in process.env) process.env[key] = 'false';
   }
   // A bad option or no terminal is answered here, without loading the workbench.
-  const {checkStart, printWithoutTerminal} = await import('../ui/launch-plain.js');
-  const start = checkStart(args, cliIo);
-  if ('code' in start) return start.code;
-  if (start.why) return printWithoutTerminal(start.why, start.opts, start.tenv, cliIo);
-  const launch = await loadWorkbench(cliIo);
-  return launch(args, cliIo);
+  const {startWorkbench} = await import('./launch-plain.js');
+  return startWorkbench(args, cliIo, () => loadWorkbench(cliIo));
 }
 
 // A closed pipe (`tapwright threads M10 | head -1`) is not an error worth a stack trace.

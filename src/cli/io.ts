@@ -1,19 +1,11 @@
 /**
- * The CLI's view of the outside world. Commands never touch `process` directly,
- * so tests can run them in-process with captured output.
+ * The CLI's view of the outside world. CliIo and UsageError live in src/app
+ * (the store and the no-terminal report use them too); re-exported here.
  */
-export interface CliIo {
-  /** Write to standard output (results, JSON). */
-  out(text: string): void;
-  /** Write to standard error (messages, warnings). */
-  err(text: string): void;
-  env: Record<string, string | undefined>;
-  cwd: string;
-  stdinIsTTY: boolean;
-  stdoutIsTTY: boolean;
-  /** Current time; injected so reports are reproducible in tests. */
-  now(): Date;
-}
+import type {CliIo} from '../app/io.js';
+
+export type {CliIo} from '../app/io.js';
+export {UsageError} from '../app/errors.js';
 
 /** Exit codes, documented in `tapwright --help`. */
 export const EXIT = {
@@ -23,18 +15,6 @@ export const EXIT = {
   /** Computed, but at least one check is at level `fail`. */
   fail: 3,
 } as const;
-
-/** Bad input or usage: the message names the option and the accepted range. */
-export class UsageError extends Error {
-  constructor(
-    message: string,
-    /** The option or argument at fault, e.g. "--engage". */
-    readonly option?: string,
-  ) {
-    super(message);
-    this.name = 'UsageError';
-  }
-}
 
 /** An in-memory CliIo for tests and for embedding. */
 export function memoryIo(overrides: Partial<CliIo> = {}): CliIo & {stdout: () => string; stderr: () => string} {

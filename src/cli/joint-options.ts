@@ -1,58 +1,96 @@
 /**
- * The joint options of `tapwright check`, for other commands that take a joint
- * on the command line (`presets save`). The mapping itself is check's own
- * (buildDraft and validate in commands/check.ts), so a joint saved as a preset
- * is read exactly as `check` would read the same options.
+ * The joint on the command line (`check`, `repair`, `presets save`): its options
+ * and --help lines generated from the field table (src/app/joint-fields.ts),
+ * the checks between options (one way of tightening, a nut or a tapped hole),
+ * and the one resolver (src/app/resolve.ts) with the user's settings and
+ * materials, so every command reads a joint exactly as the workbench does.
  */
-import {resolveGeometry, sizeWords} from '../core/joint/resolve.js';
-import {nutDimensions} from '../core/materials/index.js';
-import type {JointInput, JointInputDraft} from '../core/joint/input.js';
+import {JOINT_ROWS, JOINT_SECTIONS} from '../app/joint-fields.js';
+import {coreFieldError, resolveJointInput, wantsUserMaterials} from '../app/resolve.js';
+import {optionMessage} from '../app/field-table.js';
+import type {FieldError} from '../app/fields-types.js';
+import type {JointInput, JointInputDraft, UserParentMaterial} from '../core/joint/input.js';
+import type {UnitSystem} from '../core/units.js';
 import {unitsOption, type OptionSpec, type ParsedOptions} from './args.js';
-import {UsageError} from './io.js';
-import {buildDraft, optionFor, validate} from './commands/check.js';
+import {helpLine, overDraft, readRowOptions, rowHelp, rowOptions, rowSummary} from './field-options.js';
+import {UsageError, type CliIo} from './io.js';
+import {defaultScatter} from './default-scatter.js';
 
-/** Every joint option of check (issue 3), plus --scatter, --margin and --units (how bare numbers are read). */
-export const JOINT_OPTIONS = Object.fromEntries(
-  [
-    'thread', 'bolt', 'bolt-rm', 'bolt-rp', 'parent', 'parent-rm', 'parent-shear', 'nut', 'nut-height', 'nut-flats',
-    'engage', 'chamfer', 'hole-depth', 'torque', 'preload', 'utilisation', 'mu-thread', 'mu-head', 'nut-factor',
-    'bearing-diameter', 'service-load', 'scatter', 'margin', 'units',
-  ].map(name => [name, {type: 'string'}]),
-) as OptionSpec;
+/** Every joint option of check, plus --units (how bare numbers are read). */
+export const JOINT_OPTIONS: OptionSpec = {...rowOptions(JOINT_ROWS), units: {type: 'string'}};
 
-export {optionFor};
+const UNITS_HELP = helpLine('  --units si|us', 'display units; a bare number is read in these units (mm, N, N·m, MPa or in, lbf, ft·lbf, ksi); JSON is SI');
 
-/** Help lines for the joint options (80 columns); `tapwright check --help` explains each. */
-export const JOINT_OPTIONS_HELP = [
-  '  --thread TEXT            thread and tolerance class: M10x1.5-6H/6g, 3/8-16 UNC',
-  '  --bolt ID | --bolt-rm, --bolt-rp        bolt grade, or custom Rm and Rp0.2',
-  '  --parent ID | --parent-rm, --parent-shear   tapped hole: parent material',
-  '  --nut CLASS [--nut-height L] [--nut-flats L]   a nut instead of a tapped hole',
-  '  --engage L, --chamfer L, --hole-depth L    engagement and hole (12mm, 0.5in)',
-  '  --torque T | --preload F | --utilisation R    how it is tightened',
-  '  --mu-thread MU, --mu-head MU (value or min..max), --nut-factor K',
-  '  --bearing-diameter L, --service-load F, --scatter A, --margin M',
-  '  --units si|us            unit of a bare number (JSON is always SI)',
-  '  Ranges and defaults: tapwright check --help.',
-].join('\n');
+/** The joint options for `check --help`, by section, each with its line. */
+export function jointHelp(): string {
+  return JOINT_SECTIONS.map(s => [s.title, ...rowHelp(JOINT_ROWS.filter(r => r.section === s.id))].join('\n')).join('\n');
+}
+
+/** The joint options in a few lines, for commands that take a joint (ranges and defaults: check --help). */
+export const JOINT_OPTIONS_HELP = [...rowSummary(JOINT_ROWS), ...UNITS_HELP, '  Ranges and defaults: tapwright check --help.'].join('\n');
+
+export {UNITS_HELP};
+
+/** The joint draft from the options over `base` (a preset's joint); throws UsageError for options that contradict. */
+export function jointDraftFromOptions(values: ParsedOptions['values'], units: UnitSystem, base: Partial<JointInputDraft> | undefined): Partial<JointInputDraft> {
+  const has = (o: string): boolean => values[o.slice(2)] !== undefined;
+  const tight = ['--torque', '--preload', '--utilisation'].filter(has);
+  if (tight.length > 1) throw new UsageError(`${tight.join(' and ')} contradict each other; give one way of tightening`, tight[1]);
+  const d: Record<string, unknown> = overDraft(base, readRowOptions(JOINT_ROWS, values, units));
+  if (tight[0]) d.tightening = tight[0].slice(2);
+
+  const tappedOpts = ['--parent', '--parent-rm', '--parent-shear', '--hole-depth'].filter(has);
+  const nutOpts = ['--nut', '--nut-height', '--nut-flats'].filter(has);
+  if (tappedOpts.length && nutOpts.length) {
+    throw new UsageError(`${nutOpts[0]} is for a nut and ${tappedOpts[0]} for a tapped hole; give one kind of internal thread`, nutOpts[0]);
+  }
+  if (nutOpts.length) {
+    if (!has('--nut') && d.internal !== 'nut') throw new UsageError(`${nutOpts[0]} applies to a nut; give --nut CLASS too`, nutOpts[0]);
+    d.internal = 'nut';
+    for (const k of ['parent', 'parentRm', 'parentShear', 'holeDepth', 'parentData']) delete d[k];
+  } else if (tappedOpts.length) {
+    d.internal = 'tapped';
+    for (const k of ['nutClass', 'nutHeight', 'nutFlats']) delete d[k];
+  }
+  return d as Partial<JointInputDraft>;
+}
+
+/** A UsageError for a FieldError: its option and the message in the command line's words. */
+export function usageErrorOf(e: FieldError): UsageError {
+  return new UsageError(optionMessage(e), e.option);
+}
+
+/** Core errors that name a joint field become UsageErrors naming the option; anything else is rethrown as it is. */
+export function jointUsageError(e: unknown, units: UnitSystem): unknown {
+  const f = coreFieldError(e, 'joint', units);
+  return f ? usageErrorOf(f) : e;
+}
+
+/** The user's own parent materials, read from the store only when the draft names a material the library lacks. */
+async function userMaterialsFor(draft: Partial<JointInputDraft>, io: CliIo): Promise<readonly UserParentMaterial[]> {
+  if (!wantsUserMaterials(draft)) return [];
+  const {openPresetStore} = await import('../store/presets.js');
+  const {configDir} = await import('../store/paths.js');
+  const store = openPresetStore(configDir(io.env));
+  for (const w of store.warnings()) io.err(`tapwright: ${w}\n`);
+  return store.userMaterials();
+}
 
 /**
- * A JointInput from parsed options over `base` (a preset's joint, to change
- * some values). Throws UsageError naming the option and the accepted range.
+ * The JointInput from the options over `base`, through the one resolver with
+ * the user's settings (scatter) and materials. Throws UsageError naming the
+ * option and the accepted range.
  */
-export function jointFromOptions(values: ParsedOptions['values'], base?: JointInputDraft): JointInput {
-  const u = unitsOption(values);
-  const draft = buildDraft(values, u, base);
-  if (draft.thread === undefined) throw new UsageError('--thread is needed, e.g. --thread M10x1.5-6H/6g (or --from PRESET)', '--thread');
-  if (draft.engagement === undefined && draft.internal === 'nut') {
-    // As check does: a nut engages over its height (given, or ISO 4032 m min).
-    if (draft.nutHeight !== undefined) draft.engagement = draft.nutHeight;
-    else {
-      const g = resolveGeometry(draft.thread);
-      const dims = nutDimensions(g.nominal);
-      if (!dims) throw new UsageError(`--nut-height or --engage is needed: no tabulated nut height for ${sizeWords(g)}`, '--nut-height');
-      draft.engagement = dims.heightMin;
-    }
-  }
-  return validate(draft, u);
+export async function jointFromOptions(
+  values: ParsedOptions['values'],
+  io: CliIo,
+  base?: Partial<JointInputDraft>,
+  opts: {settings?: boolean} = {},
+): Promise<{input: JointInput; units: UnitSystem}> {
+  const units = unitsOption(values);
+  const draft = jointDraftFromOptions(values, units, base);
+  const settings = opts.settings === false ? {} : {settings: {scatterDefault: defaultScatter(io)}};
+  const r = resolveJointInput(draft, {units, ...settings, userMaterials: await userMaterialsFor(draft, io)});
+  if (r.errors) throw usageErrorOf(r.errors[0]!);
+  return {input: r.input, units};
 }

@@ -3,7 +3,7 @@
  * message for the user; it extends UsageError so the CLI maps it to exit 2
  * and prints the message without a stack trace.
  */
-import {UsageError} from '../cli/io.js';
+import {UsageError} from '../app/errors.js';
 
 export class StoreError extends UsageError {
   constructor(message: string, option?: string) {

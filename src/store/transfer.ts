@@ -11,6 +11,8 @@ import {VersionError, migrate} from './migrate.js';
 import {CURRENT_SCHEMA_VERSION, PresetSchema, describeZodError, type Preset} from './schema.js';
 import {keyOf, type State} from './store-file.js';
 import {describeFsError, errCode, writeFileAtomic} from './file-ops.js';
+import {resolveHoleInput, resolveJointInput, resolveScrewInput} from '../app/resolve.js';
+import {labelMessage} from '../app/field-table.js';
 
 export interface ImportOptions {
   /** Replace saved presets of the same names (otherwise a clash refuses the whole import). */
@@ -86,6 +88,10 @@ export function importPresets(file: string): Incoming {
     const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${raw.name.slice(0, 64)}")` : ''}`;
     const r = PresetSchema.safeParse(raw);
     if (!r.success) return void problems.push(`${label}: ${describeZodError(r.error)}`);
+    // The inputs as every face reads them (src/app/resolve.ts): a preset that could not be computed is refused now.
+    const resolved = [r.data.joint && resolveJointInput(r.data.joint), r.data.repair && resolveHoleInput(r.data.repair), r.data.screw && resolveScrewInput(r.data.screw)];
+    const bad = resolved.flatMap(x => x?.errors ?? []);
+    if (bad.length) return void problems.push(`${label}: ${bad.map(e => `${e.group === 'hole' ? 'repair' : e.group}.${e.key}: ${labelMessage(e)}`).join('; ')}`);
     if (seen.has(keyOf(r.data.name))) return void problems.push(`${label}: the name appears twice in the file`);
     seen.add(keyOf(r.data.name));
     presets.push(r.data);

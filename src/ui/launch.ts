@@ -1,19 +1,19 @@
 /**
- * `tapwright` with no command: start the interactive workbench (where there is
- * no terminal, launch-plain.ts prints the check report of the preset instead).
+ * `tapwright` with no command: start the interactive workbench (the bin checks
+ * the options and the terminal first: src/cli/launch-plain.ts, which prints the
+ * check report of the preset where there is no terminal).
  * Owns the terminal while the workbench runs: the alternate screen, raw mode
  * through Ink, and its restoration on quit, Ctrl-C, SIGTERM and SIGHUP, with
  * unsaved edits kept as a draft for the next start.
  */
 import React from 'react';
 import {render} from 'ink';
-import type {CliIo} from '../cli/io.js';
+import type {CliIo} from '../app/io.js';
 import {DEFAULT_PRESET} from '../store/shipped.js';
 import type {SettingsHandle} from '../store/settings.js';
-import {wantsAscii, wantsColor} from './terminal/env.js';
+import {LaunchUsageError, parseLaunchArgs, wantsAscii, wantsColor, whyNoWorkbench, type TerminalEnv} from './terminal/env.js';
 import {createFrameWriter} from './terminal/frame-writer.js';
 import {yogaReady} from './terminal/yoga-ready.js';
-import {checkStart, printWithoutTerminal} from './launch-plain.js';
 import {configDir} from '../store/paths.js';
 import {readSettingsFile} from '../store/settings-schema.js';
 import {realServices} from './real-services.js';
@@ -34,10 +34,21 @@ const RESET_STYLE = '\u001B[0m';
 
 /** Start the workbench; resolves with the exit code. */
 export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {stdin: process.stdin, stdout: process.stdout}): Promise<number> {
-  const start = checkStart(args, io);
-  if ('code' in start) return start.code;
-  const {opts, tenv} = start;
-  if (start.why) return printWithoutTerminal(start.why, opts, tenv, io);
+  // The bin has checked the options and the terminal already (src/cli/launch-plain.ts); a direct caller gets the same refusals.
+  let opts;
+  try {
+    opts = parseLaunchArgs(args);
+  } catch (e) {
+    if (!(e instanceof LaunchUsageError)) throw e;
+    io.err(`tapwright: ${e.message}\n`);
+    return 2;
+  }
+  const tenv: TerminalEnv = {env: io.env, stdinIsTTY: io.stdinIsTTY, stdoutIsTTY: io.stdoutIsTTY};
+  const why = whyNoWorkbench(tenv);
+  if (why) {
+    io.err(`tapwright: the interactive workbench needs a terminal (${why}); see tapwright --help\n`);
+    return 2;
+  }
   const dir = configDir(io.env);
   const quick = readSettingsFile(dir);
   // conf (and the JSON-schema validator it brings) is loaded only when the settings

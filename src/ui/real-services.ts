@@ -19,6 +19,8 @@ import {withUserMaterial} from '../store/user-materials.js';
 import type {UserParentMaterial} from '../core/joint/input.js';
 import type {SolidInsertTable} from '../core/repair/index.js';
 import {DEFAULT_PRESET} from '../store/shipped.js';
+import {FILES} from '../store/paths.js';
+import {readSettingsQuick} from '../store/settings-schema.js';
 import {clearDraft, loadDraft, saveDraft} from '../store/draft.js';
 import {openPresetStore, type Preset, type PresetStore} from '../store/presets.js';
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
@@ -116,8 +118,23 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     if (cached?.key !== key) cached = {key, materials: store.userMaterials(), solidTable: defaultSolidTable(store)};
     return cached;
   };
+  // The settings file, read again only when it changed (the readout asks on every keystroke).
+  let settingsCache: {key: string; scatterDefault: number} | undefined;
+  const settings = () => {
+    let key = 'none';
+    try {
+      const st = fs.statSync(path.join(opts.configDir, FILES.settings));
+      key = `${st.mtimeMs}:${st.size}`;
+    } catch {
+      // No settings file: the defaults.
+    }
+    if (settingsCache?.key !== key) settingsCache = {key, scatterDefault: readSettingsQuick(opts.configDir).scatterDefault};
+    return {scatterDefault: settingsCache.scatterDefault};
+  };
   return {
     store,
+    settings,
+    userMaterials: () => mine().materials,
     // The user's own parent materials from the store count as well as the library's.
     check: (input: JointInput) => checkJoint(withUserMaterial(input, mine().materials)),
     checkScrew: (input: ScrewInput) => checkScrew(input),

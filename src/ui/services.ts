@@ -4,7 +4,7 @@
  * The workbench computes nothing itself: every number comes through here.
  */
 import type {CheckResult} from '../core/joint/result.js';
-import type {JointInput} from '../core/joint/input.js';
+import type {JointInput, UserParentMaterial} from '../core/joint/input.js';
 import type {RepairInput} from '../core/repair/input.js';
 import type {RepairPlan} from '../core/repair/types.js';
 import type {Provenance} from '../core/types.js';
@@ -98,6 +98,10 @@ export interface WorkbenchServices {
   report?: (format: 'text' | 'markdown', result: CheckResult, input: JointInput, meta: ReportMeta) => string;
   /** Write a file; throws when it exists and overwrite is false. */
   writeFile(path: string, text: string, overwrite: boolean): void;
+  /** The user's settings the joint depends on (the default scatter); absent: none. */
+  settings?: () => {scatterDefault?: number};
+  /** The user's own parent materials, attached to a joint whose parent names one. */
+  userMaterials?: () => readonly UserParentMaterial[];
   /** Where the preset name comes from at start: the shipped default preset. */
   defaultPreset: string;
   now(): Date;

@@ -108,13 +108,13 @@ describe('tapwright screw exit codes and bad input', () => {
     expect(out).toMatch(/FAIL\s+back-drives/);
   });
   const bad: [string[], RegExp][] = [
-    [['--load', '1kN', '--nut-length', '40'], /--thread is required/],
+    [['--load', '1kN', '--nut-length', '40'], /--thread is needed/],
     [['--thread', 'M10', '--load', '1kN', '--nut-length', '40'], /--thread.*fastener thread/],
-    [['--thread', 'Tr24x5', '--nut-length', '40'], /--load is required/],
+    [['--thread', 'Tr24x5', '--nut-length', '40'], /--load is needed/],
     [['--thread', 'Tr24x5', '--load=-5kN', '--nut-length', '40'], /--load.*0 to 100 MN/],
     [['--thread', 'Tr24x5', '--load', '-5kN', '--nut-length', '40'], /--load/],
     [['--thread', 'Tr24x5', '--load', '5 kPa', '--nut-length', '40'], /--load.*not a force unit/],
-    [['--thread', 'Tr24x5', '--load', '5kN'], /--nut-length is required/],
+    [['--thread', 'Tr24x5', '--load', '5kN'], /--nut-length is needed/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '0.1'], /--nut-length.*0\.5 to 2000 mm/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--starts', '9'], /--starts.*1 to 8/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--starts', '1.5'], /--starts.*whole number/],

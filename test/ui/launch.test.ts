@@ -3,7 +3,13 @@ import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {describe, expect, it} from 'vitest';
 import {memoryIo} from '../../src/cli/io.js';
-import {launch} from '../../src/ui/launch.js';
+import {startWorkbench} from '../../src/cli/launch-plain.js';
+
+/** `tapwright` with no command as the bin runs it; the workbench itself must not load in these cases. */
+const launch = (args: string[], io: Parameters<typeof startWorkbench>[1]) =>
+  startWorkbench(args, io, async () => {
+    throw new Error('the workbench must not load here');
+  });
 import {parseLaunchArgs, wantsAscii, wantsColor, whyNoWorkbench} from '../../src/ui/terminal/env.js';
 
 const tmp = () => mkdtempSync(path.join(tmpdir(), 'tw-ui-'));
@@ -36,7 +42,7 @@ describe('launch without a terminal', () => {
   it('rejects an unknown option naming the accepted ones', async () => {
     const io = memoryIo({stdinIsTTY: true, stdoutIsTTY: true});
     expect(await launch(['--units', 'imperial'], io)).toBe(2);
-    expect(io.stderr()).toContain('--units is "imperial"; accepted: si or us');
+    expect(io.stderr()).toContain('--units is "imperial"; accepted: si, us');
     expect(() => parseLaunchArgs(['--frobnicate'])).toThrow(/unknown option --frobnicate for the workbench \(accepted: --preset NAME, --ascii/);
     expect(parseLaunchArgs(['--preset=a b', '--ascii', '--units', 'US'])).toEqual({preset: 'a b', ascii: true, units: 'us'});
   });

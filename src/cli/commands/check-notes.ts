@@ -4,6 +4,7 @@
  * meanings of `tapwright presets save`). Validated by the store's NotesSchema, the one source
  * of the accepted lengths.
  */
+import {textLimit} from '../../app/field-table.js';
 import {UsageError} from '../io.js';
 import {str, type OptionSpec, type ParsedOptions} from '../args.js';
 import type {WorkOrderNotes} from '../../report/index.js';
@@ -43,7 +44,7 @@ export async function workOrderNotes(values: ParsedOptions['values'], base: Work
     const field = NOTE_OPTIONS[o] as keyof WorkOrderNotes;
     const r = NotesSchema.shape[field].safeParse(notes[field]);
     if (!r.success) {
-      const max = (NotesSchema.shape[field].unwrap() as {maxLength?: number | null}).maxLength;
+      const max = textLimit(NotesSchema, field);
       throw new UsageError(`${o} is ${notes[field]?.length ?? 0} characters long; accepted: at most ${max ?? '?'} characters`, o);
     }
   }

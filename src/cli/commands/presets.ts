@@ -2,19 +2,17 @@
  * `tapwright presets`: saved joints from the command line. The store itself
  * (locking, atomic writes, recovery) is src/store; this file maps options to it.
  */
-import {withUserMaterial} from '../../store/user-materials.js';
 import path from 'node:path';
 import type {Command} from '../command.js';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {parseOptions, str, type OptionSpec, type ParsedOptions} from '../args.js';
-import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, optionFor} from '../joint-options.js';
+import {JOINT_OPTIONS, JOINT_OPTIONS_HELP, jointFromOptions, jointUsageError} from '../joint-options.js';
 import {configDir} from '../../store/paths.js';
 import {openPresetStore, type Preset, type PresetStore, type PresetSummary} from '../../store/presets.js';
 import {MAX_IMPORT_TEXT} from '../../store/guard.js';
 import {NAME_RULE} from '../../store/schema.js';
 import {describePreset} from '../../store/describe.js';
 import {resolveJoint} from '../../core/joint/resolve.js';
-import {JointInputError} from '../../core/joint/errors.js';
 
 const HELP = `tapwright presets - saved joints: list, show, save, rename, delete, import,
 export
@@ -132,15 +130,17 @@ async function save(args: string[], io: CliIo): Promise<number> {
     if (jointGiven) throw new UsageError(`--from "${base.name}" is a power-screw preset; joint options do not apply to it`, '--from');
     preset = {...base, name, notes: notesFrom(p.values, base.notes)};
   } else {
+    // Saved as typed: the settings' scatter is not written into the preset (it applies when the preset is used).
+    const {input, units} = await jointFromOptions(p.values, io, base?.joint, {settings: false});
+    const {parentData, ...typed} = input;
+    const joint = base?.joint?.parentData !== undefined && parentData !== undefined ? {...typed, parentData} : typed;
     try {
-      const joint = jointFromOptions(p.values, base?.joint);
       // Unknown thread, grade or material: refused now, not when the preset is used (the user's own materials count).
-      resolveJoint(withUserMaterial(joint, store.userMaterials()));
-      preset = {...(base ?? {kind: 'joint' as const, savedAt: '', revision: 1}), name, kind: 'joint', joint, notes: notesFrom(p.values, base?.notes)};
+      resolveJoint(input);
     } catch (e) {
-      if (e instanceof JointInputError) throw new UsageError(`${optionFor(e.field)}: ${e.message}`, optionFor(e.field));
-      throw e;
+      throw jointUsageError(e, units);
     }
+    preset = {...(base ?? {kind: 'joint' as const, savedAt: '', revision: 1}), name, kind: 'joint', joint, notes: notesFrom(p.values, base?.notes)};
   }
   const out = store.save({...preset, savedAt: undefined, revision: undefined}, {overwrite: p.values.overwrite === true});
   if (p.values.json) json(io, out);

@@ -34,7 +34,7 @@ export function rangeText(f: FieldDef, units: UnitSystem, ascii: boolean): strin
 export function formatField(f: FieldDef, value: unknown, units: UnitSystem, ascii: boolean): string {
   if (value === undefined || value === null || value === '') {
     const d = fieldBounds(f.id).default;
-    if (d === undefined || d === null) return f.optional ? (f.empty ?? '-') : '(needed)';
+    if (d === undefined || d === null) return f.empty ?? (f.optional ? '-' : '(needed)');
     const shown = formatField(f, d, units, ascii);
     return shown.length <= 4 ? `${shown} (default)` : `${shown} (def.)`;
   }

@@ -3,6 +3,7 @@
  * the options: colour, ASCII mode, and whether the workbench can run at all.
  * Plain functions of their inputs so every rule is testable without a terminal.
  */
+import {parseUnitSystem} from '../../app/units-option.js';
 
 export interface TerminalEnv {
   env: Record<string, string | undefined>;
@@ -79,9 +80,11 @@ export function parseLaunchArgs(args: string[]): LaunchOptions {
     else if (name === '--color') out.color = true;
     else if (name === '--no-color') out.color = false;
     else if (name === '--units') {
-      const v = value().toLowerCase();
-      if (v !== 'si' && v !== 'us') throw new LaunchUsageError(`--units is "${v}"; accepted: si or us`);
-      out.units = v;
+      try {
+        out.units = parseUnitSystem(value());
+      } catch (e) {
+        throw new LaunchUsageError(e instanceof Error ? e.message : String(e));
+      }
     } else {
       throw new LaunchUsageError(
         `unknown option ${name} for the workbench (accepted: --preset NAME, --ascii, --units si|us, --color, --no-color); commands: see tapwright --help`,

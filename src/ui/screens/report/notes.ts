@@ -5,7 +5,7 @@
  * of truth; the values live in FormValues.notes, so they mark the preset as
  * changed, go into the draft and are saved with the preset.
  */
-import * as z from 'zod';
+import {textLimit} from '../../../app/field-table.js';
 import {NotesSchema, type Notes} from '../../../store/schema.js';
 import type {FormValues} from '../../state/fields.js';
 import {fail, info, type WorkbenchState} from '../../state/workbench.js';
@@ -20,8 +20,7 @@ export interface NoteField {
 }
 
 function maxOf(key: NoteKey): number {
-  const inner = NotesSchema.shape[key].unwrap() as z.ZodString;
-  return inner.maxLength ?? 200;
+  return textLimit(NotesSchema, key) ?? 200;
 }
 
 export const NOTE_FIELDS: readonly NoteField[] = [
