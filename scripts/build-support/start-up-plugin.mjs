@@ -55,10 +55,11 @@ export function patchYogaLoader(source) {
 
 const WIDTH_EXPORT = 'export default function stringWidth(';
 
-export function patchStringWidth(source) {
+export function patchStringWidth(source, {narrow = true, segmenter = true} = {}) {
   const n = source.split(WIDTH_EXPORT).length - 1;
   if (n !== 1) throw new Error(`build: string-width changed (its default export was found ${n} times, expected once); update scripts/build-support/start-up-plugin.mjs`);
-  const lazy = patchSegmenter(source, 'const segmenter = new Intl.Segmenter();', 'segmenter', '', 'string-width (segmenter)', true);
+  const lazy = segmenter ? patchSegmenter(source, 'const segmenter = new Intl.Segmenter();', 'segmenter', '', 'string-width (segmenter)', true) : source;
+  if (!narrow) return lazy;
   return (
     `import {visibleNarrowWidth as __twNarrowWidth} from ${JSON.stringify(NARROW)};\n` +
     lazy.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
@@ -177,46 +178,50 @@ export function patchConf(source) {
   return s;
 }
 
+/**
+ * Every patch by name. `TAPWRIGHT_BUILD_SKIP_PATCH=name[,name]` builds without those
+ * patches (the rest stay on): `npm run bench -- --patches` builds with each one off in
+ * turn to measure what it saves. An unknown name fails the build.
+ */
+export const PATCHES = {
+  'ink-output': "Ink's Output: per-line caches kept across frames, one shared blank cell, no slice of a line that fits its clip",
+  'style-diff': "ansi-tokenize: no style diff between two cells of the same style",
+  'narrow-width': 'string-width: code-point count for text made only of one-cell characters',
+  'lazy-segmenter': 'string-width, slice-ansi, ansi-tokenize: Intl.Segmenter made on first use; simple text split without one',
+  'yoga-fetch': "yoga-layout: its embedded wasm decoded without fetch (undici)",
+  'devtools-stub': "Ink's DevTools module (and ws) replaced by a stub",
+  'conf-unused': 'conf: ajv, ajv-formats and semver replaced by a stub',
+  'conf-lazy-builtins': 'conf: node:crypto and node:assert loaded on first use',
+  'terminal-size-lazy': 'terminal-size: node:child_process loaded on first use',
+  'signal-exit-assert': 'signal-exit: its one callback check made without node:assert',
+};
+
+/** The set of patch names switched off by TAPWRIGHT_BUILD_SKIP_PATCH. */
+export function skippedPatches(value = process.env.TAPWRIGHT_BUILD_SKIP_PATCH ?? '') {
+  const names = value.split(',').map(x => x.trim()).filter(Boolean);
+  for (const n of names) if (!(n in PATCHES)) throw new Error(`build: TAPWRIGHT_BUILD_SKIP_PATCH names an unknown patch "${n}"; known: ${Object.keys(PATCHES).join(', ')}`);
+  return new Set(names);
+}
+
+const load = (b, filter, patch) => b.onLoad({filter}, async args => ({contents: patch(await readFile(args.path, 'utf8')), loader: 'js'}));
+
 export const startUpPlugin = {
   name: 'tapwright-start-up',
   setup(b) {
-    b.onResolve({filter: /^(?:ajv\/dist\/2020\.js|ajv-formats|semver)$/}, args => (/[\\/]conf[\\/]dist[\\/]/.test(args.importer) ? {path: CONF_UNUSED_STUB} : undefined));
-    b.onResolve({filter: /^\.\/devtools\.js$/}, args => (/[\\/]ink[\\/]build$/.test(args.resolveDir) ? {path: DEVTOOLS_STUB} : undefined));
-    b.onLoad({filter: /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/}, async args => ({
-      contents: patchYogaLoader(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]ink[\\/]build[\\/]output\.js$/}, async args => ({
-      contents: patchInkOutput(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]styledChars\.js$/}, async args => ({
-      contents: patchStyledChars(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/}, async args => ({
-      contents: patchSegmenter(await readFile(args.path, 'utf8'), "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}", 'slice-ansi (segmenter)'),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/}, async args => ({
-      contents: patchSegmenter(await readFile(args.path, 'utf8'), 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', 'undefined, { granularity: "grapheme" }', 'ansi-tokenize (segmenter)', true),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]string-width[\\/]index\.js$/}, async args => ({
-      contents: patchStringWidth(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]terminal-size[\\/]index\.js$/}, async args => ({
-      contents: patchTerminalSize(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]conf[\\/]dist[\\/]source[\\/]index\.js$/}, async args => ({
-      contents: patchConf(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]signal-exit[\\/]index\.js$/}, async args => ({
-      contents: patchSignalExit(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
+    const skip = skippedPatches();
+    const on = name => !skip.has(name);
+    if (on('conf-unused')) b.onResolve({filter: /^(?:ajv\/dist\/2020\.js|ajv-formats|semver)$/}, args => (/[\\/]conf[\\/]dist[\\/]/.test(args.importer) ? {path: CONF_UNUSED_STUB} : undefined));
+    if (on('devtools-stub')) b.onResolve({filter: /^\.\/devtools\.js$/}, args => (/[\\/]ink[\\/]build$/.test(args.resolveDir) ? {path: DEVTOOLS_STUB} : undefined));
+    if (on('yoga-fetch')) load(b, /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/, patchYogaLoader);
+    if (on('ink-output')) load(b, /[\\/]ink[\\/]build[\\/]output\.js$/, patchInkOutput);
+    if (on('style-diff')) load(b, /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]styledChars\.js$/, patchStyledChars);
+    if (on('lazy-segmenter')) {
+      load(b, /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/, s => patchSegmenter(s, "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}", 'slice-ansi (segmenter)'));
+      load(b, /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/, s => patchSegmenter(s, 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', 'undefined, { granularity: "grapheme" }', 'ansi-tokenize (segmenter)', true));
+    }
+    if (on('narrow-width') || on('lazy-segmenter')) load(b, /[\\/]string-width[\\/]index\.js$/, s => patchStringWidth(s, {narrow: on('narrow-width'), segmenter: on('lazy-segmenter')}));
+    if (on('terminal-size-lazy')) load(b, /[\\/]terminal-size[\\/]index\.js$/, patchTerminalSize);
+    if (on('conf-lazy-builtins')) load(b, /[\\/]conf[\\/]dist[\\/]source[\\/]index\.js$/, patchConf);
+    if (on('signal-exit-assert')) load(b, /[\\/]signal-exit[\\/]index\.js$/, patchSignalExit);
   },
 };
