@@ -56,7 +56,6 @@ const common = {
   legalComments: 'none',
   logLevel: 'warning',
   define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"', __TAPWRIGHT_DATA_CHECKED__: 'true'},
-  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
 };
 
 // 1. The workbench body: CommonJS, entry src/ui/launch.ts (module.exports.launch).

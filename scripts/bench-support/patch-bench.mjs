@@ -92,7 +92,7 @@ export async function benchPatches({root, runs, memRuns, only, values = ['12.5',
       const order = round % 2 === 0 ? ['all', n] : [n, 'all'];
       const r = {};
       for (const which of order) r[which] = m(await drive(builds[which], kind === 'mem' ? steps : [], `${which}-${kind}-${round}`));
-      samples[n][kind].push({cpu: r[n].cpu - r.all.cpu, wall: r[n].wall - r.all.wall, hwm: r[n].hwm - r.all.hwm, a: r.all});
+      samples[n][kind].push({cpu: r[n].cpu - r.all.cpu, wall: r[n].wall - r.all.wall, hwm: r[n].hwm - r.all.hwm, a: r.all, b: r[n]});
     }
     console.log(`Measuring ${measured.length} patches: ${runs} A/B pairs of starts and ${memRuns} A/B pairs typing ${steps.length} keys each...`);
     for (let round = 0; round < Math.max(runs, memRuns); round++) {
@@ -125,7 +125,10 @@ export async function benchPatches({root, runs, memRuns, only, values = ['12.5',
       const cpu = median(start.map(x => x.cpu));
       const mb = median(mem.map(x => x.hwm));
       const d = size(n) - size('all');
-      rows.push([n, fmt(start.map(x => x.cpu), 'ms', 1), fmt(start.map(x => x.wall), 'ms', 0), fmt(mem.map(x => x.hwm), 'MB', 1), `${d >= 0 ? '+' : ''}${d} B`, cpu >= 20 || mb >= 5 ? 'pays' : 'under 20 ms and 5 MB']);
+      // Other work on the machine only ever adds time, so the fastest starts are a second,
+      // less disturbed view: fastest with the patch off minus fastest with all on.
+      const fastest = Math.min(...start.map(x => x.b.cpu)) - Math.min(...start.map(x => x.a.cpu));
+      rows.push([n, `${fmt(start.map(x => x.cpu), 'ms', 1)}, fastest ${fastest >= 0 ? '+' : ''}${fastest.toFixed(1)}`, fmt(start.map(x => x.wall), 'ms', 0), fmt(mem.map(x => x.hwm), 'MB', 1), `${d >= 0 ? '+' : ''}${d} B`, cpu >= 20 || mb >= 5 ? 'pays' : 'under 20 ms and 5 MB']);
     }
     const head = ['patch off', 'CPU to first frame', 'wall to first frame', 'peak RSS after typing', 'file size', 'verdict'];
     const table = [head, ...rows];
