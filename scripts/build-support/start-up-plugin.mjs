@@ -16,12 +16,6 @@
 //    returns the code-point count for text made only of characters drawn one cell wide
 //    on every terminal (src/ui/terminal/narrow.ts, tested against string-width itself);
 //    any other text takes the full path.
-// lazy-segmenter: string-width, slice-ansi and ansi-tokenize each make an
-//    Intl.Segmenter when they load (ICU's break data; four of them cost about 16 ms of
-//    CPU). They are made on first use instead, and ansi-tokenize (which splits every
-//    line Ink draws into graphemes) and string-width split text whose every character
-//    is its own grapheme (isSimpleText in src/ui/terminal/narrow.ts) without one, so
-//    the workbench's own text needs no ICU.
 // yoga-fetch: yoga-layout's Emscripten loader decodes its embedded WebAssembly (a
 //    data: URI) with `fetch` whenever a global fetch exists, which on Node loads the
 //    whole undici HTTP client just to decode base64. The loader already has a
@@ -49,14 +43,12 @@ export function patchYogaLoader(source) {
 
 const WIDTH_EXPORT = 'export default function stringWidth(';
 
-export function patchStringWidth(source, {narrow = true, segmenter = true} = {}) {
+export function patchStringWidth(source) {
   const n = source.split(WIDTH_EXPORT).length - 1;
   if (n !== 1) throw new Error(`build: string-width changed (its default export was found ${n} times, expected once); update scripts/build-support/start-up-plugin.mjs`);
-  const lazy = segmenter ? patchSegmenter(source, 'const segmenter = new Intl.Segmenter();', 'segmenter', '', 'string-width (segmenter)', true) : source;
-  if (!narrow) return lazy;
   return (
     `import {visibleNarrowWidth as __twNarrowWidth} from ${JSON.stringify(NARROW)};\n` +
-    lazy.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
+    source.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
     '\nexport default function stringWidth(input, options) {\n' +
     "  if (typeof input === 'string' && (options === undefined || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes))) {\n" +
     '    const n = __twNarrowWidth(input);\n' +
@@ -73,6 +65,8 @@ export function replaceOnce(source, from, to, what) {
   if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from.slice(0, 60))}); update the patch in scripts/build-support/`);
   return source.replace(from, to);
 }
+
+const NARROW_IMPORT = `import {isSimpleText as __twSimpleText} from ${JSON.stringify(NARROW)};\n`;
 
 const SHARED_CACHES = `
 const __twBlank = Object.freeze({type: 'char', value: ' ', fullWidth: false, styles: Object.freeze([])});
@@ -101,20 +95,6 @@ export function patchInkOutput(source) {
   return NARROW_IMPORT + s;
 }
 
-const LAZY_SEGMENTER = (name, args, fast) =>
-  `let ${name}Real;\n` +
-  (fast ? `function* ${name}Chars(s) { for (let i = 0; i < s.length; i++) yield {segment: s[i], index: i, input: s}; }\n` : '') +
-  `const ${name} = {segment: s => (${fast ? `__twSimpleText(s) ? ${name}Chars(s) : ` : ''}(${name}Real ??= new Intl.Segmenter(${args})).segment(s))};`;
-const NARROW_IMPORT = `import {isSimpleText as __twSimpleText} from ${JSON.stringify(NARROW)};\n`;
-
-/**
- * Replace `const NAME = new Intl.Segmenter(ARGS);` with a segmenter made on first use;
- * with `fast`, text whose characters are each a grapheme is split without one (only
- * for code that just iterates the segments: the fast path has no .containing()).
- */
-export function patchSegmenter(source, declaration, name, args, what, fast = false) {
-  return NARROW_IMPORT + replaceOnce(source, declaration, LAZY_SEGMENTER(name, args, fast), what);
-}
 
 /**
  * Every patch by name. `TAPWRIGHT_BUILD_SKIP_PATCH=name[,name]` builds without those
@@ -124,7 +104,6 @@ export function patchSegmenter(source, declaration, name, args, what, fast = fal
 export const PATCHES = {
   'ink-output': "Ink's Output: per-line caches kept across frames, one shared blank cell, no slice of a line that fits its clip",
   'narrow-width': 'string-width: code-point count for text made only of one-cell characters',
-  'lazy-segmenter': 'string-width, slice-ansi, ansi-tokenize: Intl.Segmenter made on first use; simple text split without one',
   'yoga-fetch': "yoga-layout: its embedded wasm decoded without fetch (undici)",
   'conf-unused': 'conf: ajv, ajv-formats and semver replaced by a stub',
 };
@@ -146,10 +125,6 @@ export const startUpPlugin = {
     if (on('conf-unused')) b.onResolve({filter: /^(?:ajv\/dist\/2020\.js|ajv-formats|semver)$/}, args => (/[\\/]conf[\\/]dist[\\/]/.test(args.importer) ? {path: CONF_UNUSED_STUB} : undefined));
     if (on('yoga-fetch')) load(b, /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/, patchYogaLoader);
     if (on('ink-output')) load(b, /[\\/]ink[\\/]build[\\/]output\.js$/, patchInkOutput);
-    if (on('lazy-segmenter')) {
-      load(b, /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/, s => patchSegmenter(s, "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}", 'slice-ansi (segmenter)'));
-      load(b, /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/, s => patchSegmenter(s, 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', 'undefined, { granularity: "grapheme" }', 'ansi-tokenize (segmenter)', true));
-    }
-    if (on('narrow-width') || on('lazy-segmenter')) load(b, /[\\/]string-width[\\/]index\.js$/, s => patchStringWidth(s, {narrow: on('narrow-width'), segmenter: on('lazy-segmenter')}));
+    if (on('narrow-width')) load(b, /[\\/]string-width[\\/]index\.js$/, patchStringWidth);
   },
 };

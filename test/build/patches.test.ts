@@ -13,7 +13,7 @@ import os from 'node:os';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 // @ts-expect-error plain JS build helper without types
-import {startUpPlugin, PATCHES, skippedPatches, patchInkOutput, patchStringWidth, patchYogaLoader, patchSegmenter} from '../../scripts/build-support/start-up-plugin.mjs';
+import {startUpPlugin, PATCHES, skippedPatches, patchInkOutput, patchStringWidth, patchYogaLoader} from '../../scripts/build-support/start-up-plugin.mjs';
 // @ts-expect-error plain JS build helper without types
 import {patchInkReconciler, patchYogaIndex} from '../../scripts/build-support/cjs-plugin.mjs';
 
@@ -37,7 +37,6 @@ describe('build patches to packages', () => {
     const patched = await runBundled([startUpPlugin]);
     expect(patched.code).toContain('__twSharedCaches');
     expect(patched.code).toContain('stringWidthExact');
-    expect(patched.code).toContain('GRAPHEME_SEGMENTERReal');
     expect(plain.code).not.toContain('__twSharedCaches');
     expect(patched.out).toBe(plain.out);
     expect(plain.out).toMatch(/frame 24 1/);
@@ -48,8 +47,6 @@ describe('build patches to packages', () => {
     expect(() => patchStringWidth(read('string-width/index.js'))).not.toThrow();
     expect(() => patchStringWidth(read('wrap-ansi/node_modules/string-width/index.js'))).not.toThrow();
     expect(() => patchYogaLoader(read('yoga-layout/dist/binaries/yoga-wasm-base64-esm.js'))).not.toThrow();
-    expect(() => patchSegmenter(read('slice-ansi/tokenize-ansi.js'), "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', '', 'slice-ansi')).not.toThrow();
-    expect(() => patchSegmenter(read('@alcalzone/ansi-tokenize/build/tokenize.js'), 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', '', 'ansi-tokenize')).not.toThrow();
     expect(() => patchInkReconciler(read('ink/build/reconciler.js'))).not.toThrow();
     expect(() => patchYogaIndex(read('yoga-layout/dist/src/index.js'))).not.toThrow();
     expect(() => patchInkOutput('export default class Output {}')).toThrow(/changed/);
