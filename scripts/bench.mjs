@@ -15,6 +15,14 @@ import {StringDecoder} from 'node:string_decoder';
 import {VirtualTerminal, changedCharacterBytes} from './bench-support/screen-model.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
+// npm run bench -- --patches [name,name]: what each build patch saves (bench-support/patch-bench.mjs).
+const patchesAt = process.argv.indexOf('--patches');
+if (patchesAt > 0) {
+  const {benchPatches} = await import('./bench-support/patch-bench.mjs');
+  const only = process.argv[patchesAt + 1]?.split(',').filter(Boolean);
+  await benchPatches({root, runs: Number(process.env.BENCH_RUNS) || 7, memRuns: Number(process.env.BENCH_MEM_RUNS) || 3, only});
+  process.exit(0);
+}
 const work = mkdtempSync(path.join(tmpdir(), 'tw-bench-'));
 // Start-up times on a shared 2-core machine vary by a third from run to run: medians of 9.
 const RUNS = Number(process.env.BENCH_RUNS) || 9;

@@ -13,7 +13,7 @@ import {spawnSync} from 'node:child_process';
 import {tmpdir} from 'node:os';
 import {fileURLToPath} from 'node:url';
 import path from 'node:path';
-import {startUpPlugin} from './build-support/start-up-plugin.mjs';
+import {startUpPlugin, skippedPatches} from './build-support/start-up-plugin.mjs';
 import {cjsPlugin} from './build-support/cjs-plugin.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
@@ -23,6 +23,16 @@ const at = p => path.join(root, p);
 const outIndex = process.argv.indexOf('--out');
 const outDir = outIndex > 0 ? path.resolve(process.argv[outIndex + 1]) : at('dist');
 const out = p => path.join(outDir, p);
+// `--one-file` builds only dist/tapwright.mjs (the patch bench builds it a dozen times).
+const oneFileOnly = process.argv.includes('--one-file');
+// TAPWRIGHT_BUILD_SKIP_PATCH=name[,name] builds without those patches (start-up-plugin.mjs).
+try {
+  const skip = skippedPatches();
+  if (skip.size) console.error(`build: without the patches ${[...skip].join(', ')}`);
+} catch (e) {
+  console.error(e.message);
+  process.exit(2);
+}
 rmSync(outDir, {recursive: true, force: true});
 
 // 0. The shipped data is checked here, once, so the bundle need not check it at
@@ -46,7 +56,6 @@ const common = {
   legalComments: 'none',
   logLevel: 'warning',
   define: {'process.env.NODE_ENV': '"production"', 'process.env.DEV': '"false"', __TAPWRIGHT_DATA_CHECKED__: 'true'},
-  alias: {'react-devtools-core': at('scripts/build-support/devtools-stub.js')},
 };
 
 // 1. The workbench body: CommonJS, entry src/ui/launch.ts (module.exports.launch).
@@ -82,21 +91,24 @@ const workbenchPlugin = embed => ({
 });
 const requireBanner = "import {createRequire as __twCreateRequire} from 'node:module'; const require = __twCreateRequire(import.meta.url);";
 
-const split = await build({
-  ...common,
-  entryPoints: {entry: at('src/cli/entry.ts')},
-  format: 'esm',
-  outdir: out('lib'),
-  splitting: true,
-  chunkNames: 'chunks/[name]-[hash]',
-  metafile: true,
-  plugins: [workbenchPlugin(false), startUpPlugin],
-  banner: {js: requireBanner},
-});
-// The body file goes beside the chunk that reads it.
-const reader = Object.entries(split.metafile.outputs).find(([, o]) => Object.keys(o.inputs).some(i => i.includes('workbench-body')));
-if (!reader) throw new Error('build: the chunk that reads the workbench body was not found');
-writeFileSync(path.join(path.dirname(path.resolve(root, reader[0])), BODY_FILE), bodyText);
+if (!oneFileOnly) await buildSplit();
+async function buildSplit() {
+  const split = await build({
+    ...common,
+    entryPoints: {entry: at('src/cli/entry.ts')},
+    format: 'esm',
+    outdir: out('lib'),
+    splitting: true,
+    chunkNames: 'chunks/[name]-[hash]',
+    metafile: true,
+    plugins: [workbenchPlugin(false), startUpPlugin],
+    banner: {js: requireBanner},
+  });
+  // The body file goes beside the chunk that reads it.
+  const reader = Object.entries(split.metafile.outputs).find(([, o]) => Object.keys(o.inputs).some(i => i.includes('workbench-body')));
+  if (!reader) throw new Error('build: the chunk that reads the workbench body was not found');
+  writeFileSync(path.join(path.dirname(path.resolve(root, reader[0])), BODY_FILE), bodyText);
+}
 
 await build({
   ...common,

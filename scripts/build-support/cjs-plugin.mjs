@@ -2,7 +2,8 @@
 // through a V8 code cache by src/cli/code-cache.ts). CommonJS has no module-level
 // `await`; two packages use one:
 // - Ink's reconciler awaits its DevTools module and its own package.json, both only
-//   when DEV=true. Neither is needed in the bundle (DevTools are stubbed anyway).
+//   when DEV=true. Neither is needed in the bundle (DEV is false; with the import
+//   gone, neither devtools.js nor react-devtools-core and ws are bundled).
 // - yoga-layout awaits the instantiation of its WebAssembly. The patched module
 //   starts that work when it loads, fills in its export when it is done, and
 //   leaves the promise under Symbol.for('tapwright.yoga-ready'); the launcher

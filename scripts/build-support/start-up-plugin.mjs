@@ -1,45 +1,33 @@
-// esbuild plugin: changes to third-party code that only cost time.
+// esbuild plugin: changes to third-party code that only cost time. Each one is kept
+// because `npm run bench -- --patches` showed it saves at least 20 ms of start-up CPU
+// or 5 MB (figures in DEVELOPERS.md, "Build patches"); each fails the build when the
+// text it replaces is not found exactly once, and test/build/patches.test.ts checks
+// that patched and unpatched output agree.
 //
-// 1. Ink imports its React DevTools bridge (devtools.js, which pulls in the `ws`
-//    WebSocket library) only when DEV=true. The bundle never runs with DevTools,
-//    so that module is replaced by a stub and `ws` is not bundled at all.
-// 2. yoga-layout's Emscripten loader decodes its embedded WebAssembly (a data: URI)
-//    with `fetch` whenever a global fetch exists. On Node that loads the whole
-//    undici HTTP client (about 40 ms at start on the 2-core test machine) just to
-//    decode base64. The loader already has a synchronous decoder for data: URIs;
-//    the patch makes it use that decoder for a data: URI. The patch fails the build
-//    loudly if the loader's text changes (a yoga-layout upgrade), so it is never
-//    silently lost.
-// 3. `string-width` (Ink measures every piece of text with it) segments graphemes
-//    and tests emoji properties for any text that is not plain ASCII: about 0.1 ms a
-//    string, and 40 ms for its first call (compiling the emoji regular expression).
-//    A fast path in front of it returns the code-point count for text made only of
-//    characters drawn one cell wide on every terminal (src/ui/terminal/narrow.ts,
-//    tested against string-width itself); any other text takes the full path.
-// 4. Ink's Output (it turns each frame's text into a grid of styled cells and back)
-//    allocated about 7 MB a frame at 80x24, which made V8 grow its young generation
-//    and the workbench's resident memory by some 30 MB while typing. The patches keep
-//    the result the same and the work smaller: the per-line caches live across frames
-//    (bounded), the blank cell is one shared frozen object, a line of simple text
-//    that fits its clip is not sliced, and ansi-tokenize skips the style diff
-//    between two cells of the same style. test/build/patches.test.ts compares
-//    patched and unpatched output.
-// 5. Intl.Segmenter: string-width, slice-ansi and ansi-tokenize each make one when
-//    they load, and the first costs about 20 ms (ICU's break data). They are made
-//    on first use instead, and ansi-tokenize (which splits every line Ink draws into
-//    graphemes) and string-width split text whose every character is its own
-//    grapheme (isSimpleText in src/ui/terminal/narrow.ts) without one, so the
-//    workbench's own text needs no ICU (slice-ansi, used only to cut a line at a
-//    clip, still makes its segmenter when it first does that).
-// 6. conf imports ajv, ajv-formats and semver for its `schema` and `migrations`
-//    options, which tapwright never passes (conf-unused-stub.js says why); they are
-//    left out, about 180 KB less to load.
+// ink-output: Ink's Output (it turns each frame's text into a grid of styled cells
+//    and back) allocated about 7 MB a frame at 80x24, which made V8 grow its young
+//    generation and the workbench's resident memory while typing. The patch keeps the
+//    result the same and the work smaller: the per-line caches live across frames
+//    (bounded), the blank cell is one shared frozen object, and a line of simple text
+//    that fits its clip is not sliced.
+// narrow-width: `string-width` (Ink measures every piece of text with it) segments
+//    graphemes and tests emoji properties for any text that is not plain ASCII, and its
+//    first call compiles the emoji regular expression. A fast path in front of it
+//    returns the code-point count for text made only of characters drawn one cell wide
+//    on every terminal (src/ui/terminal/narrow.ts, tested against string-width itself);
+//    any other text takes the full path.
+// yoga-fetch: yoga-layout's Emscripten loader decodes its embedded WebAssembly (a
+//    data: URI) with `fetch` whenever a global fetch exists, which on Node loads the
+//    whole undici HTTP client just to decode base64. The loader already has a
+//    synchronous decoder for data: URIs; the patch makes it use that one.
+// conf-unused: conf imports ajv, ajv-formats and semver for its `schema` and
+//    `migrations` options, which tapwright never passes (conf-unused-stub.js says
+//    why); they are left out, about 360 KB less in the one-file build.
 import {readFile} from 'node:fs/promises';
 import path from 'node:path';
 import {fileURLToPath} from 'node:url';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const DEVTOOLS_STUB = path.join(here, 'devtools-stub.js');
 const CONF_UNUSED_STUB = path.join(here, 'conf-unused-stub.js');
 const NARROW = path.join(here, '..', '..', 'src', 'ui', 'terminal', 'narrow.ts');
 
@@ -58,10 +46,9 @@ const WIDTH_EXPORT = 'export default function stringWidth(';
 export function patchStringWidth(source) {
   const n = source.split(WIDTH_EXPORT).length - 1;
   if (n !== 1) throw new Error(`build: string-width changed (its default export was found ${n} times, expected once); update scripts/build-support/start-up-plugin.mjs`);
-  const lazy = patchSegmenter(source, 'const segmenter = new Intl.Segmenter();', 'segmenter', '', 'string-width (segmenter)', true);
   return (
     `import {visibleNarrowWidth as __twNarrowWidth} from ${JSON.stringify(NARROW)};\n` +
-    lazy.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
+    source.replace(WIDTH_EXPORT, 'function stringWidthExact(') +
     '\nexport default function stringWidth(input, options) {\n' +
     "  if (typeof input === 'string' && (options === undefined || (options.ambiguousIsNarrow !== false && !options.countAnsiEscapeCodes))) {\n" +
     '    const n = __twNarrowWidth(input);\n' +
@@ -78,6 +65,8 @@ export function replaceOnce(source, from, to, what) {
   if (n !== 1) throw new Error(`build: ${what} changed (found ${n} times, expected once: ${JSON.stringify(from.slice(0, 60))}); update the patch in scripts/build-support/`);
   return source.replace(from, to);
 }
+
+const NARROW_IMPORT = `import {isSimpleText as __twSimpleText} from ${JSON.stringify(NARROW)};\n`;
 
 const SHARED_CACHES = `
 const __twBlank = Object.freeze({type: 'char', value: ' ', fullWidth: false, styles: Object.freeze([])});
@@ -106,117 +95,36 @@ export function patchInkOutput(source) {
   return NARROW_IMPORT + s;
 }
 
-export function patchStyledChars(source) {
-  let s = replaceOnce(
-    source,
-    'ret += ansiCodesToString(diffAnsiCodes(chars[i - 1].styles, char.styles));',
-    'if (!__twSameStyles(chars[i - 1].styles, char.styles)) ret += ansiCodesToString(diffAnsiCodes(chars[i - 1].styles, char.styles));',
-    'ansi-tokenize styledCharsToString',
-  );
-  s += `
-function __twSameStyles(a, b) {
-  if (a === b) return true;
-  if (a.length !== b.length) return false;
-  for (let i = 0; i < a.length; i++) if (a[i].code !== b[i].code || a[i].endCode !== b[i].endCode) return false;
-  return true;
-}
-`;
-  return s;
-}
-
-const LAZY_SEGMENTER = (name, args, fast) =>
-  `let ${name}Real;\n` +
-  (fast ? `function* ${name}Chars(s) { for (let i = 0; i < s.length; i++) yield {segment: s[i], index: i, input: s}; }\n` : '') +
-  `const ${name} = {segment: s => (${fast ? `__twSimpleText(s) ? ${name}Chars(s) : ` : ''}(${name}Real ??= new Intl.Segmenter(${args})).segment(s))};`;
-const NARROW_IMPORT = `import {isSimpleText as __twSimpleText} from ${JSON.stringify(NARROW)};\n`;
 
 /**
- * Replace `const NAME = new Intl.Segmenter(ARGS);` with a segmenter made on first use;
- * with `fast`, text whose characters are each a grapheme is split without one (only
- * for code that just iterates the segments: the fast path has no .containing()).
+ * Every patch by name. `TAPWRIGHT_BUILD_SKIP_PATCH=name[,name]` builds without those
+ * patches (the rest stay on): `npm run bench -- --patches` builds with each one off in
+ * turn to measure what it saves. An unknown name fails the build.
  */
-export function patchSegmenter(source, declaration, name, args, what, fast = false) {
-  return NARROW_IMPORT + replaceOnce(source, declaration, LAZY_SEGMENTER(name, args, fast), what);
+export const PATCHES = {
+  'ink-output': "Ink's Output: per-line caches kept across frames, one shared blank cell, no slice of a line that fits its clip",
+  'narrow-width': 'string-width: code-point count for text made only of one-cell characters',
+  'yoga-fetch': "yoga-layout: its embedded wasm decoded without fetch (undici)",
+  'conf-unused': 'conf: ajv, ajv-formats and semver replaced by a stub',
+};
+
+/** The set of patch names switched off by TAPWRIGHT_BUILD_SKIP_PATCH. */
+export function skippedPatches(value = process.env.TAPWRIGHT_BUILD_SKIP_PATCH ?? '') {
+  const names = value.split(',').map(x => x.trim()).filter(Boolean);
+  for (const n of names) if (!(n in PATCHES)) throw new Error(`build: TAPWRIGHT_BUILD_SKIP_PATCH names an unknown patch "${n}"; known: ${Object.keys(PATCHES).join(', ')}`);
+  return new Set(names);
 }
 
-/**
- * terminal-size imports child_process at the top for a fallback (asking tput or
- * resize) that a terminal with a size never reaches; loading child_process costs
- * every start about 4 ms. The patch loads it when the fallback runs.
- */
-export function patchTerminalSize(source) {
-  return replaceOnce(
-    source,
-    "import {execFileSync} from 'node:child_process';",
-    "import {createRequire as __twCreateRequire} from 'node:module';\nconst execFileSync = (...args) => __twCreateRequire(import.meta.url)('node:child_process').execFileSync(...args);",
-    'terminal-size (child_process import)',
-  );
-}
-
-/**
- * signal-exit 3 loads node:assert (about 3 ms at start) for one check that a
- * callback was given; the patch makes the same check without it (same message).
- */
-export function patchSignalExit(source) {
-  return replaceOnce(
-    source,
-    "var assert = require('assert')",
-    "var assert = {equal: function (actual, expected, message) { if (actual != expected) throw new Error(message) }}",
-    'signal-exit (assert)',
-  );
-}
-
-/**
- * conf imports node:crypto (for its encryption option, unused here) and node:assert
- * at the top. In the one-file build's outer module those imports are eager, so every
- * start paid for loading both (about 8 ms); the patch loads each on first use.
- */
-export function patchConf(source) {
-  let s = replaceOnce(source, "import crypto from 'node:crypto';", "import {createRequire as __twConfRequire} from 'node:module';\nconst __twLazy = name => new Proxy({}, {get: (_, key) => __twConfRequire(import.meta.url)(name)[key]});\nconst crypto = __twLazy('node:crypto');", 'conf (crypto import)');
-  s = replaceOnce(s, "import assert from 'node:assert';", "const assert = __twLazy('node:assert');", 'conf (assert import)');
-  return s;
-}
+const load = (b, filter, patch) => b.onLoad({filter}, async args => ({contents: patch(await readFile(args.path, 'utf8')), loader: 'js'}));
 
 export const startUpPlugin = {
   name: 'tapwright-start-up',
   setup(b) {
-    b.onResolve({filter: /^(?:ajv\/dist\/2020\.js|ajv-formats|semver)$/}, args => (/[\\/]conf[\\/]dist[\\/]/.test(args.importer) ? {path: CONF_UNUSED_STUB} : undefined));
-    b.onResolve({filter: /^\.\/devtools\.js$/}, args => (/[\\/]ink[\\/]build$/.test(args.resolveDir) ? {path: DEVTOOLS_STUB} : undefined));
-    b.onLoad({filter: /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/}, async args => ({
-      contents: patchYogaLoader(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]ink[\\/]build[\\/]output\.js$/}, async args => ({
-      contents: patchInkOutput(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]styledChars\.js$/}, async args => ({
-      contents: patchStyledChars(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/}, async args => ({
-      contents: patchSegmenter(await readFile(args.path, 'utf8'), "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});", 'GRAPHEME_SEGMENTER', "undefined, {granularity: 'grapheme'}", 'slice-ansi (segmenter)'),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/}, async args => ({
-      contents: patchSegmenter(await readFile(args.path, 'utf8'), 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });', 'segmenter', 'undefined, { granularity: "grapheme" }', 'ansi-tokenize (segmenter)', true),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]string-width[\\/]index\.js$/}, async args => ({
-      contents: patchStringWidth(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]terminal-size[\\/]index\.js$/}, async args => ({
-      contents: patchTerminalSize(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]conf[\\/]dist[\\/]source[\\/]index\.js$/}, async args => ({
-      contents: patchConf(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
-    b.onLoad({filter: /[\\/]signal-exit[\\/]index\.js$/}, async args => ({
-      contents: patchSignalExit(await readFile(args.path, 'utf8')),
-      loader: 'js',
-    }));
+    const skip = skippedPatches();
+    const on = name => !skip.has(name);
+    if (on('conf-unused')) b.onResolve({filter: /^(?:ajv\/dist\/2020\.js|ajv-formats|semver)$/}, args => (/[\\/]conf[\\/]dist[\\/]/.test(args.importer) ? {path: CONF_UNUSED_STUB} : undefined));
+    if (on('yoga-fetch')) load(b, /yoga-layout[\\/]dist[\\/]binaries[\\/]yoga-wasm-base64-esm\.js$/, patchYogaLoader);
+    if (on('ink-output')) load(b, /[\\/]ink[\\/]build[\\/]output\.js$/, patchInkOutput);
+    if (on('narrow-width')) load(b, /[\\/]string-width[\\/]index\.js$/, patchStringWidth);
   },
 };
