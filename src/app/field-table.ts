@@ -66,7 +66,15 @@ export function boundsOf(group: InputGroup, key: string): Bounds {
     boundsCache = new Map();
     for (const g of Object.keys(SCHEMAS) as InputGroup[]) {
       const js = z.toJSONSchema(SCHEMAS[g], {io: 'input', unrepresentable: 'any'}) as JsonSchemaNode;
-      for (const [k, node] of Object.entries(js.properties ?? {})) boundsCache.set(fieldId({group: g, key: k}), boundsOfNode(node));
+      const walk = (props: Record<string, JsonSchemaNode> | undefined, prefix: string): void => {
+        for (const [k, node] of Object.entries(props ?? {})) {
+          boundsCache?.set(fieldId({group: g, key: `${prefix}${k}`}), boundsOfNode(node));
+          // An optional object (measured, service): its members by dotted key.
+          const obj = node.type === 'object' ? node : node.anyOf?.find(a => a.type === 'object');
+          if (obj?.properties && !obj.properties.min) walk(obj.properties, `${prefix}${k}.`);
+        }
+      };
+      walk(js.properties, '');
     }
   }
   return boundsCache.get(fieldId({group, key})) ?? {};

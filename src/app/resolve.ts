@@ -6,6 +6,7 @@
  * the zod schema and attaches the user's own parent material. Every problem
  * comes back as a FieldError naming the field, its option and its label.
  */
+import {getPath} from './key-path.js';
 import * as z from 'zod';
 import type {JointInput, JointInputDraft, UserParentMaterial} from '../core/joint/input.js';
 import {JointInputError} from '../core/joint/errors.js';
@@ -40,7 +41,7 @@ function missing(group: InputGroup, values: FormValues, draft: Record<string, un
   const out: FieldError[] = [];
   for (const row of ALL_ROWS) {
     if (row.group !== group || (row.isVisible && !row.isVisible(values))) continue;
-    if (!row.optional && empty(draft[row.key]) && boundsOf(group, row.key).default === undefined) out.push(fieldError(group, row.key, 'is needed', 'needed', units, ascii));
+    if (!row.optional && empty(getPath(draft, row.key)) && boundsOf(group, row.key).default === undefined) out.push(fieldError(group, row.key, 'is needed', 'needed', units, ascii));
   }
   return out;
 }
@@ -50,7 +51,9 @@ function schemaErrors(group: InputGroup, error: z.ZodError, units: UnitSystem, a
   const seen = new Set<string>();
   const out: FieldError[] = [];
   for (const issue of error.issues) {
-    const key = String(issue.path[0] ?? '');
+    // A member of an optional object (measured.holeMinorDiameter) when the table has a row for it.
+    const dotted = issue.path.map(String).join('.');
+    const key = dotted.includes('.') && rowOf(group, dotted) ? dotted : String(issue.path[0] ?? '');
     if (seen.has(key)) continue;
     seen.add(key);
     out.push(fieldError(group, key, issue.message, 'schema', units, ascii));

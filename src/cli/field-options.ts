@@ -4,6 +4,7 @@
  * rows. A bare number is read in the --units system (mm, N, N·m, MPa, m/s or
  * in, lbf, ft·lbf, ksi, ft/min), whatever the command.
  */
+import {setPath} from '../app/key-path.js';
 import {bareUnit, boundsOf, optionRangeText} from '../app/field-table.js';
 import type {FieldRow} from '../app/fields-types.js';
 import type {UnitSystem} from '../core/units.js';
@@ -119,12 +120,9 @@ function boundsOfRow(row: FieldRow): {min?: number; max?: number} {
   return {...(b.min !== undefined ? {min: b.min} : {}), ...(b.max !== undefined ? {max: b.max} : {})};
 }
 
-/** Apply read option values over a base draft (undefined removes the key). */
+/** Apply read option values over a base draft (undefined removes the key; a dotted key sets a member of an object). */
 export function overDraft<T extends object>(base: T | undefined, given: Record<string, unknown>): T {
-  const d: Record<string, unknown> = {...(base ?? {})};
-  for (const [k, v] of Object.entries(given)) {
-    if (v === undefined) delete d[k];
-    else d[k] = v;
-  }
-  return d as T;
+  let d = {...(base ?? {})} as T;
+  for (const [k, v] of Object.entries(given)) d = setPath(d, k, v);
+  return d;
 }

@@ -5,6 +5,7 @@
  * written here. Values are held in working units (mm, N, N·m, MPa); only the
  * display converts.
  */
+import {getPath, setPath} from '../../app/key-path.js';
 import type {JointInputDraft} from '../../core/joint/input.js';
 import type {RepairInput} from '../../core/repair/input.js';
 import type {ScrewInputDraft} from '../../core/screw/input.js';
@@ -60,28 +61,16 @@ export function fieldById(id: string): FieldDef {
 }
 
 export function getValue(v: FormValues, id: string): unknown {
-  if (id.startsWith('hole.')) return (v.hole as Record<string, unknown>)[id.slice(5)];
-  if (id.startsWith('screw.')) return ((v.screw ?? {}) as Record<string, unknown>)[id.slice(6)];
-  return (v.joint as Record<string, unknown>)[id];
+  if (id.startsWith('hole.')) return getPath(v.hole, id.slice(5));
+  if (id.startsWith('screw.')) return getPath(v.screw ?? {}, id.slice(6));
+  return getPath(v.joint, id);
 }
 
+/** A copy of the values with field `id` set (undefined clears it); a dotted id sets a member of an object ("measured.holeMinorDiameter"). */
 export function setValue(v: FormValues, id: string, value: unknown): FormValues {
-  if (id.startsWith('screw.')) {
-    const screw = {...(v.screw ?? {})} as Record<string, unknown>;
-    if (value === undefined) delete screw[id.slice(6)];
-    else screw[id.slice(6)] = value;
-    return {...v, screw: screw as Partial<ScrewInputDraft>};
-  }
-  if (id.startsWith('hole.')) {
-    const hole = {...v.hole} as Record<string, unknown>;
-    if (value === undefined) delete hole[id.slice(5)];
-    else hole[id.slice(5)] = value;
-    return {...v, hole: hole as RepairDraft};
-  }
-  const joint = {...v.joint} as Record<string, unknown>;
-  if (value === undefined) delete joint[id];
-  else joint[id] = value;
-  return {...v, joint: joint as Partial<JointInputDraft>};
+  if (id.startsWith('screw.')) return {...v, screw: setPath(v.screw ?? {}, id.slice(6), value) as Partial<ScrewInputDraft>};
+  if (id.startsWith('hole.')) return {...v, hole: setPath(v.hole, id.slice(5), value) as RepairDraft};
+  return {...v, joint: setPath(v.joint, id, value) as Partial<JointInputDraft>};
 }
 
 /** Accepted range and default of a field in working units, read from the zod schema (src/app/field-table.ts). */
