@@ -2,6 +2,7 @@
  * The result of checking a joint. Its shape is the `check --json` contract
  * (keys may be added, never removed or renamed): SI working units throughout.
  */
+import type {ServiceResult} from '../service/result.js';
 import type {Flag, Provenance, ThreadGeometry} from '../types.js';
 import type {LimitsUsedWord} from './measured.js';
 import type {MeasurementItem} from './measured-items.js';
@@ -151,6 +152,11 @@ export interface CheckResult {
   };
   /** Nut only: a nut of the bolt's matching property class at standard height (ISO 898-2 design basis: the bolt breaks first). */
   nutMatchesBolt?: boolean;
+  /**
+   * The joint in service (src/core/service), present when the input describes the
+   * clamped parts or the service state (input.service); its flags are among `flags` too.
+   */
+  service?: ServiceResult;
   flags: Flag[];
   /** Plain-language notes on defaults and data used. */
   notes: string[];
