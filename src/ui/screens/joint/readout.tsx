@@ -67,13 +67,14 @@ export function Readout({result, input, units, width, height, problem}: Props) {
   const lines: Line[] = [
     row('p', 'Preload', tg.preload.min === tg.preload.max ? `${q(tg.preload.nominal, 'force')} (no scatter)` : `${num(tg.preload.min, 'force')} to ${q(tg.preload.max, 'force')} (nom. ${num(tg.preload.nominal, 'force')})`),
     row('t', 'Torque', `${q(tg.torque, 'torque')}, stress ${formatNumber(tg.utilisation * 100, 2)}% of Rp0.2`),
-    row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')}`),
+    row('v', '1st thread', `von Mises ${q(ft.vonMises, 'stress')} (elastic peak)`),
     row('y', '', `= ${n(margin.firstThreadYieldBolt)}x bolt yield, ${n(margin.firstThreadYieldInternal)}x ${input.internal === 'nut' ? 'nut' : 'part'}`),
     fit(stressParts(2), width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
     row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${limitsUsedText(st.limitsUsed)})`, stripFail ? t.tone('fail') : undefined),
-    row('b', 'Bolt break', `${q(st.boltBreakForce, 'force')} (As x Rm)`),
+    // Bolt-first compares with the upper strength Rm,max (as the margin below does); Rm,min beside it.
+    row('b', 'Bolt break', st.boltBreakForceUpper !== undefined ? `${q(st.boltBreakForceUpper, 'force')} at Rm,max (${num(st.boltBreakForce, 'force')} at Rm,min)` : `${q(st.boltBreakForce, 'force')} (As x Rm)`),
     row('m', 'Margins', `stripping ${marginText(margin.stripping)}, bolt-first ${marginText(margin.boltBreaksFirst)}`),
     row('g', ' bolt-1st', `${marginGauge(margin.boltBreaksFirst, need, gaugeWidth, t)} ${t.sym.mark} ${n(need)} needed`, stripFail ? t.tone('fail') : t.tone('ok')),
     row('e', 'Engaged', `${q(st.effectiveEngagement, 'length')} full = ${formatNumber(st.engagedThreads, 2)} threads`),
