@@ -1,6 +1,7 @@
 /**
  * File primitives of the store: atomic write (temp file, fsync, rename, fsync
- * of the folder) and an O_EXCL lock file with stale-lock recovery.
+ * of the folder) and an O_EXCL lock file with stale-lock recovery. A lock held
+ * by a live process on this host is never stale, however old.
  */
 import fs from 'node:fs';
 import os from 'node:os';
@@ -50,22 +51,31 @@ export const TMP_MARK = '.tmp-';
  * never a mix, even after kill -9 or power loss. Keeps the mode of an existing file.
  * With `exclusive`, fails with EEXIST instead of replacing an existing file.
  */
-export function writeFileAtomic(file: string, data: string, opts: {exclusive?: boolean} = {}): void {
+export function writeFileAtomic(
+  file: string,
+  data: string,
+  opts: {exclusive?: boolean; mode?: number; beforeRename?: () => void} = {},
+): void {
   const tmp = `${file}${TMP_MARK}${process.pid}-${uniqueToken()}`;
-  let mode = 0o666;
-  try {
-    mode = fs.statSync(file).mode & 0o777;
-  } catch {
-    /* new file: default mode, masked by the umask */
+  let mode = opts.mode ?? 0o666;
+  if (opts.mode === undefined) {
+    try {
+      mode = fs.statSync(file).mode & 0o777;
+    } catch {
+      /* new file: default mode, masked by the umask */
+    }
   }
   const fd = fs.openSync(tmp, 'wx', mode);
   try {
     try {
       fs.writeFileSync(fd, data);
       fs.fsyncSync(fd);
+      // The umask may have narrowed the mode asked for; a given mode is set exactly.
+      if (opts.mode !== undefined && process.platform !== 'win32') fs.fchmodSync(fd, opts.mode);
     } finally {
       fs.closeSync(fd);
     }
+    opts.beforeRename?.();
     if (opts.exclusive) {
       // link() fails with EEXIST when the target exists: no window between check and write.
       try {
@@ -101,8 +111,26 @@ function fsyncDir(dir: string): void {
 export interface LockOptions {
   /** Give up after this long with "preset store busy" (default 5 s). */
   timeoutMs?: number;
-  /** A lock older than this is stale whoever holds it (default 10 s; a save holds it for milliseconds). */
+  /**
+   * A lock of another host (or one without a pid) older than this is stale (default 10 s,
+   * or TAPWRIGHT_LOCK_STALE_MS for tests; a save holds the lock for milliseconds). A lock
+   * of a live process on this host is never stale.
+   */
   staleMs?: number;
+}
+
+/** Thrown inside withLock when the lock is no longer ours (it was broken while we were paused). */
+export class LockLostError extends Error {
+  constructor(lock: string) {
+    super(`${lock} is no longer held by this process`);
+    this.name = 'LockLostError';
+  }
+}
+
+/** The default stale age: 10 s, or TAPWRIGHT_LOCK_STALE_MS (100 ms to 1 h) for tests. */
+export function defaultStaleMs(env: Record<string, string | undefined> = process.env): number {
+  const v = Number(env.TAPWRIGHT_LOCK_STALE_MS);
+  return Number.isInteger(v) && v >= 100 && v <= 3_600_000 ? v : 10_000;
 }
 
 interface LockInfo {
@@ -113,8 +141,14 @@ interface LockInfo {
 
 function readLock(file: string): {text: string; info: LockInfo; mtimeMs: number} | undefined {
   try {
-    const text = fs.readFileSync(file, 'utf8');
-    const mtimeMs = fs.statSync(file).mtimeMs;
+    const st = fs.lstatSync(file);
+    if (!st.isFile()) {
+      throw new StoreError(
+        `${file} is ${st.isDirectory() ? 'a folder' : 'not a plain file'}; it stands where tapwright keeps its lock file. Remove it when no tapwright is running.`,
+      );
+    }
+    const text = readRegularFile(file, 4096, 'lock file') ?? '';
+    const mtimeMs = st.mtimeMs;
     let info: LockInfo = {};
     try {
       const v = JSON.parse(text) as LockInfo;
@@ -138,13 +172,17 @@ function pidAlive(pid: number): boolean {
   }
 }
 
-/** Why a lock is stale, or undefined when its holder may still be working. */
+/**
+ * Why a lock is stale, or undefined when its holder may still be working. A process
+ * of this host that is alive keeps its lock however long it is paused (SIGSTOP, a
+ * slow disk, a suspended laptop); the age rule is for locks of other hosts only.
+ */
 function staleReason(info: LockInfo, mtimeMs: number, staleMs: number, now: number): string | undefined {
+  if (info.host === os.hostname() && typeof info.pid === 'number' && info.pid !== process.pid) {
+    return pidAlive(info.pid) ? undefined : `process ${info.pid} is not running`;
+  }
   const at = typeof info.at === 'number' ? info.at : mtimeMs;
   if (now - at > staleMs) return `older than ${Math.round(staleMs / 1000)} s`;
-  if (info.host === os.hostname() && typeof info.pid === 'number' && info.pid !== process.pid && !pidAlive(info.pid)) {
-    return `process ${info.pid} is not running`;
-  }
   // A lock file without content: its writer died between create and write.
   if (info.pid === undefined && now - mtimeMs > 2000) return 'empty lock file';
   return undefined;
@@ -178,10 +216,14 @@ function breakStaleLock(lock: string, staleText: string): void {
   }
 }
 
-/** Run `fn` holding the lock file `lock` (created with O_EXCL). */
-export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): T {
+/**
+ * Run `fn` holding the lock file `lock` (created with O_EXCL). `fn` gets `stillHeld`,
+ * which throws LockLostError when the lock is no longer this call's: call it just
+ * before the step that makes a change visible (the rename).
+ */
+export function withLock<T>(lock: string, fn: (stillHeld: () => void) => T, opts: LockOptions = {}): T {
   const timeoutMs = opts.timeoutMs ?? 5000;
-  const staleMs = opts.staleMs ?? 10_000;
+  const staleMs = opts.staleMs ?? defaultStaleMs();
   const start = Date.now();
   const token = `${process.pid}-${uniqueToken()}`;
   const content = JSON.stringify({pid: process.pid, host: os.hostname(), at: Date.now(), token});
@@ -218,8 +260,17 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
     throw e;
   }
   fs.closeSync(fd);
+  const stillHeld = () => {
+    let now: string | undefined;
+    try {
+      now = readLock(lock)?.text;
+    } catch {
+      now = undefined;
+    }
+    if (now !== content) throw new LockLostError(lock);
+  };
   try {
-    return fn();
+    return fn(stillHeld);
   } finally {
     // Remove only our own lock: if it was (wrongly) broken and retaken, leave the other one alone.
     const now = readLock(lock);
@@ -227,7 +278,10 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
   }
 }
 
-/** Remove temp files left by a writer that was killed; call only while holding the lock. */
+/**
+ * Remove temp files left by a writer that was killed; call only while holding the lock.
+ * The temp file of a live process (a writer paused while its lock was broken) is left alone.
+ */
 export function removeOrphanTemps(file: string): void {
   const dir = path.dirname(file);
   const base = path.basename(file);
@@ -240,7 +294,87 @@ export function removeOrphanTemps(file: string): void {
   for (const n of names) {
     // presets.json.tmp-*, presets.json.bak.tmp-*, presets.json.corrupt-<time>.tmp-*, ...
     if (n.startsWith(`${base}.`) && n.includes(TMP_MARK)) {
+      const pid = Number(/\.tmp-(\d+)-/.exec(n)?.[1]);
+      if (Number.isInteger(pid) && pid > 0 && pid !== process.pid && pidAlive(pid)) continue;
       fs.rmSync(path.join(dir, n), {force: true});
     }
   }
+}
+
+/** What a file is, in words, for a message: "a folder", "a named pipe (FIFO)". */
+export function kindOf(st: fs.Stats): string {
+  if (st.isDirectory()) return 'a folder';
+  if (st.isSymbolicLink()) return 'a symbolic link';
+  if (st.isFIFO()) return 'a named pipe (FIFO)';
+  if (st.isSocket()) return 'a socket';
+  if (st.isCharacterDevice() || st.isBlockDevice()) return 'a device';
+  return 'not a plain file';
+}
+
+export type PlainRead = {kind: 'missing'} | {kind: 'text'; text: string; size: number} | {kind: 'too-big'; size: number};
+
+/**
+ * Read a plain file of at most `maxBytes` without ever blocking: opened with
+ * O_NONBLOCK (a FIFO does not wait for a writer), checked with fstat to be a
+ * regular file before a byte is read, and read at most one byte past the limit
+ * (a file that grows after the check, or /dev/zero, is still refused). With
+ * `follow: false` a symbolic link is refused (O_NOFOLLOW, and lstat where that
+ * flag does not exist). Throws StoreError naming the file for anything else
+ * than a plain file; other errors (EACCES...) are thrown as they are.
+ */
+export function readPlain(file: string, maxBytes: number, o: {follow?: boolean; what?: string} = {}): PlainRead {
+  const what = o.what ?? 'file';
+  const c = fs.constants;
+  const noFollow = o.follow === false ? (c.O_NOFOLLOW ?? 0) : 0;
+  const refuse = (kind: string) =>
+    new StoreError(
+      kind === 'a symbolic link'
+        ? `${file} is a symbolic link; tapwright does not follow links for its own files: put the file itself there (the config folder may be a link)`
+        : `${file} is ${kind}, not a plain file; tapwright reads a ${what} only from a plain file: move it away`,
+    );
+  if (o.follow === false) {
+    try {
+      const st = fs.lstatSync(file);
+      if (st.isSymbolicLink()) throw refuse('a symbolic link');
+    } catch (e) {
+      if (errCode(e) === 'ENOENT') return {kind: 'missing'};
+      throw e;
+    }
+  }
+  let fd: number;
+  try {
+    fd = fs.openSync(file, c.O_RDONLY | (c.O_NONBLOCK ?? 0) | noFollow);
+  } catch (e) {
+    if (errCode(e) === 'ENOENT') return {kind: 'missing'};
+    if (errCode(e) === 'ELOOP') throw refuse('a symbolic link');
+    if (errCode(e) === 'EISDIR') throw refuse('a folder');
+    throw e;
+  }
+  try {
+    const st = fs.fstatSync(fd);
+    if (!st.isFile()) throw refuse(kindOf(st));
+    if (st.size > maxBytes) return {kind: 'too-big', size: st.size};
+    // Read in chunks to the end, at most one byte past the limit (the file may grow meanwhile).
+    const chunks: Buffer[] = [];
+    let n = 0;
+    for (;;) {
+      const buf = Buffer.allocUnsafe(Math.min(Math.max(st.size - n + 1, 65536), maxBytes + 1 - n, 1 << 24));
+      const got = fs.readSync(fd, buf, 0, buf.length, null);
+      if (got === 0) break;
+      chunks.push(buf.subarray(0, got));
+      n += got;
+      if (n > maxBytes) return {kind: 'too-big', size: n};
+    }
+    return {kind: 'text', text: Buffer.concat(chunks, n).toString('utf8'), size: n};
+  } finally {
+    fs.closeSync(fd);
+  }
+}
+
+/** readPlain for a small file: its text, undefined when missing; too big is a StoreError naming the limit. */
+export function readRegularFile(file: string, maxBytes: number, what = 'file', follow = false): string | undefined {
+  const r = readPlain(file, maxBytes, {follow, what});
+  if (r.kind === 'missing') return undefined;
+  if (r.kind === 'too-big') throw new StoreError(`${file} is ${r.size} bytes; a ${what} is read only up to ${maxBytes} bytes: move it away`);
+  return r.text;
 }
