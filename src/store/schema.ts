@@ -12,6 +12,15 @@ import {ScrewInputSchema} from '../core/screw/input.js';
 
 export const CURRENT_SCHEMA_VERSION = 2;
 
+/**
+ * The highest revision a save, rename or import gives a preset (2^31 - 1: a save a
+ * second for 68 years). An import file with a higher revision is refused, and a
+ * preset already at it cannot be changed in place (save it under another name), so
+ * a revision never reaches the limit of exact whole numbers in JSON (2^53).
+ * A stored preset with a higher revision (from an older tapwright) is still read.
+ */
+export const MAX_REVISION = 2 ** 31 - 1;
+
 /** Accepted preset names, stated in messages. */
 export const NAME_RULE = '1 to 64 characters: letters, digits, space and . _ - + ( ) #, starting with a letter or digit';
 const NAME_RE = /^[\p{L}\p{N}][\p{L}\p{N} ._+()#-]{0,63}$/u;

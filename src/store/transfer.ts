@@ -8,7 +8,7 @@ import fs from 'node:fs';
 import {StoreError} from './errors.js';
 import {MAX_DEPTH, MAX_IMPORT_BYTES, MAX_IMPORT_TEXT, isPlainObject, parseGuarded} from './guard.js';
 import {VersionError, migrate} from './migrate.js';
-import {CURRENT_SCHEMA_VERSION, PresetSchema, describeZodError, type Preset} from './schema.js';
+import {CURRENT_SCHEMA_VERSION, MAX_REVISION, PresetSchema, describeZodError, type Preset} from './schema.js';
 import {keyOf, type State} from './store-file.js';
 import {describeFsError, errCode, writeFileAtomic} from './file-ops.js';
 
@@ -86,6 +86,7 @@ export function importPresets(file: string): Incoming {
     const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${raw.name.slice(0, 64)}")` : ''}`;
     const r = PresetSchema.safeParse(raw);
     if (!r.success) return void problems.push(`${label}: ${describeZodError(r.error)}`);
+    if (r.data.revision > MAX_REVISION) return void problems.push(`${label}: revision ${r.data.revision} is above the highest kept (${MAX_REVISION})`);
     if (seen.has(keyOf(r.data.name))) return void problems.push(`${label}: the name appears twice in the file`);
     seen.add(keyOf(r.data.name));
     presets.push(r.data);
@@ -110,7 +111,7 @@ export function importPresets(file: string): Incoming {
           continue;
         }
         if (existing) {
-          const next = {...p, revision: Math.max(existing.preset.revision, p.revision) + 1};
+          const next = {...p, revision: Math.min(Math.max(existing.preset.revision, p.revision) + 1, MAX_REVISION)};
           s.entries[s.entries.indexOf(existing)] = {preset: next, raw: next};
           out.replaced.push(p.name);
         } else {
