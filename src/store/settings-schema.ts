@@ -2,10 +2,10 @@
  * The settings' zod schema, apart from the conf-backed store, so a command can
  * read one setting without loading conf (readSettingsQuick).
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import * as z from 'zod';
 import {FILES} from './paths.js';
+import {readPlain} from './file-ops.js';
 
 export const SettingsSchema = z.object({
   /** Display units; JSON output is always SI. */
@@ -37,9 +37,13 @@ export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});
 export function readSettingsFile(dir: string): {settings: Settings; sound: boolean} {
   let text: string;
   try {
-    text = fs.readFileSync(path.join(dir, FILES.settings), 'utf8');
-  } catch (e) {
-    return {settings: DEFAULT_SETTINGS, sound: (e as NodeJS.ErrnoException)?.code === 'ENOENT'};
+    // A plain file only, never blocking on a FIFO, never following a link (as openSettings).
+    const r = readPlain(path.join(dir, FILES.settings), 1024 * 1024, {follow: false, what: 'settings file'});
+    if (r.kind === 'missing') return {settings: DEFAULT_SETTINGS, sound: true};
+    if (r.kind === 'too-big') return {settings: DEFAULT_SETTINGS, sound: false};
+    text = r.text;
+  } catch {
+    return {settings: DEFAULT_SETTINGS, sound: false};
   }
   try {
     const r = SettingsSchema.safeParse(JSON.parse(text));
