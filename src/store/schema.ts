@@ -6,6 +6,7 @@
  * Version 1 (the earlier flat layout) is described in migrate.ts.
  */
 import * as z from 'zod';
+import {safeText} from '../core/text-safety.js';
 import {JointInputSchema} from '../core/joint/input.js';
 import {RepairInputSchema} from '../core/repair/input.js';
 import {ScrewInputSchema} from '../core/screw/input.js';
@@ -32,11 +33,11 @@ export const PresetNameSchema = z
 
 export const NotesSchema = z.object({
   /** Asset tag of the machine, e.g. "P-101 (demo)". */
-  asset: z.string().max(80).optional(),
-  location: z.string().max(120).optional(),
-  workOrder: z.string().max(60).optional(),
-  /** Free text. */
-  text: z.string().max(4000).optional(),
+  asset: safeText(z.string().max(80)).optional(),
+  location: safeText(z.string().max(120)).optional(),
+  workOrder: safeText(z.string().max(60)).optional(),
+  /** Free text (one line; control characters are refused in every stored text). */
+  text: safeText(z.string().max(4000)).optional(),
 });
 
 const PresetFields = {

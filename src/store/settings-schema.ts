@@ -4,6 +4,7 @@
  */
 import path from 'node:path';
 import * as z from 'zod';
+import {safeText} from '../core/text-safety.js';
 import {FILES} from './paths.js';
 import {readPlain} from './file-ops.js';
 
@@ -13,7 +14,7 @@ export const SettingsSchema = z.object({
   /** ASCII borders and symbols in the workbench. */
   ascii: z.boolean().default(false),
   /** The preset the workbench had open last. */
-  lastPreset: z.string().min(1).max(64).optional(),
+  lastPreset: safeText(z.string().min(1).max(64)).optional(),
   /** Default tightening-method scatter factor alphaA (1 = friction range only). */
   scatterDefault: z.number().min(1).max(4).default(1),
 });
