@@ -6,6 +6,7 @@ import {COMMANDS} from './commands/index.js';
 import {EXIT, UsageError, type CliIo} from './io.js';
 import {CAUTION_LINES, cautionText} from '../core/cautions.js';
 import {VERSION} from '../version.js';
+import {printableMessage} from '../core/text-safety.js';
 
 export function topHelp(): string {
   const width = Math.max(...COMMANDS.map(c => c.name.length));
@@ -36,10 +37,11 @@ export function topHelp(): string {
 
 function reportError(e: unknown, io: CliIo): number {
   if (e instanceof UsageError) {
-    io.err(`tapwright: ${e.message}\n`);
+    // The message may echo input from a file or an argument: escaped, and long input cut.
+    io.err(`tapwright: ${printableMessage(e.message)}\n`);
     return EXIT.usage;
   }
-  const msg = e instanceof Error ? e.message : String(e);
+  const msg = printableMessage(e instanceof Error ? e.message : String(e));
   io.err(`tapwright: internal error: ${msg}\nPlease report this with the command you ran.\n`);
   if (io.env.TAPWRIGHT_DEBUG && e instanceof Error && e.stack) io.err(`${e.stack}\n`);
   return EXIT.internal;

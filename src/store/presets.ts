@@ -270,6 +270,21 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
       });
       return structuredClone(out!);
     },
+    saveUserMaterials(list, o = {}) {
+      let out: UserParentMaterial[] = [];
+      mutate(s => {
+        // Under one lock on one read: a problem with any item throws before anything is written.
+        out = list.map((m, i) => {
+          try {
+            return putUserMaterial(s, m, o.overwrite === true);
+          } catch (e) {
+            if (e instanceof StoreError && list.length > 1) throw new StoreError(`item ${i + 1} of ${list.length}: ${e.message}; nothing was stored`);
+            throw e;
+          }
+        });
+      });
+      return structuredClone(out);
+    },
     removeUserMaterial(id) {
       mutate(s => dropUserMaterial(s, id));
     },

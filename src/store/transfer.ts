@@ -11,6 +11,7 @@ import {VersionError, migrate} from './migrate.js';
 import {CURRENT_SCHEMA_VERSION, MAX_REVISION, PresetSchema, describeZodError, type Preset} from './schema.js';
 import {keyOf, type State} from './store-file.js';
 import {describeFsError, errCode, writeFileAtomic} from './file-ops.js';
+import {printable} from '../core/text-safety.js';
 
 export interface ImportOptions {
   /** Replace saved presets of the same names (otherwise a clash refuses the whole import). */
@@ -83,7 +84,7 @@ export function importPresets(file: string): Incoming {
   const presets: Preset[] = [];
   const seen = new Set<string>();
   items.forEach((raw, i) => {
-    const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${raw.name.slice(0, 64)}")` : ''}`;
+    const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${printable(raw.name, {max: 64})}")` : ''}`;
     const r = PresetSchema.safeParse(raw);
     if (!r.success) return void problems.push(`${label}: ${describeZodError(r.error)}`);
     if (r.data.revision > MAX_REVISION) return void problems.push(`${label}: revision ${r.data.revision} is above the highest kept (${MAX_REVISION})`);

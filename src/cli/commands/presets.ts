@@ -15,6 +15,7 @@ import {NAME_RULE} from '../../store/schema.js';
 import {describePreset} from '../../store/describe.js';
 import {resolveJoint} from '../../core/joint/resolve.js';
 import {JointInputError} from '../../core/joint/errors.js';
+import {printable} from '../../core/text-safety.js';
 
 const HELP = `tapwright presets - saved joints: list, show, save, rename, delete, import,
 export
@@ -72,7 +73,7 @@ const NOTES: OptionSpec = {asset: {type: 'string'}, location: {type: 'string'}, 
 
 function open(io: CliIo): PresetStore {
   const store = openPresetStore(configDir(io.env), {now: () => io.now()});
-  for (const w of store.warnings()) io.err(`tapwright: warning: ${w}\n`);
+  for (const w of store.warnings()) io.err(`tapwright: warning: ${printable(w)}\n`);
   return store;
 }
 
@@ -87,7 +88,9 @@ const json = (io: CliIo, v: unknown) => io.out(`${JSON.stringify(v, null, 2)}\n`
 function listText(rows: PresetSummary[], store: PresetStore, quarantined: number): string {
   const w = Math.min(34, Math.max(6, ...rows.map(r => r.name.length)));
   const lines = [`${'NAME'.padEnd(w)}  KIND   THREAD              SAVED`];
-  for (const r of rows) {
+  for (const row of rows) {
+    // Every text from the file is shown escaped: a name or note cannot steer the terminal.
+    const r = {...row, name: printable(row.name), thread: printable(row.thread), asset: pr(row.asset), location: pr(row.location), workOrder: pr(row.workOrder)};
     const saved = r.readOnly ? 'shipped demo, read-only' : `${r.savedAt.slice(0, 16).replace('T', ' ')} r${r.revision}${r.demo ? ' demo' : ''}`;
     const name = r.name.length > w ? `${r.name.slice(0, w - 1)}~` : r.name;
     lines.push(`${name.padEnd(w)}  ${r.kind.padEnd(5)}  ${r.thread.slice(0, 18).padEnd(18)}  ${saved}`);
@@ -100,6 +103,8 @@ function listText(rows: PresetSummary[], store: PresetStore, quarantined: number
   if (quarantined) lines.push(`${quarantined} unreadable item${quarantined === 1 ? '' : 's'} kept in quarantine (see presets list --json); nothing was deleted.`);
   return `${lines.join('\n')}\n`;
 }
+
+const pr = (t: string | undefined) => (t === undefined ? undefined : printable(t));
 
 function matches(r: PresetSummary, q: string): boolean {
   const k = q.toLowerCase();
@@ -211,9 +216,9 @@ export const command: Command = {
         if (p.values.json) json(io, r);
         else {
           const lines = [`imported ${r.added.length + r.replaced.length} preset(s) from ${r.file}${r.fromVersion < 2 ? ` (schema ${r.fromVersion}, migrated)` : ''}`];
-          if (r.added.length) lines.push(`  added: ${r.added.join(', ')}`);
-          if (r.replaced.length) lines.push(`  replaced: ${r.replaced.join(', ')}`);
-          for (const s of r.skipped) lines.push(`  skipped ${s.name}: ${s.reason}`);
+          if (r.added.length) lines.push(`  added: ${printable(r.added.join(', '))}`);
+          if (r.replaced.length) lines.push(`  replaced: ${printable(r.replaced.join(', '))}`);
+          for (const s of r.skipped) lines.push(`  skipped ${printable(s.name)}: ${printable(s.reason)}`);
           io.out(`${lines.join('\n')}\n`);
         }
         return EXIT.ok;
