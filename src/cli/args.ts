@@ -6,6 +6,7 @@ import {parseArgs, type ParseArgsConfig} from 'node:util';
 import {parseQuantity, type Dimension, acceptedUnits} from '../core/units.js';
 import type {Range} from '../core/types.js';
 import {UsageError} from './io.js';
+import {refuseOptionShapes} from './repeated-options.js';
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 
@@ -34,6 +35,7 @@ export function joinNegativeValues(args: string[], options: OptionSpec): string[
 }
 
 export function parseOptions(args: string[], options: OptionSpec, allowPositionals = true): ParsedOptions {
+  refuseOptionShapes(args, options);
   try {
     const r = parseArgs({args: joinNegativeValues(args, options), options, strict: true, allowPositionals});
     return {values: r.values as ParsedOptions['values'], positionals: r.positionals};

@@ -56,6 +56,7 @@ export async function runCli(
   try {
     const [first, ...rest] = argv;
     if (first === '--version' || first === '-V') {
+      if (rest.length) throw new UsageError(`${first} takes nothing after it; got "${rest[0]}"`, first);
       io.out(`${VERSION}\n`);
       return EXIT.ok;
     }
