@@ -62,7 +62,7 @@ Options:
   --json                 machine-readable output (SI units)
   --help, -h             this text
 
-Files: presets.json, settings.json and draft.json in $TAPWRIGHT_CONFIG_DIR,
+Files: presets.json, settings.json and the drafts in $TAPWRIGHT_CONFIG_DIR,
 else $XDG_CONFIG_HOME/tapwright (~/.config/tapwright; macOS
 ~/Library/Preferences/tapwright; Windows %APPDATA%\\tapwright\\Config).
 Exit codes: 0 ok; 2 bad input, unknown preset, or a store problem.
