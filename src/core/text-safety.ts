@@ -75,3 +75,14 @@ export function printableMessage(message: string, quoted = 80, total = 2000): st
   const runs = cut.replace(/\S{257,}/g, run => `${run.slice(0, 256)}...`);
   return printable(runs, {keepNewlines: true, max: total});
 }
+
+const JSON_UNSAFE = /[\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+
+/**
+ * JSON text of `value` (2-space indent) with every refused character written as a
+ * \uXXXX escape: JSON.stringify escapes C0 controls but sends DEL, C1 and the
+ * bidirectional characters raw. Parses back to the same value.
+ */
+export function jsonText(value: unknown): string {
+  return JSON.stringify(value, null, 2).replace(JSON_UNSAFE, c => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+}

@@ -31,3 +31,14 @@ describe('text safety', () => {
     expect(printableMessage(`--engage is ${'9'.repeat(5000)}, out of range`).length).toBeLessThan(300);
   });
 });
+
+describe('jsonText', () => {
+  it('escapes DEL, C1 and bidi characters that JSON.stringify sends raw, and parses back to the same value', async () => {
+    const {jsonText} = await import('../../src/core/text-safety.js');
+    const v = {quarantined: [{raw: {name: 'a\u202eb\u009b\u007fc\u001b'}}]};
+    const t = jsonText(v);
+    expect(t).not.toMatch(/[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/);
+    expect(t).toContain('\\u202e');
+    expect(JSON.parse(t)).toEqual(v);
+  });
+});

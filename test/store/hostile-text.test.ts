@@ -56,7 +56,7 @@ describe('refused at the schema', () => {
 describe('escaped on output', () => {
   it('a hand-edited store with an escape sequence in a note: list and show never print it raw', async () => {
     const {dir, run} = cliInTempStore('hostile');
-    fs.writeFileSync(path.join(dir, 'presets.json'), JSON.stringify({schemaVersion: 2, presets: [stored({name: 'p1', notes: {location: `hall${ESC}[2K${ESC}[31mPASS`}})]}));
+    fs.writeFileSync(path.join(dir, 'presets.json'), JSON.stringify({schemaVersion: 2, presets: [stored({name: 'p1', notes: {location: `hall${ESC}[2K${ESC}[31mPASS`}}), stored({name: 'p2', notes: {asset: 'P-1\u202eSSAP\u009b'}})]}));
     for (const args of [['presets', 'list'], ['presets', 'list', '--json'], ['presets', 'show', 'p1'], ['presets', 'show', `p1${ESC}[31m`]]) {
       const r = await run(...args);
       expect([args.join(' '), RAW.test(r.out), RAW.test(r.err)]).toEqual([args.join(' '), false, false]);

@@ -14,7 +14,7 @@ import {allSolidTables, defaultSolidTable, findSolidTable} from '../../store/sol
 import {DEMO_SOLID_INSERTS, DEMO_TABLE_WARNING, type SolidInsertTable} from '../../core/repair/index.js';
 import {readSolidTableFile} from '../solid-table-file.js';
 import {MAX_IMPORT_TEXT} from '../../store/guard.js';
-import {printable as p} from '../../core/text-safety.js';
+import {jsonText, printable as p} from '../../core/text-safety.js';
 
 const HELP = `tapwright inserts - solid key-locked insert tables for the repair planner
 
@@ -97,7 +97,7 @@ export const command: Command = {
         const def = defaultSolidTable(store).name;
         const rows = allSolidTables(store).map(x => summary(x.table, x.shipped, x.table.name === def));
         if (json) {
-          io.out(`${JSON.stringify({tables: rows}, null, 2)}\n`);
+          io.out(`${jsonText({tables: rows})}\n`);
           return EXIT.ok;
         }
         for (const r of rows) {
@@ -111,7 +111,7 @@ export const command: Command = {
       case 'show': {
         const t = needName('show');
         if (json) {
-          io.out(`${JSON.stringify(t, null, 2)}\n`);
+          io.out(`${jsonText(t)}\n`);
           return EXIT.ok;
         }
         io.out(`${p(t.name)}\nsource (${t.provenance.kind}): ${p(t.provenance.source)}\n\n`);

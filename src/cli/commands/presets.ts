@@ -15,7 +15,7 @@ import {NAME_RULE} from '../../store/schema.js';
 import {describePreset} from '../../store/describe.js';
 import {resolveJoint} from '../../core/joint/resolve.js';
 import {JointInputError} from '../../core/joint/errors.js';
-import {printable} from '../../core/text-safety.js';
+import {jsonText, printable} from '../../core/text-safety.js';
 
 const HELP = `tapwright presets - saved joints: list, show, save, rename, delete, import,
 export
@@ -83,7 +83,7 @@ function positionals(p: ParsedOptions, count: number, usage: string): string[] {
   return p.positionals;
 }
 
-const json = (io: CliIo, v: unknown) => io.out(`${JSON.stringify(v, null, 2)}\n`);
+const json = (io: CliIo, v: unknown) => io.out(`${jsonText(v)}\n`);
 
 function listText(rows: PresetSummary[], store: PresetStore, quarantined: number): string {
   const w = Math.min(34, Math.max(6, ...rows.map(r => r.name.length)));

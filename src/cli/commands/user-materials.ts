@@ -11,7 +11,7 @@ import {parseGuarded} from '../../store/guard.js';
 import {readInputFile} from '../solid-table-file.js';
 import type {UserParentMaterial} from '../../core/joint/input.js';
 import {formatQuantity, type UnitSystem} from '../../core/units.js';
-import {printable} from '../../core/text-safety.js';
+import {jsonText, printable} from '../../core/text-safety.js';
 
 export const USER_MATERIALS_HELP = `Your own parent materials (for tapped holes), kept in the preset store:
   tapwright materials add FILE [--overwrite]   a JSON object, or a list of them:
@@ -34,7 +34,7 @@ export async function userMaterialsAction(action: string, rest: string[], flags:
   switch (action) {
     case 'mine': {
       const list = store.userMaterials();
-      if (flags.json) io.out(`${JSON.stringify({userMaterials: list}, null, 2)}\n`);
+      if (flags.json) io.out(`${jsonText({userMaterials: list})}\n`);
       else if (list.length === 0) io.out('You have no materials of your own yet; see tapwright materials --help (add FILE).\n');
       else for (const m of list) io.out(line(m, flags.units));
       return EXIT.ok;
