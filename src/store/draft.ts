@@ -83,7 +83,8 @@ interface Found {
 
 /**
  * The newest draft left by a session that is not running (or by an older tapwright's
- * draft.json), or undefined. Drafts of live sessions on this host are not offered.
+ * draft.json, or this session's own), or undefined. Drafts of other live sessions on
+ * this host are not offered.
  * An unreadable draft is moved aside; nothing here throws for a bad file.
  */
 export function loadDraft<T extends object = StoredDraft>(dir: string, session: DraftSession = THIS_SESSION): T | undefined {
@@ -93,15 +94,13 @@ export function loadDraft<T extends object = StoredDraft>(dir: string, session: 
   } catch {
     return undefined;
   }
-  const own = path.basename(ownFile(dir, session));
   let best: Found | undefined;
   for (const n of names) {
-    if (n === own) continue;
     const f = readOne(path.join(dir, n));
     if (!f) continue;
     const s = f.session;
-    if (s && s.host === session.host && alive(s.pid)) continue; // a running session's draft
-    if (s && s.token === session.token) continue;
+    // Another session's draft while that session runs is its own business (this session's is its to take back).
+    if (s && s.token !== session.token && s.host === session.host && alive(s.pid)) continue;
     if (!best || f.at > best.at) best = f;
   }
   if (!best) return undefined;

@@ -38,9 +38,9 @@ describe('draft', () => {
     const a = live('a');
     const b = live('b');
     saveDraft(dir, {...draft, presetName: 'A'}, a);
+    expect(loadDraft(dir, b)).toBeUndefined(); // a's session is still running
     saveDraft(dir, {...draft, presetName: 'B'}, b);
     expect(drafts(dir)).toHaveLength(2);
-    expect(loadDraft(dir, b)).toBeUndefined(); // a's session is still running
     clearDraft(dir, b);
     expect(drafts(dir)).toHaveLength(1); // a's draft is untouched
     expect(JSON.parse(fs.readFileSync(path.join(dir, drafts(dir)[0]!), 'utf8')).draft.presetName).toBe('A');
