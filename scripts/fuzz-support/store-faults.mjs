@@ -60,7 +60,10 @@ export async function storeFaults({storeBundle, entry, size = 'small', seed = 1}
     {
       const d = dir('writers');
       const startAt = Date.now() + 1500;
-      const runs = Array.from({length: n.writers}, (_, i) => worker(storeBundle, [d, 'save', `w${i}`, String(startAt), String(n.savesEach)]));
+      // 100 writers queue on one lock: on a loaded 2-core machine the last waits a minute or more;
+      // a writer that gives up says "busy" (nothing lost), but the suite wants every save kept.
+      const wait = {TAPWRIGHT_WORKER_LOCK_TIMEOUT_MS: String(Math.max(15_000, n.writers * n.savesEach * 1000))};
+      const runs = Array.from({length: n.writers}, (_, i) => worker(storeBundle, [d, 'save', `w${i}`, String(startAt), String(n.savesEach)], wait));
       const res = await Promise.all(runs.map(w => w.done));
       res.forEach((r, i) => r.code !== 0 && failures.push(`writer ${i}: exit ${r.code}: ${r.err.slice(0, 200)}`));
       const kept = names(d).length;
