@@ -7,6 +7,7 @@ import {parseQuantity, type Dimension, acceptedUnits} from '../core/units.js';
 import type {Range} from '../core/types.js';
 import {UsageError} from './io.js';
 import {parseUnitSystem} from '../app/units-option.js';
+import {refuseOptionShapes} from './repeated-options.js';
 
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 
@@ -35,6 +36,7 @@ export function joinNegativeValues(args: string[], options: OptionSpec): string[
 }
 
 export function parseOptions(args: string[], options: OptionSpec, allowPositionals = true): ParsedOptions {
+  refuseOptionShapes(args, options);
   try {
     const r = parseArgs({args: joinNegativeValues(args, options), options, strict: true, allowPositionals});
     return {values: r.values as ParsedOptions['values'], positionals: r.positionals};

@@ -17,7 +17,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import vm from 'node:vm';
 
-export type CacheState = 'used' | 'rejected' | 'absent' | 'off';
+/** `refused`: the cache folder or file failed the safety checks (see checkFolder, readCacheFile); nothing is read or written. */
+export type CacheState = 'used' | 'rejected' | 'absent' | 'off' | 'refused';
 
 export interface LoadedBody {
   /** module.exports of the body. */
@@ -26,6 +27,8 @@ export interface LoadedBody {
   cache: CacheState;
   /** The cache file (undefined when caching is off). */
   file: string | undefined;
+  /** Why the cache was refused, when it was. */
+  refused?: string;
   /** Write the compiled code to the cache file when it was not used; true when written. Never throws. */
   save(): boolean;
 }
@@ -74,40 +77,105 @@ export function wrapBody(source: string): string {
   return `(function (exports, require, module, __filename, __dirname) {${source}\n})`;
 }
 
+/**
+ * Why a cache folder or file may not be trusted, or undefined when it may: it must be
+ * what it should be (a folder, a plain file: never a link), owned by this user, and
+ * not writable by the group or others. (Windows: no owner and mode bits to check.)
+ */
+function untrusted(st: fs.Stats, what: 'folder' | 'file'): string | undefined {
+  if (st.isSymbolicLink()) return `the cache ${what} is a symbolic link`;
+  if (what === 'folder' ? !st.isDirectory() : !st.isFile()) return `the cache ${what} is not a ${what === 'folder' ? 'folder' : 'plain file'}`;
+  if (process.platform === 'win32' || typeof process.getuid !== 'function') return undefined;
+  if (st.uid !== process.getuid()) return `the cache ${what} belongs to another user (uid ${st.uid})`;
+  if ((st.mode & 0o022) !== 0) return `the cache ${what} is writable by others (mode ${(st.mode & 0o777).toString(8)})`;
+  return undefined;
+}
+
+/**
+ * Create the cache folder rwx------ if needed. Returns the reason it may not be
+ * trusted, null when it cannot be made (then there is simply no cache), or undefined.
+ */
+function checkFolder(dir: string): string | null | undefined {
+  try {
+    fs.mkdirSync(dir, {recursive: true, mode: 0o700});
+  } catch {
+    return null;
+  }
+  try {
+    return untrusted(fs.lstatSync(dir), 'folder');
+  } catch {
+    return null;
+  }
+}
+
+/** The cache file's bytes, undefined when absent; a reason string when it is refused. Never follows a link. */
+function readCacheFile(file: string): Buffer | string | undefined {
+  const c = fs.constants;
+  let fd: number;
+  try {
+    fd = fs.openSync(file, c.O_RDONLY | (c.O_NOFOLLOW ?? 0) | (c.O_NONBLOCK ?? 0));
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') return undefined;
+    return code === 'ELOOP' ? 'the cache file is a symbolic link' : `the cache file cannot be read (${code ?? String(e)})`;
+  }
+  try {
+    const st = fs.fstatSync(fd);
+    const why = untrusted(st, 'file');
+    if (why) return why;
+    if (st.size > 256 * 1024 * 1024) return 'the cache file is too big';
+    return fs.readFileSync(fd);
+  } catch (e) {
+    return `the cache file cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`;
+  } finally {
+    fs.closeSync(fd);
+  }
+}
+
 export function loadCachedBody(o: BodyOptions): LoadedBody {
   const file = o.cacheDir ? path.join(o.cacheDir, cacheFileName(o.hash)) : undefined;
   let cachedData: Buffer | undefined;
-  if (file) {
-    try {
-      cachedData = fs.readFileSync(file);
-    } catch {
-      cachedData = undefined;
-    }
+  const folder = o.cacheDir ? checkFolder(o.cacheDir) : undefined;
+  let refused = folder ?? undefined;
+  if (file && folder === undefined) {
+    const r = readCacheFile(file);
+    if (typeof r === 'string') refused = r;
+    else cachedData = r;
   }
   const script = new vm.Script(wrapBody(o.source), {filename: o.filename, ...(cachedData ? {cachedData} : {})});
-  const cache: CacheState = !file ? 'off' : !cachedData ? 'absent' : script.cachedDataRejected ? 'rejected' : 'used';
+  const cache: CacheState = !file ? 'off' : refused ? 'refused' : !cachedData ? 'absent' : script.cachedDataRejected ? 'rejected' : 'used';
   const module = {exports: {} as Record<string, unknown>};
   const run = script.runInThisContext() as (e: unknown, r: NodeJS.Require, m: unknown, f: string, d: string) => void;
   run(module.exports, o.require, module, o.filename, path.dirname(o.filename));
-  let done = cache === 'used' || cache === 'off';
+  let done = cache === 'used' || cache === 'off' || cache === 'refused';
   return {
     exports: module.exports,
     cache,
     file,
+    ...(refused ? {refused} : {}),
     save() {
       if (done || !file) return false;
       done = true;
+      const dir = path.dirname(file);
+      // Checked again: the folder may have changed since the start.
+      if (checkFolder(dir) !== undefined) return false;
+      // A temporary name nobody can guess, created exclusively (O_EXCL, never through a link),
+      // rw------- ; then renamed over the cache file (a rename replaces a link, never follows it).
+      const tmp = `${file}.${process.pid}-${Math.random().toString(36).slice(2)}${Date.now().toString(36)}.tmp`;
       try {
         const data = script.createCachedData();
-        fs.mkdirSync(path.dirname(file), {recursive: true, mode: 0o700});
-        const tmp = `${file}.${process.pid}.tmp`;
-        fs.writeFileSync(tmp, data);
+        const fd = fs.openSync(tmp, fs.constants.O_WRONLY | fs.constants.O_CREAT | fs.constants.O_EXCL | (fs.constants.O_NOFOLLOW ?? 0), 0o600);
+        try {
+          fs.writeFileSync(fd, data);
+        } finally {
+          fs.closeSync(fd);
+        }
         fs.renameSync(tmp, file);
         // Caches of earlier builds or other Node versions are of no more use.
-        for (const name of fs.readdirSync(path.dirname(file))) {
+        for (const name of fs.readdirSync(dir)) {
           if (name.startsWith(PREFIX) && name.endsWith(SUFFIX) && name !== path.basename(file)) {
             try {
-              fs.unlinkSync(path.join(path.dirname(file), name));
+              fs.unlinkSync(path.join(dir, name));
             } catch {
               // Another process may have removed it.
             }
@@ -115,6 +183,11 @@ export function loadCachedBody(o: BodyOptions): LoadedBody {
         }
         return true;
       } catch {
+        try {
+          fs.rmSync(tmp, {force: true});
+        } catch {
+          // Nothing to tidy.
+        }
         return false;
       }
     },

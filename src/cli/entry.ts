@@ -5,6 +5,7 @@
 import {runCli} from './main.js';
 import type {CliIo} from './io.js';
 import {loadWorkbench} from './workbench-loader.js';
+import {printableMessage} from '../core/text-safety.js';
 
 const io: CliIo = {
   out: t => {
@@ -42,7 +43,7 @@ runCli(process.argv.slice(2), io, launchWorkbench).then(
     process.exitCode = code;
   },
   (e: unknown) => {
-    process.stderr.write(`tapwright: internal error: ${String(e)}\n`);
+    process.stderr.write(`tapwright: internal error: ${printableMessage(String(e))}\n`);
     process.exitCode = 1;
   },
 );

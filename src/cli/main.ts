@@ -6,6 +6,7 @@ import {COMMANDS} from './commands/index.js';
 import {EXIT, UsageError, type CliIo} from './io.js';
 import {CAUTION_LINES, cautionText} from '../core/cautions.js';
 import {VERSION} from '../version.js';
+import {printableMessage} from '../core/text-safety.js';
 
 export function topHelp(): string {
   const width = Math.max(...COMMANDS.map(c => c.name.length));
@@ -56,11 +57,14 @@ function jsonError(message: string, option: string | undefined, exitCode: number
 
 function reportError(e: unknown, io: CliIo, json = false): number {
   if (e instanceof UsageError) {
-    io.err(`tapwright: ${e.message}\n`);
-    if (json) io.out(jsonError(e.message, e.option, EXIT.usage));
+    // The message may echo input from a file or an argument: escaped, and long input cut.
+    const message = printableMessage(e.message);
+    io.err(`tapwright: ${message}
+`);
+    if (json) io.out(jsonError(message, e.option, EXIT.usage));
     return EXIT.usage;
   }
-  const msg = e instanceof Error ? e.message : String(e);
+  const msg = printableMessage(e instanceof Error ? e.message : String(e));
   if (json) io.out(jsonError(`internal error: ${msg}`, undefined, EXIT.internal));
   io.err(`tapwright: internal error: ${msg}\nPlease report this with the command you ran.\n`);
   if (io.env.TAPWRIGHT_DEBUG && e instanceof Error && e.stack) io.err(`${e.stack}\n`);
@@ -76,6 +80,7 @@ export async function runCli(
   try {
     const [first, ...rest] = argv;
     if (first === '--version' || first === '-V') {
+      if (rest.length) throw new UsageError(`${first} takes nothing after it; got "${rest[0]}"`, first);
       io.out(`${VERSION}\n`);
       return EXIT.ok;
     }

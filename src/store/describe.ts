@@ -3,6 +3,7 @@
  * details): every stored value with its working unit.
  */
 import type {Preset} from './schema.js';
+import {printable} from '../core/text-safety.js';
 
 const UNIT: Record<string, string> = {
   boltRm: 'MPa',
@@ -34,10 +35,10 @@ const UNIT: Record<string, string> = {
 function value(key: string, v: unknown): string {
   if (v !== null && typeof v === 'object' && 'min' in v && 'max' in v) {
     const r = v as {min: unknown; max: unknown};
-    return r.min === r.max ? String(r.min) : `${r.min}..${r.max}`;
+    return printable(r.min === r.max ? String(r.min) : `${r.min}..${r.max}`);
   }
-  if (typeof v === 'object' && v !== null) return JSON.stringify(v).slice(0, 60);
-  return `${String(v)}${UNIT[key] ? ` ${UNIT[key]}` : ''}`;
+  if (typeof v === 'object' && v !== null) return printable(JSON.stringify(v).slice(0, 60));
+  return `${printable(String(v))}${UNIT[key] ? ` ${UNIT[key]}` : ''}`;
 }
 
 function block(title: string, obj: Record<string, unknown> | undefined): string[] {
@@ -45,12 +46,12 @@ function block(title: string, obj: Record<string, unknown> | undefined): string[
   const keys = Object.keys(obj).filter(k => obj[k] !== undefined);
   if (keys.length === 0) return [];
   const w = Math.max(...keys.map(k => k.length));
-  return [title, ...keys.map(k => `  ${k.padEnd(w)}  ${value(k, obj[k])}`)];
+  return [title, ...keys.map(k => `  ${printable(k).padEnd(w)}  ${value(k, obj[k])}`)];
 }
 
 export function describePreset(p: Preset, readOnly: boolean): string {
   const lines = [
-    `${p.name}${readOnly ? '  (shipped demo preset, read-only)' : p.demo ? '  (demo data)' : ''}`,
+    `${printable(p.name)}${readOnly ? '  (shipped demo preset, read-only)' : p.demo ? '  (demo data)' : ''}`,
     `  kind      ${p.kind}`,
     `  saved     ${p.savedAt}, revision ${p.revision}`,
     ...block('joint', p.joint),

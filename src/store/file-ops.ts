@@ -1,11 +1,15 @@
 /**
  * File primitives of the store: atomic write (temp file, fsync, rename, fsync
- * of the folder) and an O_EXCL lock file with stale-lock recovery.
+ * of the folder) and an O_EXCL lock file with stale-lock recovery. A lock held
+ * by a live process on this host is never stale, however old.
  */
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import {StoreError} from './errors.js';
+import {readRegularFile} from './plain-file.js';
+
+export {kindOf, readPlain, readRegularFile, type PlainRead} from './plain-file.js';
 
 const sleeper = new Int32Array(new SharedArrayBuffer(4));
 /** Block the thread for `ms` milliseconds (the store API is synchronous). */
@@ -50,22 +54,31 @@ export const TMP_MARK = '.tmp-';
  * never a mix, even after kill -9 or power loss. Keeps the mode of an existing file.
  * With `exclusive`, fails with EEXIST instead of replacing an existing file.
  */
-export function writeFileAtomic(file: string, data: string, opts: {exclusive?: boolean} = {}): void {
+export function writeFileAtomic(
+  file: string,
+  data: string,
+  opts: {exclusive?: boolean; mode?: number; beforeRename?: () => void} = {},
+): void {
   const tmp = `${file}${TMP_MARK}${process.pid}-${uniqueToken()}`;
-  let mode = 0o666;
-  try {
-    mode = fs.statSync(file).mode & 0o777;
-  } catch {
-    /* new file: default mode, masked by the umask */
+  let mode = opts.mode ?? 0o666;
+  if (opts.mode === undefined) {
+    try {
+      mode = fs.statSync(file).mode & 0o777;
+    } catch {
+      /* new file: default mode, masked by the umask */
+    }
   }
   const fd = fs.openSync(tmp, 'wx', mode);
   try {
     try {
       fs.writeFileSync(fd, data);
       fs.fsyncSync(fd);
+      // The umask may have narrowed the mode asked for; a given mode is set exactly.
+      if (opts.mode !== undefined && process.platform !== 'win32') fs.fchmodSync(fd, opts.mode);
     } finally {
       fs.closeSync(fd);
     }
+    opts.beforeRename?.();
     if (opts.exclusive) {
       // link() fails with EEXIST when the target exists: no window between check and write.
       try {
@@ -101,8 +114,26 @@ function fsyncDir(dir: string): void {
 export interface LockOptions {
   /** Give up after this long with "preset store busy" (default 5 s). */
   timeoutMs?: number;
-  /** A lock older than this is stale whoever holds it (default 10 s; a save holds it for milliseconds). */
+  /**
+   * A lock of another host (or one without a pid) older than this is stale (default 10 s,
+   * or TAPWRIGHT_LOCK_STALE_MS for tests; a save holds the lock for milliseconds). A lock
+   * of a live process on this host is never stale.
+   */
   staleMs?: number;
+}
+
+/** Thrown inside withLock when the lock is no longer ours (it was broken while we were paused). */
+export class LockLostError extends Error {
+  constructor(lock: string) {
+    super(`${lock} is no longer held by this process`);
+    this.name = 'LockLostError';
+  }
+}
+
+/** The default stale age: 10 s, or TAPWRIGHT_LOCK_STALE_MS (100 ms to 1 h) for tests. */
+export function defaultStaleMs(env: Record<string, string | undefined> = process.env): number {
+  const v = Number(env.TAPWRIGHT_LOCK_STALE_MS);
+  return Number.isInteger(v) && v >= 100 && v <= 3_600_000 ? v : 10_000;
 }
 
 interface LockInfo {
@@ -113,8 +144,14 @@ interface LockInfo {
 
 function readLock(file: string): {text: string; info: LockInfo; mtimeMs: number} | undefined {
   try {
-    const text = fs.readFileSync(file, 'utf8');
-    const mtimeMs = fs.statSync(file).mtimeMs;
+    const st = fs.lstatSync(file);
+    if (!st.isFile()) {
+      throw new StoreError(
+        `${file} is ${st.isDirectory() ? 'a folder' : 'not a plain file'}; it stands where tapwright keeps its lock file. Remove it when no tapwright is running.`,
+      );
+    }
+    const text = readRegularFile(file, 4096, 'lock file') ?? '';
+    const mtimeMs = st.mtimeMs;
     let info: LockInfo = {};
     try {
       const v = JSON.parse(text) as LockInfo;
@@ -138,13 +175,17 @@ function pidAlive(pid: number): boolean {
   }
 }
 
-/** Why a lock is stale, or undefined when its holder may still be working. */
+/**
+ * Why a lock is stale, or undefined when its holder may still be working. A process
+ * of this host that is alive keeps its lock however long it is paused (SIGSTOP, a
+ * slow disk, a suspended laptop); the age rule is for locks of other hosts only.
+ */
 function staleReason(info: LockInfo, mtimeMs: number, staleMs: number, now: number): string | undefined {
+  if (info.host === os.hostname() && typeof info.pid === 'number' && info.pid !== process.pid) {
+    return pidAlive(info.pid) ? undefined : `process ${info.pid} is not running`;
+  }
   const at = typeof info.at === 'number' ? info.at : mtimeMs;
   if (now - at > staleMs) return `older than ${Math.round(staleMs / 1000)} s`;
-  if (info.host === os.hostname() && typeof info.pid === 'number' && info.pid !== process.pid && !pidAlive(info.pid)) {
-    return `process ${info.pid} is not running`;
-  }
   // A lock file without content: its writer died between create and write.
   if (info.pid === undefined && now - mtimeMs > 2000) return 'empty lock file';
   return undefined;
@@ -178,10 +219,14 @@ function breakStaleLock(lock: string, staleText: string): void {
   }
 }
 
-/** Run `fn` holding the lock file `lock` (created with O_EXCL). */
-export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): T {
+/**
+ * Run `fn` holding the lock file `lock` (created with O_EXCL). `fn` gets `stillHeld`,
+ * which throws LockLostError when the lock is no longer this call's: call it just
+ * before the step that makes a change visible (the rename).
+ */
+export function withLock<T>(lock: string, fn: (stillHeld: () => void) => T, opts: LockOptions = {}): T {
   const timeoutMs = opts.timeoutMs ?? 5000;
-  const staleMs = opts.staleMs ?? 10_000;
+  const staleMs = opts.staleMs ?? defaultStaleMs();
   const start = Date.now();
   const token = `${process.pid}-${uniqueToken()}`;
   const content = JSON.stringify({pid: process.pid, host: os.hostname(), at: Date.now(), token});
@@ -218,8 +263,17 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
     throw e;
   }
   fs.closeSync(fd);
+  const stillHeld = () => {
+    let now: string | undefined;
+    try {
+      now = readLock(lock)?.text;
+    } catch {
+      now = undefined;
+    }
+    if (now !== content) throw new LockLostError(lock);
+  };
   try {
-    return fn();
+    return fn(stillHeld);
   } finally {
     // Remove only our own lock: if it was (wrongly) broken and retaken, leave the other one alone.
     const now = readLock(lock);
@@ -227,7 +281,10 @@ export function withLock<T>(lock: string, fn: () => T, opts: LockOptions = {}): 
   }
 }
 
-/** Remove temp files left by a writer that was killed; call only while holding the lock. */
+/**
+ * Remove temp files left by a writer that was killed; call only while holding the lock.
+ * The temp file of a live process (a writer paused while its lock was broken) is left alone.
+ */
 export function removeOrphanTemps(file: string): void {
   const dir = path.dirname(file);
   const base = path.basename(file);
@@ -240,7 +297,10 @@ export function removeOrphanTemps(file: string): void {
   for (const n of names) {
     // presets.json.tmp-*, presets.json.bak.tmp-*, presets.json.corrupt-<time>.tmp-*, ...
     if (n.startsWith(`${base}.`) && n.includes(TMP_MARK)) {
+      const pid = Number(/\.tmp-(\d+)-/.exec(n)?.[1]);
+      if (Number.isInteger(pid) && pid > 0 && pid !== process.pid && pidAlive(pid)) continue;
       fs.rmSync(path.join(dir, n), {force: true});
     }
   }
 }
+

@@ -8,9 +8,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import {storeFile} from './paths.js';
 import {StoreError} from './errors.js';
-import {describeFsError, removeOrphanTemps, withLock} from './file-ops.js';
+import {LockLostError, describeFsError, removeOrphanTemps, withLock} from './file-ops.js';
 import {keyOf, readState, writeState, type Entry, type State} from './store-file.js';
-import {NAME_RULE, PresetNameSchema, SavablePresetSchema, describeZodError, type Preset, type SavablePreset} from './schema.js';
+import {MAX_REVISION, NAME_RULE, PresetNameSchema, SavablePresetSchema, describeZodError, type Preset, type SavablePreset} from './schema.js';
 import {shippedPresets} from './shipped.js';
 import {exportDocument, importPresets, writeExport, type ImportReport} from './transfer.js';
 import {dropInsertTable, putInsertTable, readInsertTables, type SolidInsertTable} from './inserts.js';
@@ -71,6 +71,7 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
       return {status: 'missing', entries: [], quarantine: [], materials: [], inserts: []};
     }
     if (s.status === 'newer') warn(`${file}: ${s.reason}; it is left untouched and not read`);
+    if (s.status === 'too-big') warn(`${file}: ${s.reason}`);
     if (s.status === 'damaged' || s.status === 'migrated') {
       try {
         s = mutate(() => undefined);
@@ -84,29 +85,42 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
   /** Lock, re-read, apply `fn`, write. Returns the state written. */
   function mutate(fn: (s: State) => void): State {
     try {
-      fs.mkdirSync(dir, {recursive: true});
+      fs.mkdirSync(dir, {recursive: true, mode: 0o700});
     } catch (e) {
       throw new StoreError(`cannot create the config folder ${dir}: ${describeFsError(e)}; set TAPWRIGHT_CONFIG_DIR to a writable folder`);
     }
-    try {
-      return withLock(
-        lock,
-        () => {
-          removeOrphanTemps(file);
-          const s = readState(file, now());
-          if (s.status === 'newer') throw new StoreError(`${file}: ${s.reason}; not changing it. Use that newer tapwright, or move the file away.`);
-          const found = {...s, entries: [...s.entries]};
-          fn(s);
-          // presets.json.bak: the store as it was before this change.
-          const aside = writeState(file, s, now());
-          report(found, aside);
-          return s;
-        },
-        {timeoutMs: opts.lockTimeoutMs, staleMs: opts.staleLockMs},
-      );
-    } catch (e) {
-      if (e instanceof StoreError) throw e;
-      throw new StoreError(`cannot write the preset store ${file}: ${describeFsError(e)}`);
+    // A writer paused long enough for its lock to be broken (by hand, or by a process on
+    // another host) finds that out before its rename, and starts again on a fresh read.
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return withLock(
+          lock,
+          stillHeld => {
+            removeOrphanTemps(file);
+            const seen = identity(file);
+            const s = readState(file, now());
+            if (s.status === 'newer') throw new StoreError(`${file}: ${s.reason}; not changing it. Use that newer tapwright, or move the file away.`);
+            if (s.status === 'too-big') throw new StoreError(`${file}: ${s.reason}`);
+            const found = {...s, entries: [...s.entries]};
+            fn(s);
+            // presets.json.bak: the store as it was before this change.
+            const aside = writeState(file, s, now(), () => {
+              stillHeld();
+              if (identity(file) !== seen) throw new LockLostError(lock);
+            });
+            report(found, aside);
+            return s;
+          },
+          {timeoutMs: opts.lockTimeoutMs, staleMs: opts.staleLockMs},
+        );
+      } catch (e) {
+        if (e instanceof LockLostError) {
+          if (attempt < 3) continue;
+          throw new StoreError(`not saved: ${file} was changed by another process while this one held its lock (${attempt} tries); nothing of this change was written. Try again.`);
+        }
+        if (e instanceof StoreError) throw e;
+        throw new StoreError(`cannot write the preset store ${file}: ${describeFsError(e)}`);
+      }
     }
   }
 
@@ -162,7 +176,7 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
             `"${existing.preset.name}" was changed by another session since you loaded it (revision ${o.expectedRevision}, now ${existing.preset.revision}); reload it or save under another name`,
           );
         }
-        out = {...fresh, revision: existing ? existing.preset.revision + 1 : 1};
+        out = {...fresh, revision: existing ? nextRevision(existing.preset) : 1};
         const entry = {preset: out, raw: out};
         if (existing) s.entries[s.entries.indexOf(existing)] = entry;
         else s.entries.push(entry);
@@ -177,7 +191,7 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
         const e = findSaved(s, from);
         if (!e) throw shippedByKey.has(keyOf(from)) ? readOnly(from) : missing(from, s, 'saved preset');
         assertFree(s, target, e);
-        const p = {...e.preset, name: target, revision: e.preset.revision + 1};
+        const p = {...e.preset, name: target, revision: nextRevision(e.preset)};
         const raw = typeof e.raw === 'object' && e.raw !== null ? {...(e.raw as object), name: target, revision: p.revision} : p;
         s.entries[s.entries.indexOf(e)] = {preset: p, raw};
       });
@@ -256,6 +270,21 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
       });
       return structuredClone(out!);
     },
+    saveUserMaterials(list, o = {}) {
+      let out: UserParentMaterial[] = [];
+      mutate(s => {
+        // Under one lock on one read: a problem with any item throws before anything is written.
+        out = list.map((m, i) => {
+          try {
+            return putUserMaterial(s, m, o.overwrite === true);
+          } catch (e) {
+            if (e instanceof StoreError && list.length > 1) throw new StoreError(`item ${i + 1} of ${list.length}: ${e.message}; nothing was stored`);
+            throw e;
+          }
+        });
+      });
+      return structuredClone(out);
+    },
     removeUserMaterial(id) {
       mutate(s => dropUserMaterial(s, id));
     },
@@ -265,6 +294,24 @@ export function openPresetStore(dir: string, opts: StoreOptions = {}): PresetSto
   };
   current();
   return store;
+}
+
+/** The revision after `p`'s; a StoreError at the limit (MAX_REVISION). */
+export function nextRevision(p: {name: string; revision: number}): number {
+  if (p.revision >= MAX_REVISION) {
+    throw new StoreError(`"${p.name}" is at revision ${p.revision}, the highest kept (${MAX_REVISION}); it cannot be changed in place: save it under another name (presets duplicate)`);
+  }
+  return p.revision + 1;
+}
+
+/** Which file is at `file` now: inode, size and change time ("" when there is none). */
+function identity(file: string): string {
+  try {
+    const st = fs.lstatSync(file);
+    return `${st.dev}:${st.ino}:${st.size}:${st.mtimeMs}:${st.ctimeMs}`;
+  } catch {
+    return '';
+  }
 }
 
 function hint(name: string, all: string[]): string {

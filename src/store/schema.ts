@@ -6,12 +6,22 @@
  * Version 1 (the earlier flat layout) is described in migrate.ts.
  */
 import * as z from 'zod';
+import {safeText} from '../core/text-safety.js';
 import {JointInputSchema} from '../core/joint/input.js';
 import {RepairInputSchema} from '../core/repair/input.js';
 import {REPAIR_KINDS} from '../core/repair/types.js';
 import {ScrewInputSchema} from '../core/screw/input.js';
 
 export const CURRENT_SCHEMA_VERSION = 2;
+
+/**
+ * The highest revision a save, rename or import gives a preset (2^31 - 1: a save a
+ * second for 68 years). An import file with a higher revision is refused, and a
+ * preset already at it cannot be changed in place (save it under another name), so
+ * a revision never reaches the limit of exact whole numbers in JSON (2^53).
+ * A stored preset with a higher revision (from an older tapwright) is still read.
+ */
+export const MAX_REVISION = 2 ** 31 - 1;
 
 /** Accepted preset names, stated in messages. */
 export const NAME_RULE = '1 to 64 characters: letters, digits, space and . _ - + ( ) #, starting with a letter or digit';
@@ -24,11 +34,11 @@ export const PresetNameSchema = z
 
 export const NotesSchema = z.object({
   /** Asset tag of the machine, e.g. "P-101 (demo)". */
-  asset: z.string().max(80).optional(),
-  location: z.string().max(120).optional(),
-  workOrder: z.string().max(60).optional(),
-  /** Free text. */
-  text: z.string().max(4000).optional(),
+  asset: safeText(z.string().max(80)).optional(),
+  location: safeText(z.string().max(120)).optional(),
+  workOrder: safeText(z.string().max(60)).optional(),
+  /** Free text (one line; control characters are refused in every stored text). */
+  text: safeText(z.string().max(4000)).optional(),
 });
 
 const PresetFields = {

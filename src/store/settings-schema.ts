@@ -2,10 +2,11 @@
  * The settings' zod schema, apart from the conf-backed store, so a command can
  * read one setting without loading conf (readSettingsQuick).
  */
-import fs from 'node:fs';
 import path from 'node:path';
 import * as z from 'zod';
+import {safeText} from '../core/text-safety.js';
 import {FILES} from './paths.js';
+import {readPlain} from './file-ops.js';
 
 export const SettingsSchema = z.object({
   /** Display units; JSON output is always SI. */
@@ -13,7 +14,7 @@ export const SettingsSchema = z.object({
   /** ASCII borders and symbols in the workbench. */
   ascii: z.boolean().default(false),
   /** The preset the workbench had open last. */
-  lastPreset: z.string().min(1).max(64).optional(),
+  lastPreset: safeText(z.string().min(1).max(64)).optional(),
   /** Default tightening-method scatter factor alphaA (1 = friction range only). */
   scatterDefault: z.number().min(1).max(4).default(1),
 });
@@ -37,9 +38,13 @@ export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});
 export function readSettingsFile(dir: string): {settings: Settings; sound: boolean} {
   let text: string;
   try {
-    text = fs.readFileSync(path.join(dir, FILES.settings), 'utf8');
-  } catch (e) {
-    return {settings: DEFAULT_SETTINGS, sound: (e as NodeJS.ErrnoException)?.code === 'ENOENT'};
+    // A plain file only, never blocking on a FIFO, never following a link (as openSettings).
+    const r = readPlain(path.join(dir, FILES.settings), 1024 * 1024, {follow: false, what: 'settings file'});
+    if (r.kind === 'missing') return {settings: DEFAULT_SETTINGS, sound: true};
+    if (r.kind === 'too-big') return {settings: DEFAULT_SETTINGS, sound: false};
+    text = r.text;
+  } catch {
+    return {settings: DEFAULT_SETTINGS, sound: false};
   }
   try {
     const r = SettingsSchema.safeParse(JSON.parse(text));

@@ -12,7 +12,7 @@ import Conf from 'conf';
 import * as z from 'zod';
 import {StoreError} from './errors.js';
 import {FILES, fileStamp} from './paths.js';
-import {describeFsError, withLock} from './file-ops.js';
+import {describeFsError, readPlain, withLock} from './file-ops.js';
 import {describeZodError} from './schema.js';
 
 import {SettingsSchema, FIELD_RULE, DEFAULT_SETTINGS, type Settings} from './settings-schema.js';
@@ -20,8 +20,12 @@ export {SettingsSchema, DEFAULT_SETTINGS, type Settings} from './settings-schema
 
 export interface SettingsHandle {
   get(): Settings;
-  /** Change some settings; throws StoreError naming the field for a bad value. */
-  set(patch: Partial<Settings>): void;
+  /**
+   * Change some settings; throws StoreError naming the field for a bad value.
+   * Returns false when the change could not be written (it then holds for this
+   * session only, and warnings() says why).
+   */
+  set(patch: Partial<Settings>): boolean;
   warnings(): string[];
   readonly file: string;
 }
@@ -35,8 +39,10 @@ export function openSettings(dir: string): SettingsHandle {
     if (!notes.includes(m)) notes.push(m);
   };
   let memory: Store | undefined;
-  const make = () => new Conf<Store>({cwd: dir, configName: 'settings', projectSuffix: '', projectName: 'tapwright'});
+  const make = () => new Conf<Store>({cwd: dir, configName: 'settings', projectSuffix: '', projectName: 'tapwright', configFileMode: 0o600});
   let conf: Conf<Store> | undefined;
+  /** Why the file is not used at all (a link, a FIFO...): set() then fails with this. */
+  let refused: string | undefined;
 
   const moveAside = (why: string): void => {
     const aside = `${file}.corrupt-${fileStamp()}`;
@@ -48,6 +54,15 @@ export function openSettings(dir: string): SettingsHandle {
     }
   };
   try {
+    // Only a plain file is read (conf would block on a FIFO and follow a link): checked first,
+    // without blocking. The folder is created rwx------ before conf creates it wider.
+    readPlain(file, 1024 * 1024, {follow: false, what: 'settings file'});
+    fs.mkdirSync(dir, {recursive: true, mode: 0o700});
+  } catch (e) {
+    refused = e instanceof StoreError ? e.message : `cannot read ${file} (${describeFsError(e)})`;
+    warn(`${refused}; using default settings`);
+  }
+  if (refused === undefined) try {
     conf = make();
   } catch (e) {
     if (e instanceof SyntaxError && fs.existsSync(file)) {
@@ -105,7 +120,8 @@ export function openSettings(dir: string): SettingsHandle {
           if (patch[k] === undefined) delete memory![k];
           else memory![k] = patch[k];
         }
-        return;
+        warn(`cannot save settings to ${file}${refused ? ` (${refused})` : ''}; the change holds for this session only`);
+        return false;
       }
       const c = conf;
       try {
@@ -121,8 +137,10 @@ export function openSettings(dir: string): SettingsHandle {
         }, {timeoutMs: 3000});
       } catch (e) {
         memory = {...raw(), ...patch};
-        warn(`cannot save settings to ${file} (${describeFsError(e)}); the change holds for this session only`);
+        warn(`cannot save settings to ${file} (${e instanceof StoreError ? e.message : describeFsError(e)}); the change holds for this session only`);
+        return false;
       }
+      return true;
     },
     warnings() {
       return [...notes];

@@ -17,11 +17,23 @@ import {findForbiddenKey, isPlainObject, jsonDepth} from './guard.js';
 import {VersionError, migrate} from './migrate.js';
 import {salvage} from './salvage.js';
 import {isShippedName} from './shipped.js';
-import {errCode, writeFileAtomic} from './file-ops.js';
+import {readPlain, writeFileAtomic} from './file-ops.js';
 import {fileStamp} from './paths.js';
+import {StoreError} from './errors.js';
 
-/** A store file bigger than this is not read (presets are about 1 kB each). */
+/**
+ * The largest store tapwright writes (presets are about 1 kB each): a change that
+ * would make the file bigger than this is refused with a message.
+ */
 export const MAX_STORE_BYTES = 32 * 1024 * 1024;
+/**
+ * The largest store read: twice the write limit, so a store written by tapwright is
+ * always read back. A bigger file (made by hand or another program) is left
+ * untouched, not moved aside, and nothing is written over it.
+ */
+export const MAX_STORE_READ_BYTES = 2 * MAX_STORE_BYTES;
+/** Files of the store (presets.json, its .bak, copies kept aside) are the user's only: rw-------. */
+export const STORE_FILE_MODE = 0o600;
 const STORE_MAX_DEPTH = 64;
 
 export interface Entry {
@@ -31,14 +43,14 @@ export interface Entry {
 }
 
 export interface State {
-  status: 'ok' | 'missing' | 'damaged' | 'migrated' | 'newer';
+  status: 'ok' | 'missing' | 'damaged' | 'migrated' | 'newer' | 'too-big';
   entries: Entry[];
   quarantine: QuarantineEntry[];
   materials: unknown[];
   inserts: unknown[];
   /** The file's text as read (the content of the next .bak). */
   text?: string;
-  /** Damaged: what was wrong. Newer: the version message. */
+  /** Damaged: what was wrong. Newer, too big: the message for the user. */
   reason?: string;
   fromVersion?: number;
   /** Presets taken from presets.json.bak during a recovery. */
@@ -96,22 +108,21 @@ function itemize(state: State, items: unknown[], quarantine: unknown[], now: Dat
   });
 }
 
-function readText(file: string): string | undefined {
-  try {
-    const size = fs.statSync(file).size;
-    if (size > MAX_STORE_BYTES) return `\u0000too-big:${size}`;
-    return fs.readFileSync(file, 'utf8');
-  } catch (e) {
-    if (errCode(e) === 'ENOENT') return undefined;
-    throw e;
-  }
-}
+const mib = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MiB`;
 
-/** Read and classify the store file (no writes). A damaged file comes back salvaged. */
+/**
+ * Read and classify the store file (no writes). A damaged file comes back salvaged.
+ * Only a plain file is read (never a link, a FIFO or a device: StoreError naming it).
+ */
 export function readState(file: string, now: Date): State {
-  const text = readText(file);
-  if (text === undefined) return emptyState('missing');
-  if (text.startsWith('\u0000too-big:')) return recover(file, undefined, `bigger than ${MAX_STORE_BYTES / 1024 / 1024} MiB`, now);
+  const read = readPlain(file, MAX_STORE_READ_BYTES, {follow: false, what: 'preset store'});
+  if (read.kind === 'missing') return emptyState('missing');
+  if (read.kind === 'too-big') {
+    const s = emptyState('too-big');
+    s.reason = `it is ${mib(read.size)}, more than the ${mib(MAX_STORE_READ_BYTES)} tapwright reads; it is left untouched and nothing is saved over it. Move it away (keep it), then export the presets you need from a copy with a JSON tool in files of up to 1 MiB and import them`;
+    return s;
+  }
+  const text = read.text;
   const damaged = (reason: string): State => recover(file, text, reason, now);
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '') return damaged('empty');
@@ -155,7 +166,7 @@ function recover(file: string, text: string | undefined, reason: string, now: Da
     itemize(s, found.presets, found.quarantine, now);
   }
   const bak = `${file}.bak`;
-  if (fs.existsSync(bak)) {
+  if (fs.existsSync(bak) && fs.lstatSync(bak).isFile()) {
     let fromBak = 0;
     try {
       const b = readState(bak, now);
@@ -193,20 +204,28 @@ export function serialize(s: State): string {
  * file of an older version is kept as presets.json.schema<N>-<time>.
  * Returns the path of the file kept aside, if any.
  */
-export function writeState(file: string, s: State, now: Date): string | undefined {
+export function writeState(file: string, s: State, now: Date, beforeRename?: () => void): string | undefined {
+  const out = serialize(s);
+  const bytes = Buffer.byteLength(out);
+  // What is written must be readable again: refuse to grow past the write limit (shrinking is always allowed).
+  if (bytes > MAX_STORE_BYTES && bytes > Buffer.byteLength(s.text ?? '')) {
+    throw new StoreError(
+      `not saved: the preset store would be ${mib(bytes)}, more than the ${mib(MAX_STORE_BYTES)} tapwright keeps in ${file}; nothing was changed. Export the presets you no longer use (presets export FILE NAME ...), then delete them`,
+    );
+  }
   let aside: string | undefined;
+  const mode = STORE_FILE_MODE;
   if (s.status === 'damaged') {
     aside = `${file}.corrupt-${fileStamp(now)}`;
-    if (s.text !== undefined) writeFileAtomic(aside, s.text);
+    if (s.text !== undefined) writeFileAtomic(aside, s.text, {mode});
     else fs.renameSync(file, aside);
   } else if (s.status === 'migrated' && s.text !== undefined) {
     aside = `${file}.schema${s.fromVersion}-${fileStamp(now)}`;
-    writeFileAtomic(aside, s.text);
+    writeFileAtomic(aside, s.text, {mode});
   } else if (s.status === 'ok' && s.text !== undefined) {
-    writeFileAtomic(`${file}.bak`, s.text);
+    writeFileAtomic(`${file}.bak`, s.text, {mode});
   }
-  const out = serialize(s);
-  writeFileAtomic(file, out);
+  writeFileAtomic(file, out, {mode, beforeRename});
   s.status = 'ok';
   s.text = out;
   delete s.reason;

@@ -59,6 +59,8 @@ export interface PresetStore {
   /** The user's own parent materials (for tapped holes), by id. */
   userMaterials(): UserParentMaterial[];
   saveUserMaterial(m: unknown, opts?: {overwrite?: boolean}): UserParentMaterial;
+  /** Several materials in one change: all are stored, or none (the first problem is thrown). */
+  saveUserMaterials(list: unknown[], opts?: {overwrite?: boolean}): UserParentMaterial[];
   removeUserMaterial(id: string): void;
   /** One-line messages for the user about what happened to the files. */
   warnings(): string[];

@@ -8,11 +8,12 @@ import fs from 'node:fs';
 import {StoreError} from './errors.js';
 import {MAX_DEPTH, MAX_IMPORT_BYTES, MAX_IMPORT_TEXT, isPlainObject, parseGuarded} from './guard.js';
 import {VersionError, migrate} from './migrate.js';
-import {CURRENT_SCHEMA_VERSION, PresetSchema, describeZodError, type Preset} from './schema.js';
+import {CURRENT_SCHEMA_VERSION, MAX_REVISION, PresetSchema, describeZodError, type Preset} from './schema.js';
 import {keyOf, type State} from './store-file.js';
 import {describeFsError, errCode, writeFileAtomic} from './file-ops.js';
 import {resolveHoleInput, resolveJointInput, resolveScrewInput} from '../app/resolve.js';
 import {labelMessage} from '../app/field-table.js';
+import {printable} from '../core/text-safety.js';
 
 export interface ImportOptions {
   /** Replace saved presets of the same names (otherwise a clash refuses the whole import). */
@@ -85,13 +86,14 @@ export function importPresets(file: string): Incoming {
   const presets: Preset[] = [];
   const seen = new Set<string>();
   items.forEach((raw, i) => {
-    const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${raw.name.slice(0, 64)}")` : ''}`;
+    const label = `presets[${i}]${isPlainObject(raw) && typeof raw.name === 'string' ? ` ("${printable(raw.name, {max: 64})}")` : ''}`;
     const r = PresetSchema.safeParse(raw);
     if (!r.success) return void problems.push(`${label}: ${describeZodError(r.error)}`);
     // The inputs as every face reads them (src/app/resolve.ts): a preset that could not be computed is refused now.
     const resolved = [r.data.joint && resolveJointInput(r.data.joint), r.data.repair && resolveHoleInput(r.data.repair), r.data.screw && resolveScrewInput(r.data.screw)];
     const bad = resolved.flatMap(x => x?.errors ?? []);
     if (bad.length) return void problems.push(`${label}: ${bad.map(e => `${e.group === 'hole' ? 'repair' : e.group}.${e.key}: ${labelMessage(e)}`).join('; ')}`);
+    if (r.data.revision > MAX_REVISION) return void problems.push(`${label}: revision ${r.data.revision} is above the highest kept (${MAX_REVISION})`);
     if (seen.has(keyOf(r.data.name))) return void problems.push(`${label}: the name appears twice in the file`);
     seen.add(keyOf(r.data.name));
     presets.push(r.data);
@@ -116,7 +118,7 @@ export function importPresets(file: string): Incoming {
           continue;
         }
         if (existing) {
-          const next = {...p, revision: Math.max(existing.preset.revision, p.revision) + 1};
+          const next = {...p, revision: Math.min(Math.max(existing.preset.revision, p.revision) + 1, MAX_REVISION)};
           s.entries[s.entries.indexOf(existing)] = {preset: next, raw: next};
           out.replaced.push(p.name);
         } else {

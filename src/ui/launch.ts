@@ -107,14 +107,16 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   let latest: WorkbenchState = initial;
   let restored = false;
   let draftKept = false;
+  let draftError: string | undefined;
   const keepDraft = (s: WorkbenchState) => {
     try {
       if (isDirty(s) && !s.draftOffer) {
         svc.draft.save({savedAt: io.now().toISOString(), presetName: s.preset.name, values: s.values, mode: s.mode});
         draftKept = true;
       } else if (!s.draftOffer) svc.draft.clear();
-    } catch {
-      // The draft is a convenience; a failure to keep it must not stop the exit.
+    } catch (e) {
+      // The draft is a convenience; a failure to keep it must not stop the exit, but is said after it.
+      draftError = e instanceof Error ? e.message : String(e);
     }
   };
   const restore = () => {
@@ -173,6 +175,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     ['SIGTERM', onSignal('SIGTERM', 143)],
     ['SIGHUP', onSignal('SIGHUP', 129)],
     ['SIGINT', onSignal('SIGINT', 130)],
+    ['SIGQUIT', onSignal('SIGQUIT', 131)],
   ];
   for (const [sig, h] of handlers) process.on(sig, h);
   process.on('exit', restore);
@@ -198,6 +201,8 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     // Settings are a convenience.
   }
   if (draftKept) io.err('tapwright: unsaved edits were kept as a draft; the next start offers to restore them.\n');
+  if (draftError) io.err(`tapwright: unsaved edits were NOT kept: ${draftError}\n`);
   if (signalCode !== undefined) return signalCode;
+  if (draftError) return 1;
   return latest.quit === 'interrupt' ? 130 : 0;
 }

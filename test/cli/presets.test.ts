@@ -145,7 +145,9 @@ describe('tapwright presets', () => {
     const again = await run('save', 'a', ...SAVE);
     expect(again.code).toBe(2);
     expect(again.err).toMatch(/already exists.*--overwrite/);
-    expect((await run('save', 'a', ...SAVE, '--overwrite', '--engage', '20')).code).toBe(0);
+    // (--engage once: a repeated option is refused, issue 15)
+    const changed = SAVE.map((x, i) => (SAVE[i - 1] === '--engage' ? '20' : x));
+    expect((await run('save', 'a', ...changed, '--overwrite')).code).toBe(0);
     expect(openPresetStore(dir).get('a')).toMatchObject({revision: 2, joint: {engagement: 20}});
   });
 

@@ -5,7 +5,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import {openPresetStore} from '../../src/store/presets.js';
-import {MAX_STORE_BYTES} from '../../src/store/store-file.js';
+import {MAX_STORE_READ_BYTES} from '../../src/store/store-file.js';
 import {uniqueToken} from '../../src/store/file-ops.js';
 import {jointPreset, tempDir} from './helpers.js';
 
@@ -74,15 +74,16 @@ describe('damaged store file', () => {
     }
   });
 
-  it('a store file over the size limit is moved aside unread, and the store starts again', () => {
+  it('a store file over the read limit is left untouched (not moved aside as damaged), with a message saying what to do', () => {
     const dir = storeWith(['a']);
-    openPresetStore(dir).save(jointPreset('b')); // a second session: .bak holds a
-    fs.truncateSync(file(dir), MAX_STORE_BYTES + 1); // sparse: quick to make
+    openPresetStore(dir).save(jointPreset('b'));
+    fs.truncateSync(file(dir), MAX_STORE_READ_BYTES + 1); // sparse: quick to make
     const s = openPresetStore(dir);
-    expect(s.warnings()[0]).toMatch(/^preset store was bigger than 32 MiB; moved aside to .*corrupt-.*; recovered 1 preset \(1 of them from presets\.json\.bak\)$/);
-    expect(savedNames(s)).toEqual(['a']);
-    expect(fs.statSync(path.join(dir, asides(dir, 'corrupt-')[0]!)).size).toBe(MAX_STORE_BYTES + 1);
-    expect(fs.statSync(file(dir)).size).toBeLessThan(10_000);
+    expect(s.warnings()[0]).toMatch(/presets\.json: it is 64\.0 MiB, more than the 64\.0 MiB tapwright reads; it is left untouched .*Move it away \(keep it\)/);
+    expect(asides(dir, 'corrupt-')).toEqual([]);
+    expect(fs.statSync(file(dir)).size).toBe(MAX_STORE_READ_BYTES + 1);
+    expect(() => s.save(jointPreset('c'))).toThrow(/presets\.json: it is 64\.0 MiB.*left untouched/);
+    expect(fs.statSync(file(dir)).size).toBe(MAX_STORE_READ_BYTES + 1);
   });
 
   it('an invalid preset is quarantined: kept verbatim, shown, never dropped by later saves', () => {

@@ -156,7 +156,7 @@ describe.skipIf(!hasTmux)('real terminal (tmux 80x24)', () => {
       await wait(name, 'the exit', x => x.includes('EXITED'));
       expect(shot(name)).toContain(`EXITED ${code}`);
       expect(tmux('display-message', '-p', '-t', name, '#{alternate_on}').trim()).toBe('0');
-      expect(existsSync(path.join(cfg, 'draft.json'))).toBe(true);
+      expect(readdirSync(cfg).some(n => /^draft-\d+-\w+\.json$/.test(n))).toBe(true); // one draft file per session (issue 15)
     }
     start('again');
     await wait('again', 'the draft offer', x => x.includes('Restore the unsaved edits from'));

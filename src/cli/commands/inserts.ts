@@ -14,6 +14,7 @@ import {allSolidTables, defaultSolidTable, findSolidTable} from '../../store/sol
 import {DEMO_SOLID_INSERTS, DEMO_TABLE_WARNING, type SolidInsertTable} from '../../core/repair/index.js';
 import {readSolidTableFile} from '../solid-table-file.js';
 import {MAX_IMPORT_TEXT} from '../../store/guard.js';
+import {jsonText, printable as p} from '../../core/text-safety.js';
 
 const HELP = `tapwright inserts - solid key-locked insert tables for the repair planner
 
@@ -78,14 +79,14 @@ export const command: Command = {
     const {values, positionals} = parseOptions(args, OPTIONS);
     const [action, ...rest] = positionals;
     const store = openPresetStore(configDir(io.env));
-    for (const w of store.warnings()) io.err(`tapwright: ${w}\n`);
+    for (const w of store.warnings()) io.err(`tapwright: ${p(w)}\n`);
     const json = values.json === true;
     const needName = (what: string) => {
       const name = rest[0]?.trim();
       if (!name) throw new UsageError(`inserts ${what} needs a table name; see tapwright inserts list`, 'NAME');
       const t = findSolidTable(store, name);
       if (!t) {
-        const known = allSolidTables(store).map(x => `"${x.table.name}"`).join(', ');
+        const known = allSolidTables(store).map(x => `"${p(x.table.name)}"`).join(', ');
         throw new UsageError(`inserts ${what}: no table "${name}" (known: ${known})`, 'NAME');
       }
       return t;
@@ -96,13 +97,13 @@ export const command: Command = {
         const def = defaultSolidTable(store).name;
         const rows = allSolidTables(store).map(x => summary(x.table, x.shipped, x.table.name === def));
         if (json) {
-          io.out(`${JSON.stringify({tables: rows}, null, 2)}\n`);
+          io.out(`${jsonText({tables: rows})}\n`);
           return EXIT.ok;
         }
         for (const r of rows) {
-          io.out(`${r.default ? '* ' : '  '}${r.name}  (${r.shipped ? 'shipped, read-only' : 'yours'}; ${r.entries} entries; ${r.provenance.kind})\n`);
-          io.out(`    sizes: ${r.sizes.join(', ')}\n`);
-          io.out(`    source: ${r.provenance.source}\n`);
+          io.out(`${r.default ? '* ' : '  '}${p(r.name)}  (${r.shipped ? 'shipped, read-only' : 'yours'}; ${r.entries} entries; ${r.provenance.kind})\n`);
+          io.out(`    sizes: ${p(r.sizes.join(', '))}\n`);
+          io.out(`    source: ${p(r.provenance.source)}\n`);
         }
         io.out('* = used by the repair planner when no --solid-table is given\n');
         return EXIT.ok;
@@ -110,14 +111,14 @@ export const command: Command = {
       case 'show': {
         const t = needName('show');
         if (json) {
-          io.out(`${JSON.stringify(t, null, 2)}\n`);
+          io.out(`${jsonText(t)}\n`);
           return EXIT.ok;
         }
-        io.out(`${t.name}\nsource (${t.provenance.kind}): ${t.provenance.source}\n\n`);
+        io.out(`${p(t.name)}\nsource (${t.provenance.kind}): ${p(t.provenance.source)}\n\n`);
         io.out('internal thread  type        external thread  length  keys  body Rm / shear\n');
         for (const e of t.entries) {
           io.out(
-            `${e.internal.padEnd(16)} ${e.type.padEnd(11)} ${e.external.padEnd(16)} ${`${e.length} mm`.padEnd(7)} ${String(e.keys).padEnd(5)} ${e.bodyRm} / ${e.bodyShear} MPa\n`,
+            `${p(e.internal).padEnd(16)} ${e.type.padEnd(11)} ${p(e.external).padEnd(16)} ${`${e.length} mm`.padEnd(7)} ${String(e.keys).padEnd(5)} ${e.bodyRm} / ${e.bodyShear} MPa\n`,
           );
         }
         return EXIT.ok;

@@ -13,6 +13,8 @@ import {MAX_IMPORT_TEXT} from '../../store/guard.js';
 import {NAME_RULE} from '../../store/schema.js';
 import {describePreset} from '../../store/describe.js';
 import {resolveJoint} from '../../core/joint/resolve.js';
+import {JointInputError} from '../../core/joint/errors.js';
+import {jsonText, printable} from '../../core/text-safety.js';
 
 const HELP = `tapwright presets - saved joints: list, show, save, rename, delete, import,
 export
@@ -59,7 +61,7 @@ Options:
   --json                 machine-readable output (SI units)
   --help, -h             this text
 
-Files: presets.json, settings.json and draft.json in $TAPWRIGHT_CONFIG_DIR,
+Files: presets.json, settings.json and the drafts in $TAPWRIGHT_CONFIG_DIR,
 else $XDG_CONFIG_HOME/tapwright (~/.config/tapwright; macOS
 ~/Library/Preferences/tapwright; Windows %APPDATA%\\tapwright\\Config).
 Exit codes: 0 ok; 2 bad input, unknown preset, or a store problem.
@@ -70,7 +72,7 @@ const NOTES: OptionSpec = {asset: {type: 'string'}, location: {type: 'string'}, 
 
 function open(io: CliIo): PresetStore {
   const store = openPresetStore(configDir(io.env), {now: () => io.now()});
-  for (const w of store.warnings()) io.err(`tapwright: warning: ${w}\n`);
+  for (const w of store.warnings()) io.err(`tapwright: warning: ${printable(w)}\n`);
   return store;
 }
 
@@ -80,12 +82,14 @@ function positionals(p: ParsedOptions, count: number, usage: string): string[] {
   return p.positionals;
 }
 
-const json = (io: CliIo, v: unknown) => io.out(`${JSON.stringify(v, null, 2)}\n`);
+const json = (io: CliIo, v: unknown) => io.out(`${jsonText(v)}\n`);
 
 function listText(rows: PresetSummary[], store: PresetStore, quarantined: number): string {
   const w = Math.min(34, Math.max(6, ...rows.map(r => r.name.length)));
   const lines = [`${'NAME'.padEnd(w)}  KIND   THREAD              SAVED`];
-  for (const r of rows) {
+  for (const row of rows) {
+    // Every text from the file is shown escaped: a name or note cannot steer the terminal.
+    const r = {...row, name: printable(row.name), thread: printable(row.thread), asset: pr(row.asset), location: pr(row.location), workOrder: pr(row.workOrder)};
     const saved = r.readOnly ? 'shipped demo, read-only' : `${r.savedAt.slice(0, 16).replace('T', ' ')} r${r.revision}${r.demo ? ' demo' : ''}`;
     const name = r.name.length > w ? `${r.name.slice(0, w - 1)}~` : r.name;
     lines.push(`${name.padEnd(w)}  ${r.kind.padEnd(5)}  ${r.thread.slice(0, 18).padEnd(18)}  ${saved}`);
@@ -98,6 +102,8 @@ function listText(rows: PresetSummary[], store: PresetStore, quarantined: number
   if (quarantined) lines.push(`${quarantined} unreadable item${quarantined === 1 ? '' : 's'} kept in quarantine (see presets list --json); nothing was deleted.`);
   return `${lines.join('\n')}\n`;
 }
+
+const pr = (t: string | undefined) => (t === undefined ? undefined : printable(t));
 
 function matches(r: PresetSummary, q: string): boolean {
   const k = q.toLowerCase();
@@ -211,9 +217,9 @@ export const command: Command = {
         if (p.values.json) json(io, r);
         else {
           const lines = [`imported ${r.added.length + r.replaced.length} preset(s) from ${r.file}${r.fromVersion < 2 ? ` (schema ${r.fromVersion}, migrated)` : ''}`];
-          if (r.added.length) lines.push(`  added: ${r.added.join(', ')}`);
-          if (r.replaced.length) lines.push(`  replaced: ${r.replaced.join(', ')}`);
-          for (const s of r.skipped) lines.push(`  skipped ${s.name}: ${s.reason}`);
+          if (r.added.length) lines.push(`  added: ${printable(r.added.join(', '))}`);
+          if (r.replaced.length) lines.push(`  replaced: ${printable(r.replaced.join(', '))}`);
+          for (const s of r.skipped) lines.push(`  skipped ${printable(s.name)}: ${printable(s.reason)}`);
           io.out(`${lines.join('\n')}\n`);
         }
         return EXIT.ok;

@@ -58,7 +58,11 @@ export const command: Command = {
       if (!Number.isFinite(n) || n < 1 || n > 4) throw new UsageError(`settings set scatter: "${value}"; accepted: a number from 1 to 4`, 'scatter');
       patch = {scatterDefault: n};
     } else patch = {units: value.toLowerCase()};
-    settings.set(patch);
+    if (!settings.set(patch)) {
+      const why = settings.warnings().filter(w => w.startsWith('cannot save settings')).pop() ?? `cannot save settings to ${settings.file}`;
+      io.err(`tapwright: ${key} NOT set: ${why.replace(/; the change holds for this session only$/, '')}; nothing was saved\n`);
+      return EXIT.usage;
+    }
     io.err(`tapwright: ${key} set to ${value} in ${settings.file}\n`);
     return EXIT.ok;
   },

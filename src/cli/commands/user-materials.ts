@@ -3,14 +3,15 @@
  * (from a material certificate, say), kept in the preset store and usable by
  * id wherever a parent material is asked for.
  */
-import {readFile} from 'node:fs/promises';
 import path from 'node:path';
 import {EXIT, UsageError, type CliIo} from '../io.js';
 import {configDir} from '../../store/paths.js';
 import {openPresetStore} from '../../store/presets.js';
-import {MAX_IMPORT_BYTES, MAX_IMPORT_TEXT} from '../../store/guard.js';
+import {parseGuarded} from '../../store/guard.js';
+import {readInputFile} from '../solid-table-file.js';
 import type {UserParentMaterial} from '../../core/joint/input.js';
 import {formatQuantity, type UnitSystem} from '../../core/units.js';
+import {jsonText, printable} from '../../core/text-safety.js';
 
 export const USER_MATERIALS_HELP = `Your own parent materials (for tapped holes), kept in the preset store:
   tapwright materials add FILE [--overwrite]   a JSON object, or a list of them:
@@ -24,16 +25,16 @@ export const USER_MATERIALS_HELP = `Your own parent materials (for tapped holes)
 
 function line(m: UserParentMaterial, units: UnitSystem): string {
   const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
-  return `${m.id}  ${m.name}\n    Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}; source: ${m.source}\n`;
+  return `${printable(m.id)}  ${printable(m.name)}\n    Rm ${s(m.rm)}, yield ${s(m.yield)}, shear ${s(m.shear)}; source: ${printable(m.source)}\n`;
 }
 
 export async function userMaterialsAction(action: string, rest: string[], flags: {json: boolean; overwrite: boolean; yes: boolean; units: UnitSystem}, io: CliIo): Promise<number> {
   const store = openPresetStore(configDir(io.env));
-  for (const w of store.warnings()) io.err(`tapwright: ${w}\n`);
+  for (const w of store.warnings()) io.err(`tapwright: ${printable(w)}\n`);
   switch (action) {
     case 'mine': {
       const list = store.userMaterials();
-      if (flags.json) io.out(`${JSON.stringify({userMaterials: list}, null, 2)}\n`);
+      if (flags.json) io.out(`${jsonText({userMaterials: list})}\n`);
       else if (list.length === 0) io.out('You have no materials of your own yet; see tapwright materials --help (add FILE).\n');
       else for (const m of list) io.out(line(m, flags.units));
       return EXIT.ok;
@@ -41,23 +42,15 @@ export async function userMaterialsAction(action: string, rest: string[], flags:
     case 'add': {
       const file = rest[0];
       if (!file) throw new UsageError('materials add needs a FILE (JSON); see tapwright materials --help', 'FILE');
-      let text: string;
-      try {
-        text = await readFile(path.resolve(io.cwd, file), 'utf8');
-      } catch {
-        throw new UsageError(`materials add: cannot read "${file}"`, 'FILE');
-      }
-      if (Buffer.byteLength(text) > MAX_IMPORT_BYTES) throw new UsageError(`materials add: "${file}" is larger than ${MAX_IMPORT_TEXT}`, 'FILE');
-      let data: unknown;
-      try {
-        data = JSON.parse(text);
-      } catch {
-        throw new UsageError(`materials add: "${file}" is not JSON`, 'FILE');
-      }
+      // Size and kind are checked before a byte is read (a FIFO or /dev/zero is refused at once).
+      const text = readInputFile(path.resolve(io.cwd, file), file, 'materials add', 'FILE');
+      const parsed = parseGuarded(text);
+      if (!parsed.ok) throw new UsageError(`materials add: "${file}" is not JSON we accept: ${parsed.error}`, 'FILE');
+      const data = parsed.value;
       const items = Array.isArray(data) ? data : [data];
       if (items.length === 0 || items.length > 500) throw new UsageError('materials add: the file holds no material (or more than 500)', 'FILE');
-      const saved = items.map(m => store.saveUserMaterial(m, {overwrite: flags.overwrite}));
-      io.err(`tapwright: stored ${saved.map(m => `"${m.id}"`).join(', ')}\n`);
+      const saved = store.saveUserMaterials(items, {overwrite: flags.overwrite});
+      io.err(`tapwright: stored ${saved.map(m => `"${printable(m.id)}"`).join(', ')}\n`);
       return EXIT.ok;
     }
     case 'remove': {

@@ -6,6 +6,7 @@
 import * as z from 'zod';
 import {DUTY_IDS} from '../duty.js';
 import {MeasuredThreadSchema} from './measured-input.js';
+import {safeText} from '../text-safety.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -22,14 +23,14 @@ export const FrictionRangeSchema = z
 export const UserParentMaterialSchema = z
   .object({
     id: z.string().trim().min(1).max(40).regex(/^[A-Za-z0-9][A-Za-z0-9._+-]*$/, 'letters, digits and . _ + - only'),
-    name: z.string().trim().min(1).max(80),
+    name: safeText(z.string().trim().min(1).max(80)),
     group: z.enum(['steel', 'cast-iron', 'aluminium', 'copper-alloy', 'magnesium', 'other']).default('other'),
     rm: z.number().min(20).max(2500),
     yield: z.number().min(10).max(2500),
     shear: z.number().min(10).max(1500),
     elasticModulus: z.number().min(1000).max(500000),
     /** Where the numbers come from, e.g. "material certificate 3.1 no. 12345". */
-    source: z.string().trim().min(1).max(300),
+    source: safeText(z.string().trim().min(1).max(300)),
   })
   .refine(m => m.yield <= m.rm, {message: 'yield must not exceed rm', path: ['yield']});
 
@@ -37,9 +38,9 @@ export type UserParentMaterial = z.output<typeof UserParentMaterialSchema>;
 
 export const JointInputSchema = z.object({
   /** Thread designation as typed, e.g. "M10x1.5-6H/6g", "1/4-20 UNC-2A". */
-  thread: z.string().trim().min(1).max(60),
+  thread: safeText(z.string().trim().min(1).max(60)),
   /** Bolt grade id from the material library (e.g. "8.8", "10.9", "A2-70", "SAE-5"). */
-  boltGrade: z.string().min(1).max(40).default('8.8'),
+  boltGrade: safeText(z.string().min(1).max(40)).default('8.8'),
   /** Custom bolt tensile strength Rm, MPa; overrides the grade's value. */
   boltRm: z.number().min(100).max(2500).optional(),
   /** Custom bolt yield (Rp0.2), MPa; overrides the grade's value. */
@@ -47,7 +48,7 @@ export const JointInputSchema = z.object({
   /** What carries the internal thread. */
   internal: z.enum(['tapped', 'nut']).default('tapped'),
   /** Parent material id for a tapped hole. */
-  parent: z.string().min(1).max(40).optional(),
+  parent: safeText(z.string().min(1).max(40)).optional(),
   /** The user's own material named by `parent`, attached from the store (not a CLI option). */
   parentData: UserParentMaterialSchema.optional(),
   /** Custom parent tensile strength, MPa. */
@@ -55,7 +56,7 @@ export const JointInputSchema = z.object({
   /** Custom parent shear strength, MPa. */
   parentShear: z.number().min(10).max(1500).optional(),
   /** Nut property class (ISO 898-2, e.g. "8", "10"; or a SAE J995 grade). */
-  nutClass: z.string().min(1).max(20).optional(),
+  nutClass: safeText(z.string().min(1).max(20)).optional(),
   /** Inch nut style for the standard dimensions (ASME B18.2.2): hex (default) or heavy hex. Metric nuts are ISO 4032. */
   nutStyle: z.enum(['hex', 'heavy-hex']).optional(),
   /** Nut height m, mm. */

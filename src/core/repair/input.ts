@@ -10,6 +10,7 @@
  * face the clamped part sits on), along the hole axis.
  */
 import * as z from 'zod';
+import {safeText} from '../text-safety.js';
 
 export const HOLE_STATES = ['intact', 'stripped'] as const;
 
@@ -40,7 +41,7 @@ export const RepairInputSchema = z
      */
     margin: z.number().min(0.5).max(5).optional(),
     /** Nut property class for the through-bolt option (ISO 898-2 or SAE J995); absent: matched to the bolt grade. */
-    nutClass: z.string().min(1).max(20).optional(),
+    nutClass: safeText(z.string().min(1).max(20)).optional(),
     /** Nut height for the through-bolt option, mm; absent: the regular nut of the size. */
     nutHeight: z.number().min(0.5).max(500).optional(),
     /** Nut width across flats for the through-bolt option, mm. */

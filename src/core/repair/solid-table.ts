@@ -8,6 +8,7 @@
  * their own table; it imports SolidInsertTableSchema from here.
  */
 import * as z from 'zod';
+import {safeText} from '../text-safety.js';
 
 export const SOLID_INSERT_TYPES = ['thin-wall', 'heavy-duty'] as const;
 export type SolidInsertType = (typeof SOLID_INSERT_TYPES)[number];
@@ -17,10 +18,10 @@ export const DEMO_TABLE_WARNING = "demo values: use the insert maker's data";
 
 export const SolidInsertEntrySchema = z.object({
   /** Internal (nominal) thread of the insert, as typed: "M10x1.5", "1/4-20 UNC". */
-  internal: z.string().trim().min(1).max(60),
+  internal: safeText(z.string().trim().min(1).max(60)),
   type: z.enum(SOLID_INSERT_TYPES),
   /** External thread of the insert, cut into the parent: "M14x1.5". */
-  external: z.string().trim().min(1).max(60),
+  external: safeText(z.string().trim().min(1).max(60)),
   /** Insert length, mm. */
   length: z.number().min(1).max(500),
   /** Tap drill for the external thread, mm; absent: the planner's tap-drill rule. */
@@ -39,11 +40,11 @@ export const SolidInsertTableSchema = z.object({
   /** Fixed tag so a table file cannot be mistaken for a preset. */
   kind: z.literal('solid-key-locked-inserts'),
   version: z.literal(1),
-  name: z.string().trim().min(1).max(80),
+  name: safeText(z.string().trim().min(1).max(80)),
   /** Where the numbers come from: 'demo' (invented), 'maker' (an insert maker's data), 'user'. */
   provenance: z.object({
     kind: z.enum(['demo', 'maker', 'user']),
-    source: z.string().trim().min(1).max(300),
+    source: safeText(z.string().trim().min(1).max(300)),
   }),
   entries: z.array(SolidInsertEntrySchema).min(1).max(2000),
 }).superRefine((t, ctx) => {

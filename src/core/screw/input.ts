@@ -4,6 +4,7 @@
  */
 import * as z from 'zod';
 import {DUTY_IDS} from '../duty.js';
+import {safeText} from '../text-safety.js';
 
 /** Thread friction: one value, or a min..max range (raise torque at max, lowering and self-locking at min). */
 export const ScrewFrictionSchema = z.union([
@@ -17,7 +18,7 @@ export const END_CONDITION_IDS = ['fixed-free', 'pinned-pinned', 'fixed-pinned',
 
 export const ScrewInputSchema = z.object({
   /** "square 32x4", "Tr24x5", "Tr40x14(P7)", "1-5 ACME-2G". */
-  thread: z.string().trim().min(1).max(60),
+  thread: safeText(z.string().trim().min(1).max(60)),
   /** Number of starts; a multi-start designation sets it too. */
   starts: z.number().int().min(1).max(8).default(1),
   /** Axial load, N. */
@@ -33,11 +34,11 @@ export const ScrewInputSchema = z.object({
   /** Engaged nut length, mm. */
   nutLength: z.number().min(0.5).max(2000),
   /** Nut material id (bronze, cast-iron, steel, brass, plastic, or a material-library id). */
-  nutMaterial: z.string().min(1).max(40).default('bronze'),
+  nutMaterial: safeText(z.string().min(1).max(40)).default('bronze'),
   /** Loss of nut-thread thickness by wear, mm (0 for a new nut). */
   nutWear: z.number().min(0).max(50).default(0),
   /** Screw material id (steel, alloy-steel, or a steel id of the material library). */
-  screwMaterial: z.string().min(1).max(40).optional(),
+  screwMaterial: safeText(z.string().min(1).max(40)).optional(),
   /** Custom screw yield strength, MPa; overrides the material's value. */
   screwYield: z.number().min(50).max(2500).optional(),
   /** Unsupported length of the screw in compression, mm (0 = no column check). */

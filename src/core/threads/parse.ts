@@ -144,7 +144,8 @@ function parseMetric(raw: string): Parsed<ThreadSpec> {
 
 // ---------------------------------------------------------------- unified
 
-const UNIFIED_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d+(?:\.\d+)?)\s*(unef|unc|unf|un)?\s*(?:-\s*)?(.*)$`, 'i');
+// The threads per inch is a plain decimal: "1e308" or "1.5.2" is not read as its first digits.
+const UNIFIED_RE = new RegExp(String.raw`^${SIZE_RE}\s*-\s*(\d+(?:\.\d+)?)(?![.,\d]|e[+-]?\d)\s*(unef|unc|unf|un)?\s*(?:-\s*)?(.*)$`, 'i');
 
 /** "1/4 UNC", "#10 UNF-3B": a size and a series without the threads per inch. */
 const UNIFIED_NO_TPI_RE = new RegExp(String.raw`^${SIZE_RE}\s*-?\s*(unef|unc|unf)\b\s*(.*)$`, 'i');
