@@ -9,7 +9,10 @@ import {fileURLToPath} from 'node:url';
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
 export async function bundle(entry = 'src/cli/entry.ts', name = 'entry') {
-  const out = fs.mkdtempSync(path.join(root, 'node_modules', '.cache', `tapwright-${name}-`));
+  // A clean install has no node_modules/.cache yet.
+  const cache = path.join(root, 'node_modules', '.cache');
+  fs.mkdirSync(cache, {recursive: true});
+  const out = fs.mkdtempSync(path.join(cache, `tapwright-${name}-`));
   const file = path.join(out, `${name}.mjs`);
   await build({
     entryPoints: [path.join(root, entry)],
