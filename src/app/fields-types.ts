@@ -25,7 +25,7 @@ export interface FormValues {
   notes?: Notes;
 }
 
-export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'screw-thread' | 'screw-nut' | 'screw-friction';
+export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'measured' | 'screw-thread' | 'screw-nut' | 'screw-friction';
 export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
 export type PickSource = 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction';
 
