@@ -74,6 +74,8 @@ export interface FieldRow {
   optional: boolean;
   /** Whole numbers only (shown without decimals). */
   integer?: boolean;
+  /** Significant figures the workbench shows (default 3); a measured diameter shows 4. */
+  significant?: number;
   /** What applies when the field is empty, shown in its place ("from grade"); a needed field may have one when the resolver fills it (a nut's engaged length). */
   empty?: string;
   /** One line shown under the fields in the workbench when this one is selected. */

@@ -13,7 +13,7 @@ const GAUGE = ['enters', 'stops'] as const;
 
 /** A length measured on the thread, mm (bare numbers follow --units). */
 function length(key: string, label: string, option: string, arg: string, cliHelp: string, help: string): JointRow {
-  return {group: 'joint', key: `measured.${key}`, label, empty: 'class limit', step: 'measured', kind: 'quantity', dimension: 'length', optional: true, section: 'measured',
+  return {group: 'joint', key: `measured.${key}`, label, empty: 'class limit', step: 'measured', kind: 'quantity', dimension: 'length', significant: 4, optional: true, section: 'measured',
     cli: {name: option, arg, help: cliHelp}, help};
 }
 
