@@ -94,7 +94,7 @@ describe('workbench: the Measured step', () => {
     await app.press(KEY.down, /! Backlash new/);
     await typeIn(app, '0.1');
     await app.see(/Backlash now\s+0\.6000 mm/);
-    await app.see(/Backlash\s+wear 0\.500 mm; replace by \d/);
+    await app.see(/Backlash\s+nut wear 0\.500 mm; replace at \d/);
     app.unmount();
   });
 });
