@@ -6,6 +6,8 @@ import {runCli} from '../../src/cli/main.js';
 import {memoryIo} from '../../src/cli/io.js';
 import {ScrewInputSchema} from '../../src/core/screw/index.js';
 import {screwBacklash} from '../../src/core/screw/backlash.js';
+import {checkScrew} from '../../src/core/screw/index.js';
+import {screwMarkdown} from '../../src/report/screw-markdown.js';
 
 // Demo scenario (invented): the Tr24x5 lead screw of a press table in a 40 mm bronze nut, 20 kN;
 // 0.1 mm play when new, 0.6 mm measured at the bench.
@@ -51,6 +53,13 @@ describe('screw --backlash --backlash-new', () => {
     expect(r.out).toMatch(/^Backlash +measured 0\.600 mm, new 0\.100 mm: nut wear 0\.500 mm axial/m);
     expect(r.out.replace(/\s+/g, ' ')).toMatch(/stripping margin left [\d.]+ x load \(to keep: 2\.00\); replace the nut at a backlash of [\d.]+ mm/);
     expect(Math.max(...r.out.split('\n').map(l => l.length))).toBeLessThanOrEqual(80);
+  });
+
+  it('Markdown work-order report: the backlash among the inputs and the Backlash rows in the results', () => {
+    const input = {...INPUT, backlash: 0.6, backlashNew: 0.1};
+    const md = screwMarkdown(checkScrew(input), input, {units: 'si'});
+    expect(md).toMatch(/^\| Backlash \(measured, new\) \| 0\.600 mm, 0\.100 mm \|$/m);
+    expect(md).toMatch(/^\| Backlash \| measured 0\.600 mm, new 0\.100 mm: nut wear 0\.500 mm axial .*replace the nut at a backlash of [\d.]+ mm \|$/m);
   });
 
   it('bare numbers follow --units us (inches)', async () => {
