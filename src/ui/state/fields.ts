@@ -22,8 +22,8 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'parts', title: 'Parts'},
   {id: 'engagement', title: 'Engagement'},
   {id: 'tightening', title: 'Tightening'},
-  {id: 'hole', title: 'Hole state'},
   {id: 'measured', title: 'Measured'},
+  {id: 'hole', title: 'Hole state'},
 ];
 
 export const SCREW_STEPS: readonly {id: StepId; title: string}[] = [
