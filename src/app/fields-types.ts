@@ -25,7 +25,7 @@ export interface FormValues {
   notes?: Notes;
 }
 
-export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'screw-thread' | 'screw-nut' | 'screw-friction';
+export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'measured' | 'screw-thread' | 'screw-nut' | 'screw-friction';
 export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
 export type PickSource = 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction';
 
@@ -74,6 +74,8 @@ export interface FieldRow {
   optional: boolean;
   /** Whole numbers only (shown without decimals). */
   integer?: boolean;
+  /** Significant figures the workbench shows (default 3); a measured diameter shows 4. */
+  significant?: number;
   /** What applies when the field is empty, shown in its place ("from grade"); a needed field may have one when the resolver fills it (a nut's engaged length). */
   empty?: string;
   /** One line shown under the fields in the workbench when this one is selected. */

@@ -6,6 +6,7 @@
  * JointInputSchema and one row here, in the order the workbench shows it.
  */
 import type {FieldRow, FormValues} from './fields-types.js';
+import {MEASURED_ROWS} from './measured-fields.js';
 
 const isNut = (v: FormValues) => v.joint.internal === 'nut';
 const isTapped = (v: FormValues) => v.joint.internal !== 'nut';
@@ -13,12 +14,13 @@ const tighten = (m: string) => (v: FormValues) => (v.joint.tightening ?? 'utilis
 const MU_RANGE = '0.02 to 0.6, or min..max';
 
 /** --help section of each joint option (see JOINT_SECTIONS). */
-export type JointSection = 'joint' | 'tightening' | 'loads';
+export type JointSection = 'joint' | 'tightening' | 'loads' | 'measured';
 
 export const JOINT_SECTIONS: readonly {id: JointSection; title: string}[] = [
   {id: 'joint', title: 'The joint'},
   {id: 'tightening', title: 'Tightening (one of; default --utilisation 0.9)'},
   {id: 'loads', title: 'Loads and margins'},
+  {id: 'measured', title: 'As measured (each optional; stripping uses them in place of the class limits)'},
 ];
 
 /** A joint row; `section` places its option in `check --help`. Rows of a feature may live in a file of their own and be spread in below. */
@@ -98,4 +100,5 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'tightening', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
     cli: {name: '--service-load', arg: 'F', help: 'external axial load on the bolt, taken in full'},
     help: 'External axial load on the bolt in service; empty = none.'},
+  ...MEASURED_ROWS,
 ];

@@ -46,17 +46,24 @@ function missing(group: InputGroup, values: FormValues, draft: Record<string, un
   return out;
 }
 
-/** Every issue of a failed schema parse, on its field. */
-function schemaErrors(group: InputGroup, error: z.ZodError, units: UnitSystem, ascii: boolean): FieldError[] {
+/** The row key of a dotted schema path: its own row, else the first row inside it (measured.overWires -> its measurement), else the top key. */
+function keyOfPath(group: InputGroup, dotted: string, top: string): string {
+  if (!dotted.includes('.')) return top;
+  if (rowOf(group, dotted)) return dotted;
+  return ALL_ROWS.find(r => r.group === group && r.key.startsWith(`${dotted}.`))?.key ?? top;
+}
+
+/** Every issue of a failed schema parse, on its field; a member missing from a given object (the wire of a three-wire reading) "is needed". */
+function schemaErrors(group: InputGroup, error: z.ZodError, draft: unknown, units: UnitSystem, ascii: boolean): FieldError[] {
   const seen = new Set<string>();
   const out: FieldError[] = [];
   for (const issue of error.issues) {
-    // A member of an optional object (measured.holeMinorDiameter) when the table has a row for it.
     const dotted = issue.path.map(String).join('.');
-    const key = dotted.includes('.') && rowOf(group, dotted) ? dotted : String(issue.path[0] ?? '');
+    const key = keyOfPath(group, dotted, String(issue.path[0] ?? ''));
     if (seen.has(key)) continue;
     seen.add(key);
-    out.push(fieldError(group, key, issue.message, 'schema', units, ascii));
+    const absent = issue.code === 'invalid_type' && key === dotted && key.includes('.') && getPath(draft, key) === undefined;
+    out.push(absent ? fieldError(group, key, 'is needed', 'needed', units, ascii) : fieldError(group, key, issue.message, 'schema', units, ascii));
   }
   return out;
 }
@@ -109,7 +116,7 @@ export function resolveJointInput(draft: Partial<JointInputDraft>, ctx: ResolveC
   const errors = missing('joint', {joint: d, hole: {}}, d, units, ascii);
   if (errors.length > 0) return {errors};
   const parsed = SCHEMAS.joint.safeParse(d);
-  if (!parsed.success) return {errors: schemaErrors('joint', parsed.error, units, ascii)};
+  if (!parsed.success) return {errors: schemaErrors('joint', parsed.error, d, units, ascii)};
   return {input: withUserMaterial(parsed.data, ctx.userMaterials ?? [])};
 }
 
@@ -129,7 +136,7 @@ export function resolveHoleInput(draft: Partial<RepairInputDraft>, ctx: ResolveC
   const errors = missing('hole', {joint: {}, hole: draft}, draft, units, ascii);
   if (errors.length > 0) return {errors};
   const parsed = SCHEMAS.hole.safeParse(draft);
-  if (!parsed.success) return {errors: schemaErrors('hole', parsed.error, units, ascii)};
+  if (!parsed.success) return {errors: schemaErrors('hole', parsed.error, draft, units, ascii)};
   return {input: parsed.data};
 }
 
@@ -140,6 +147,6 @@ export function resolveScrewInput(draft: Partial<ScrewInputDraft>, ctx: ResolveC
   const errors = missing('screw', {joint: {}, hole: {}, screw: draft}, draft, units, ascii);
   if (errors.length > 0) return {errors};
   const parsed = SCHEMAS.screw.safeParse(draft);
-  if (!parsed.success) return {errors: schemaErrors('screw', parsed.error, units, ascii)};
+  if (!parsed.success) return {errors: schemaErrors('screw', parsed.error, draft, units, ascii)};
   return {input: parsed.data};
 }

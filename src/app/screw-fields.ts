@@ -14,6 +14,7 @@ import {
 } from '../core/screw/index.js';
 import {UsageError} from './errors.js';
 import type {FieldRow, OptionReader} from './fields-types.js';
+import {BACKLASH_ROWS} from './backlash-fields.js';
 
 /** A value, a min..max range, or a row of the thread friction table (Shigley Table 8-5). */
 const threadFriction: OptionReader = (text, {option, range}) => {
@@ -82,7 +83,8 @@ export const SCREW_ROWS: readonly ScrewRow[] = [
     help: 'bronze, cast-iron, steel, plastic, or a material id; tapwright screw --help lists them.'},
   {group: 'screw', key: 'nutWear', label: 'Nut wear', step: 'screw-nut', kind: 'quantity', dimension: 'length', optional: true,
     cli: {name: '--nut-wear', arg: 'W', help: 'nut-thread thickness lost to wear, 0 to 50 mm'},
-    help: 'Loss of nut-thread thickness by wear; 0 for a new nut.'},
+    help: 'Loss of nut-thread thickness by wear; 0 for a new nut; empty when the backlash gives it.'},
+  ...BACKLASH_ROWS,
   {group: 'screw', key: 'speed', label: 'Sliding speed', step: 'screw-nut', kind: 'quantity', dimension: 'speed', optional: true, empty: 'not given',
     cli: {name: '--speed', arg: 'V', help: 'sliding speed at the thread, 0 to 10 m/s (0 = by hand)'},
     help: 'Sliding speed at the thread, for the allowable bearing pressure; 3m/min accepted.'},

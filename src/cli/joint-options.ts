@@ -36,7 +36,7 @@ export function jointDraftFromOptions(values: ParsedOptions['values'], units: Un
   const has = (o: string): boolean => values[o.slice(2)] !== undefined;
   const tight = ['--torque', '--preload', '--utilisation'].filter(has);
   if (tight.length > 1) throw new UsageError(`${tight.join(' and ')} contradict each other; give one way of tightening`, tight[1]);
-  const d: Record<string, unknown> = overDraft(base, readRowOptions(JOINT_ROWS, values, units));
+  let d: Record<string, unknown> = overDraft(base, readRowOptions(JOINT_ROWS, values, units));
   if (tight[0]) d.tightening = tight[0].slice(2);
 
   const tappedOpts = ['--parent', '--parent-rm', '--parent-shear', '--hole-depth'].filter(has);
@@ -44,6 +44,12 @@ export function jointDraftFromOptions(values: ParsedOptions['values'], units: Un
   if (tappedOpts.length && nutOpts.length) {
     throw new UsageError(`${nutOpts[0]} is for a nut and ${tappedOpts[0]} for a tapped hole; give one kind of internal thread`, nutOpts[0]);
   }
+  // The bolt's pitch diameter is given directly or by three wires: the one given replaces the other (a preset's).
+  if (has('--bolt-pitch-diameter') && (has('--over-wires') || has('--wire'))) {
+    throw new UsageError(`--bolt-pitch-diameter and ${has('--over-wires') ? '--over-wires' : '--wire'} contradict each other; give the pitch diameter or the three-wire reading`, '--bolt-pitch-diameter');
+  }
+  if (has('--bolt-pitch-diameter')) d = overDraft(d, {'measured.overWires': undefined});
+  if (has('--over-wires') || has('--wire')) d = overDraft(d, {'measured.boltPitchDiameter': undefined});
   if (nutOpts.length) {
     if (!has('--nut') && d.internal !== 'nut') throw new UsageError(`${nutOpts[0]} applies to a nut; give --nut CLASS too`, nutOpts[0]);
     d.internal = 'nut';

@@ -31,6 +31,7 @@ function inputRows(input: ScrewInput, units: UnitSystem): string[][] {
     ['Collar', input.muCollar > 0 ? `friction ${input.muCollar} on ${q(input.collarDiameter, 'length')}` : 'no collar friction'],
     ['Free length', input.length > 0 ? `${q(input.length, 'length')}, ends ${input.ends}` : 'not given: no column check'],
   ];
+  if (input.backlash !== undefined) rows.push(['Backlash (measured, new)', `${q(input.backlash, 'length')}, ${input.backlashNew !== undefined ? q(input.backlashNew, 'length') : 'not given'}`]);
   if (input.screwYield !== undefined) rows.push(['Screw yield (given)', q(input.screwYield, 'stress')]);
   if (input.speed !== undefined) rows.push(['Sliding speed', q(input.speed, 'speed')]);
   if (input.allowablePressure !== undefined) rows.push(['Allowable flank pressure (given)', q(input.allowablePressure, 'stress')]);

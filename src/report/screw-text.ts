@@ -51,11 +51,26 @@ export function screwRows(r: ScrewResult, units: UnitSystem): Row[] {
   field('', `flank pressure ${q(n.bearingPressure, 'stress')}; ${allow ? `safe ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')} (${allow.condition})` : 'no tabulated safe pressure'}`);
   const s = n.stripping;
   field('', `strips at: nut threads ${q(s.nutForce, 'force')}, screw threads ${q(s.screwForce, 'force')}; ${s.weaker} weaker, ${formatNumber(s.margin, 3)} x load; nut threads strip at this load after ${q(s.wearToStrip, 'length')} more wear`);
+  out.push(...backlashRows(r, units));
   const c = r.buckling;
   field('Column', c.checked && c.criticalLoad !== null
     ? `critical load ${q(c.criticalLoad, 'force')} (${c.method === 'euler' ? 'Euler' : 'J. B. Johnson'}, ${c.ends}, C = ${c.endConstant}, l/k ${formatNumber(c.slenderness ?? 0, 3)}), ${formatNumber(c.margin ?? 0, 3)} x load`
     : r.input.loadDirection === 'tension' ? 'not checked: the screw is in tension' : 'not checked: give --length for the unsupported length');
   return out;
+}
+
+/** The worn-nut rows of a screw checked with a measured backlash (none without one). */
+export function backlashRows(r: ScrewResult, units: UnitSystem): Row[] {
+  const b = r.backlash;
+  if (!b) return [];
+  const q = (v: number) => formatQuantity(v, 'length', units, {significant: 3});
+  const replace = b.replaceBy === null
+    ? `no replace-by backlash: ${b.reason ?? 'not found'}`
+    : `replace the nut at a backlash of ${q(b.replaceBy)}${b.replaceNow ? ': REACHED, replace now' : ''}`;
+  return [
+    {label: 'Backlash', value: `measured ${q(b.measured)}, new ${q(b.new)}: nut wear ${q(b.axialWear)} axial (${q(b.flankWear)} normal to the flank), used as the nut wear`},
+    {label: '', value: `stripping margin left ${formatNumber(b.marginLeft, 3)} x load (to keep: ${formatNumber(b.requiredMargin, 3)}); ${replace}`},
+  ];
 }
 
 /** Sources of a power-screw result, with the two materials'. */

@@ -39,8 +39,8 @@ Exit codes: 0 no failed check; 3 computed, but a check failed; 2 bad input
 or usage.
 Methods: VDI 2230 Part 1 tightening; Shigley, Mechanical Engineering Design
 9th ed. section 8-2 thread stresses; spring-chain load share; FED-STD-H28/2B
-stripping at the least-material limits; Alexander (1977) / VDI 2230
-engagement.
+stripping at the least-material limits or the measured diameters; Alexander
+(1977) / VDI 2230 engagement.
 
 ${CAUTION_LINES.join('\n')}
 `;

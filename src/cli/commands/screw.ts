@@ -65,6 +65,8 @@ export function screwInputFromArgs(args: string[], base?: Record<string, unknown
   const given = readRowOptions(SCREW_ROWS, values, units);
   // A multi-start thread typed over a preset brings its own starts.
   const merged = base && given.thread !== undefined && given.starts === undefined ? {...base, starts: undefined, ...given} : {...base, ...given};
+  // A measured backlash given here replaces a preset's nut wear (the wear then comes from the backlash).
+  if (given.backlash !== undefined && given.nutWear === undefined) delete merged.nutWear;
   const r = resolveScrewInput(merged, {units});
   if (r.errors) throw usageErrorOf(r.errors[0]!);
   return {input: r.input, units, json, picks: false};

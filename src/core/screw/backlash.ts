@@ -18,7 +18,10 @@
  */
 import type {ScrewInput} from './input.js';
 import type {ScrewResult} from './result.js';
-import {checkScrew} from './index.js';
+import {checkScrew, ScrewInputError} from './index.js';
+import {WATCH_MARGIN} from './flags.js';
+import {applyDuty} from '../duty.js';
+import type {Flag} from '../types.js';
 
 /** A backlash that cannot be right; `field` is `backlash` or `backlashNew` (the CLI names its option). */
 export class BacklashInputError extends Error {
@@ -82,7 +85,8 @@ export function screwBacklash(input: ScrewInput, backlash: number, backlashNew: 
     throw new BacklashInputError('backlash', `backlash ${backlash} mm means ${axialWear.toFixed(3)} mm of nut thread worn away, the whole thread thickness (${(wf * P).toFixed(3)} mm): the nut has no thread left; accepted: below ${(backlashNew + wf * P).toFixed(3)} mm`);
   }
   const result = checkScrew({...input, nutWear: axialWear});
-  const F = input.load;
+  // The load as computed (a given torque may have solved for it).
+  const F = result.input.load;
   const strip = result.nut.stripping;
   const margin = F > 0 ? Math.min(strip.nutForce, strip.screwForce) / F : Infinity;
   const nut0 = fresh.nut.stripping.nutForce;
@@ -103,5 +107,44 @@ export function screwBacklash(input: ScrewInput, backlash: number, backlashNew: 
     replaceBy,
     replaceNow: replaceBy === null ? F > 0 : backlash >= replaceBy - 1e-12,
     ...(reason !== undefined ? {reason} : {}),
+  };
+}
+
+/**
+ * The screw as measured: checkScrew with the nut wear from `backlash` and `backlashNew`
+ * (screwBacklash, model in the file header), the result carrying `backlash`, a note that the
+ * wear came from the backlash, and a flag when the replace-by value is reached. The required
+ * margin defaults to 2, the stripping watch band of the flags (common practice, no source).
+ * Throws ScrewInputError naming `backlash`, `backlashNew` or `nutWear` for inputs that do not go together.
+ */
+export function wornScrew(input: ScrewInput): ScrewResult {
+  const {backlash, backlashNew, backlashMargin, ...plain} = input;
+  if (backlash === undefined) throw new ScrewInputError('backlash', 'is needed with the new-nut backlash: give the measured axial backlash too');
+  if (backlashNew === undefined) {
+    throw new ScrewInputError('backlashNew', 'is needed with the measured backlash: the axial backlash of a new nut (0 if not known: then all the play counts as wear, the safe reading)');
+  }
+  if (input.nutWear > 0) {
+    throw new ScrewInputError('nutWear', `nut wear ${input.nutWear} mm and a measured backlash both given: the wear is worked out from the backlash; leave the nut wear empty`);
+  }
+  const required = backlashMargin ?? WATCH_MARGIN.stripping;
+  const b = screwBacklash(plain, backlash, backlashNew, required);
+  const r = b.result;
+  const mm = (x: number) => `${x.toFixed(3)} mm`;
+  const extra: Flag[] = [];
+  if (b.replaceNow && b.replaceBy !== null) {
+    extra.push({code: 'nut-replace', level: 'watch', message: `backlash ${mm(backlash)} is at or past the replace-by backlash ${mm(b.replaceBy)}: the nut keeps less than ${required} times the load against stripping; replace the nut`, summary: `Backlash ${mm(backlash)} past replace-by ${mm(b.replaceBy)}: replace the nut`});
+  }
+  return {
+    ...r,
+    backlash: {
+      measured: backlash, new: backlashNew, axialWear: b.axialWear, flankWear: b.flankWear,
+      marginLeft: b.margin, requiredMargin: required, replaceBy: b.replaceBy, replaceNow: b.replaceNow,
+      ...(b.reason !== undefined ? {reason: b.reason} : {}),
+    },
+    flags: [...r.flags, ...applyDuty(extra, input.duty)],
+    notes: [
+      ...r.notes,
+      `nut wear ${mm(b.axialWear)} worked out from the measured backlash ${mm(backlash)} less the new-nut backlash ${mm(backlashNew)} (all charged to the nut: the conservative reading); replace-by backlash for a stripping margin of ${required}${backlashMargin === undefined ? ' (default: the watch band of the flags, common practice, no source)' : ''}`,
+    ],
   };
 }

@@ -8,6 +8,7 @@
 import type {Parsed} from '../types.js';
 import type {ScrewInput} from './input.js';
 import type {ScrewResult} from './result.js';
+import {wornScrew} from './backlash.js';
 import {parsePowerThread} from './designation.js';
 import {powerThreadGeometry} from './geometry.js';
 import {collarTorque, efficiency, isSelfLocking, leadAngle, lowerThreadTorque, raiseThreadTorque, raisingLocks, selfLockingFriction} from './mechanics.js';
@@ -40,8 +41,18 @@ export class ScrewInputError extends Error {
   }
 }
 
-/** Compute a power screw. Throws ScrewInputError for an input that cannot be computed. */
+/**
+ * Compute a power screw. Throws ScrewInputError for an input that cannot be computed. With a
+ * measured backlash (`backlash`, `backlashNew`) the nut wear comes from it and the result
+ * carries `backlash` (src/core/screw/backlash.ts, wornScrew).
+ */
 export function checkScrew(input: ScrewInput): ScrewResult {
+  if (input.backlash !== undefined || input.backlashNew !== undefined) return wornScrew(input);
+  return checkScrewAsGiven(input);
+}
+
+/** Compute a power screw with the nut wear as given (no backlash). */
+function checkScrewAsGiven(input: ScrewInput): ScrewResult {
   const parsed = parsePowerThread(input.thread, input.starts);
   if (!parsed.ok) throw new ScrewInputError('thread', parsed.error);
   const g = powerThreadGeometry(parsed.value);

@@ -57,6 +57,15 @@ export const ScrewInputSchema = z.object({
   torqueSolves: z.enum(['load', 'friction']).default('load'),
   /** Allowable nut bearing pressure, MPa; overrides the table. */
   allowablePressure: z.number().min(0.1).max(500).optional(),
+  /**
+   * Measured axial backlash (play) between screw and nut, mm. With `backlashNew` it gives the nut
+   * wear (src/core/screw/backlash.ts), which then takes the place of `nutWear`.
+   */
+  backlash: z.number().min(0).max(50).optional(),
+  /** Axial backlash of the nut when new (or from the class allowance), mm. */
+  backlashNew: z.number().min(0).max(50).optional(),
+  /** Stripping margin the worn nut must keep, for the replace-by backlash (default 2: the watch band of the flags). */
+  backlashMargin: z.number().min(1).max(20).optional(),
   /** What the screw is for: general, or lifting / pressure / safety-critical (stricter flags, sign-off required). */
   duty: z.enum(DUTY_IDS).default('general'),
 });

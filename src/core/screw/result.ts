@@ -79,6 +79,26 @@ export interface ScrewResult {
    * used, and whether that friction lies outside the published pairs (Shigley 9th ed. Table 8-5).
    */
   torqueSolve?: {torque: number; solves: 'load' | 'friction'; load: number; friction: number; outsidePublished: boolean};
+  /**
+   * With a measured backlash: the nut wear worked out from it (it takes the place of the nut-wear
+   * input), the stripping margin left and the replace-by backlash. Lengths mm.
+   */
+  backlash?: {
+    /** Measured and new-nut axial backlash, mm. */
+    measured: number;
+    new: number;
+    /** Axial nut-thread thickness lost (fed to the nut wear), mm; the same as a layer normal to the flank, mm. */
+    axialWear: number;
+    flankWear: number;
+    /** Stripping margin left now (weaker thread / load) and the margin the nut must keep. */
+    marginLeft: number;
+    requiredMargin: number;
+    /** Backlash at which the nut reaches the required margin, mm; null with `reason`. */
+    replaceBy: number | null;
+    /** True when the measured backlash is at or past the replace-by value. */
+    replaceNow: boolean;
+    reason?: string;
+  };
   flags: Flag[];
   sources: string[];
   notes: string[];

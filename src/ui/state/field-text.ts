@@ -40,7 +40,7 @@ export function formatField(f: FieldDef, value: unknown, units: UnitSystem, asci
   }
   switch (f.kind) {
     case 'quantity':
-      return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: 3}) : String(value);
+      return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: f.significant ?? 3}) : String(value);
     case 'ratio':
       return typeof value === 'number' ? (f.integer ? String(Math.round(value)) : formatNumber(value, 3)) : String(value);
     case 'range': {

@@ -22,6 +22,7 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'parts', title: 'Parts'},
   {id: 'engagement', title: 'Engagement'},
   {id: 'tightening', title: 'Tightening'},
+  {id: 'measured', title: 'Measured'},
   {id: 'hole', title: 'Hole state'},
 ];
 

@@ -72,7 +72,7 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     fit(stressParts(2), width, t.sym.ellipsis),
     row('s', 'Shank', `von Mises ${q(stress.shank.vonMises, 'stress')}`),
     row('x', 'Stripping', `bolt ${q(st.external.force, 'force')}, ${hole} ${q(st.internal.force, 'force')}`),
-    row('w', '', `weaker: ${st.weaker === 'external' ? 'bolt' : hole} (${limitsUsedText(st.limitsUsed)})`, stripFail ? t.tone('fail') : undefined),
+    row('w', '', `weaker ${st.weaker === 'external' ? 'bolt' : hole}, ${limitsUsedText(st.limitsUsed)}`, stripFail ? t.tone('fail') : undefined),
     // Bolt-first compares with the upper strength Rm,max (as the margin below does); Rm,min beside it.
     row('b', 'Bolt break', st.boltBreakForceUpper !== undefined ? `${q(st.boltBreakForceUpper, 'force')} at Rm,max (${num(st.boltBreakForce, 'force')} at Rm,min)` : `${q(st.boltBreakForce, 'force')} (As x Rm)`),
     row('m', 'Margins', `stripping ${marginText(margin.stripping)}, bolt-first ${marginText(margin.boltBreaksFirst)}`),

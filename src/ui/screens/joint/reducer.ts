@@ -48,10 +48,12 @@ export function startEdit(s: WorkbenchState, f: FieldDef, svc: WorkbenchServices
   const value = getValue(s.values, f.id) ?? fieldBounds(f.id).default;
   if (f.kind === 'choice') {
     const choices = f.choices ?? [];
-    const next = choices[(choices.indexOf(String(value ?? choices[0])) + 1) % choices.length];
+    // An optional choice (a gauge outcome) cycles through "not given" too.
+    const cycle: readonly (string | undefined)[] = f.optional && fieldBounds(f.id).default === undefined ? [...choices, undefined] : choices;
+    const next = cycle[(cycle.indexOf(value === undefined && cycle.includes(undefined) ? undefined : String(value ?? choices[0])) + 1) % cycle.length];
     const set = setValue(s.values, f.id, next);
     const {values, cleared} = f.step === 'hole' ? withoutHidden(set, 'hole') : {values: set, cleared: []};
-    return {...s, values, message: info(`${f.label}: ${next}${cleared.length ? `; ${cleared.join(', ')} cleared` : ''}`)};
+    return {...s, values, message: info(`${f.label}: ${next ?? f.empty ?? 'not given'}${cleared.length ? `; ${cleared.join(', ')} cleared` : ''}`)};
   }
   if (f.kind === 'bool') {
     return {...s, values: setValue(s.values, f.id, !value), message: info(`${f.label}: ${value ? 'no' : 'yes'}`)};

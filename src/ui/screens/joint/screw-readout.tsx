@@ -45,7 +45,9 @@ export function ScrewReadout({result: r, units, width, height, problem}: Props) 
     row('', allow ? `allowed ${q(allow.min, 'stress')} to ${q(allow.max, 'stress')}` : 'allowed: give a sliding speed'),
     row('Stripping', `nut ${q(r.nut.stripping.nutForce, 'force')}, screw ${q(r.nut.stripping.screwForce, 'force')}`),
     row('', `margin ${n(r.nut.stripping.margin)} (${r.nut.stripping.weaker} weaker)`),
-    row(' margin', `${marginGauge(r.nut.stripping.margin, 1, Math.max(8, width - 25), t)} ${t.sym.mark} 1 = even`),
+    r.backlash
+      ? row('Backlash', `nut wear ${q(r.backlash.axialWear, 'length')}; ${r.backlash.replaceBy === null ? 'no replace-by' : `replace at ${q(r.backlash.replaceBy, 'length')}${r.backlash.replaceNow ? ' NOW' : ''}`}`, r.backlash.replaceNow ? t.tone('watch') : undefined)
+      : row(' margin', `${marginGauge(r.nut.stripping.margin, 1, Math.max(8, width - 25), t)} ${t.sym.mark} 1 = even`),
     row('Buckling', b.checked && b.criticalLoad !== null ? `${q(b.criticalLoad, 'force')} ${b.method}, margin ${b.margin === null ? '-' : n(b.margin)}` : r.input.loadDirection === 'tension' ? 'not checked: the screw is in tension' : 'not checked: give the free length'),
   ];
   return <Lines lines={lines} width={width} height={height} />;

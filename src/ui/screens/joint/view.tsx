@@ -40,6 +40,14 @@ export function sortedFlags(flags: readonly Flag[]): Flag[] {
   return [...flags].sort((a, b) => LEVEL_ORDER[a.level] - LEVEL_ORDER[b.level]);
 }
 
+/** The "<- -> steps" hint when it fits whole beside the tabs (and the power-screw label). */
+function stepHint(state: WorkbenchState, width: number, t: Theme): string {
+  const hint = `  ${t.ascii ? '<- ->' : '← →'} steps`;
+  const tabs = stepsFor(state.mode).reduce((n, s, i) => n + ` ${i + 1} ${s.title} `.length, 0);
+  const free = width - tabs - (state.mode === 'screw' ? 24 : 0) - 1;
+  return hint.length <= free ? hint : '';
+}
+
 function StepTabs({state, width}: {state: WorkbenchState; width: number}) {
   const t = useTheme();
   return (
@@ -49,7 +57,7 @@ function StepTabs({state, width}: {state: WorkbenchState; width: number}) {
           {` ${i + 1} ${s.title} `}
         </Text>
       ))}
-      <Text color={t.tone('dim')}>{fit(`  ${t.ascii ? '<- ->' : '← →'} steps`, Math.max(0, width - 62), '')}</Text>
+      <Text color={t.tone('dim')}>{stepHint(state, width, t)}</Text>
       {state.mode === 'screw' ? <Text bold>{'  POWER SCREW (m: joint)'}</Text> : null}
     </Box>
   );
