@@ -137,6 +137,8 @@ export function resolveHoleInput(draft: Partial<RepairInputDraft>, ctx: ResolveC
 export function resolveScrewInput(draft: Partial<ScrewInputDraft>, ctx: ResolveContext = {}): Resolved<ScrewInput> {
   const units = ctx.units ?? 'si';
   const ascii = ctx.ascii ?? true;
+  // A known torque that solves for the load replaces the load: none need be given (checkScrew sets it).
+  if (draft.torque !== undefined && (draft.torqueSolves ?? 'load') === 'load' && draft.load === undefined) draft = {...draft, load: 0};
   const errors = missing('screw', {joint: {}, hole: {}, screw: draft}, draft, units, ascii);
   if (errors.length > 0) return {errors};
   const parsed = SCHEMAS.screw.safeParse(draft);
