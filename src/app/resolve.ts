@@ -84,7 +84,7 @@ function nutEngagement(d: Partial<JointInputDraft>, units: UnitSystem): number |
   if (typeof d.thread !== 'string' || d.thread.trim() === '') return undefined;
   try {
     const g = resolveGeometry(d.thread);
-    const dims = nutDimensions(g.nominal);
+    const dims = nutDimensions(g.nominal, d.nutStyle ?? 'hex');
     if (dims) return dims.heightMin;
     return fieldError('joint', 'nutHeight', `is needed (or the engaged length): no tabulated nut height for ${sizeWords(g)}`, 'needed', units);
   } catch (e) {
