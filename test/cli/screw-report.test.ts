@@ -141,3 +141,13 @@ describe('screw flags in the display units (issue 14 item 13)', () => {
     expect(flags).toMatch(/lbf|ksi/);
   });
 });
+
+describe('screw reports with a known torque', () => {
+  it('text and Markdown say what the torque solved', async () => {
+    const text = await run(['--thread', 'Tr24x5', '--nut-length', '40mm', '--torque', '12Nm']);
+    expect(text.out).toMatch(/Torque given\s+12\.0 N·m raises [\d.]+ kN \(load solved at thread friction 0\.150\)/);
+    const md = await run(['--thread', 'Tr24x5', '--nut-length', '40mm', '--load', '5kN', '--torque', '15Nm', '--torque-solves', 'friction', '--format', 'markdown']);
+    expect(md.out).toMatch(/\| Known torque \| 15\.0 N·m, solves the thread friction \|/);
+    expect(md.out).toMatch(/15\.0 N·m at 5\.00 kN implies thread friction [\d.]+/);
+  });
+});
