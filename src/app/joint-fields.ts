@@ -63,7 +63,7 @@ export const JOINT_ROWS: readonly JointRow[] = [
     help: 'Width across flats of the nut; empty = standard for the size.'},
   {group: 'joint', key: 'duty', label: 'Duty', step: 'parts', kind: 'choice', choices: DUTY_IDS, optional: false, section: 'loads',
     cli: {name: '--duty', arg: 'D', help: `${DUTY_IDS.join(', ')} (default general): any but general raises WATCH margins to FAIL and asks for a qualified person's sign-off; set the design factor of the governing standard as --margin`},
-    help: 'lifting, pressure, critical: stricter flags, qualified sign-off. Enter switches.'},
+    help: 'Stricter flags and sign-off unless general. Enter switches.'},
   {group: 'joint', key: 'engagement', label: 'Engaged length', empty: 'nut: its height', step: 'engagement', kind: 'quantity', dimension: 'length', optional: false, example: '15mm', section: 'joint',
     cli: {name: '--engage', arg: 'LEN', help: 'engaged length from the loaded face (default for a nut: its height)'},
     help: 'From the loaded face, chamfer included; empty for a nut = its height. 12mm, 0.5in.'},

@@ -97,7 +97,7 @@ export const SCREW_ROWS: readonly ScrewRow[] = [
     help: 'load = the load the torque raises; friction = the thread friction it implies. Enter switches.'},
   {group: 'screw', key: 'duty', label: 'Duty', step: 'screw-nut', kind: 'choice', choices: DUTY_IDS, optional: false,
     cli: {name: '--duty', arg: 'D', help: `${DUTY_IDS.join(', ')} (default general): any but general raises WATCH margins to FAIL (lifting: "self-locking only just" too) and asks for a qualified person's sign-off`},
-    help: 'lifting, pressure, critical: stricter flags, qualified sign-off. Enter switches.'},
+    help: 'Stricter flags and sign-off unless general. Enter switches.'},
   {group: 'screw', key: 'allowablePressure', label: 'Allowable pressure', kind: 'quantity', dimension: 'stress', optional: true,
     cli: {name: '--allowable-pressure', arg: 'P', help: 'safe nut flank pressure, 0.1 to 500 MPa (overrides)'},
     help: 'Safe nut flank pressure; empty = the table value.'},
