@@ -5,6 +5,7 @@
  * schema (src/app/field-table.ts). To add a joint input: add its key to
  * JointInputSchema and one row here, in the order the workbench shows it.
  */
+import {DUTY_IDS} from '../core/duty.js';
 import type {FieldRow, FormValues} from './fields-types.js';
 import {MEASURED_ROWS} from './measured-fields.js';
 
@@ -53,12 +54,18 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'nutClass', label: 'Nut class', empty: 'from bolt grade', step: 'parts', kind: 'pick', pick: 'nutClass', optional: true, isVisible: isNut, section: 'joint',
     cli: {name: '--nut', arg: 'CLASS', help: 'a nut instead of a tapped hole (ISO 898-2 "8", "10"; SAE-5, ...)'},
     help: 'Property class of the nut; Enter opens the list with sources.'},
+  {group: 'joint', key: 'nutStyle', label: 'Inch nut style', empty: 'hex', step: 'parts', kind: 'choice', choices: ['hex', 'heavy-hex'], optional: true, isVisible: isNut, section: 'joint',
+    cli: {name: '--nut-style', arg: 'S', help: 'inch nut: hex (default) or heavy-hex, for the ASME B18.2.2 height and flats (metric nuts: ISO 4032)'},
+    help: 'Inch nut: hex or heavy hex (ASME B18.2.2 dimensions); metric nuts use ISO 4032. Enter switches.'},
   {group: 'joint', key: 'nutHeight', label: 'Nut height m', empty: 'standard nut', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut, section: 'joint',
     cli: {name: '--nut-height', arg: 'LEN', help: 'nut height m (default ISO 4032)'},
     help: 'Height of the nut; empty = standard height for the size.'},
   {group: 'joint', key: 'nutFlats', label: 'Nut flats s', empty: 'standard nut', step: 'parts', kind: 'quantity', dimension: 'length', optional: true, isVisible: isNut, section: 'joint',
     cli: {name: '--nut-flats', arg: 'LEN', help: 'nut width across flats s (default ISO 4032)'},
     help: 'Width across flats of the nut; empty = standard for the size.'},
+  {group: 'joint', key: 'duty', label: 'Duty', step: 'parts', kind: 'choice', choices: DUTY_IDS, optional: false, section: 'loads',
+    cli: {name: '--duty', arg: 'D', help: `${DUTY_IDS.join(', ')} (default general): any but general raises WATCH margins to FAIL and asks for a qualified person's sign-off; set the design factor of the governing standard as --margin`},
+    help: 'Stricter flags and sign-off unless general. Enter switches.'},
   {group: 'joint', key: 'engagement', label: 'Engaged length', empty: 'nut: its height', step: 'engagement', kind: 'quantity', dimension: 'length', optional: false, example: '15mm', section: 'joint',
     cli: {name: '--engage', arg: 'LEN', help: 'engaged length from the loaded face (default for a nut: its height)'},
     help: 'From the loaded face, chamfer included; empty for a nut = its height. 12mm, 0.5in.'},
@@ -95,8 +102,8 @@ export const JOINT_ROWS: readonly JointRow[] = [
     cli: {name: '--bearing-diameter', arg: 'LEN', help: 'effective bearing diameter under the head (default (dw,min + hole)/2)'},
     help: 'Effective diameter under the head; empty = hexagon head, medium clearance hole.'},
   {group: 'joint', key: 'scatter', label: 'Method scatter', empty: 'from settings', step: 'tightening', kind: 'ratio', optional: true, section: 'tightening',
-    cli: {name: '--scatter', arg: 'A', help: 'tightening scatter alphaA beyond the friction range (default: tapwright settings, else 1)'},
-    help: 'Tightening-method scatter Fmax/Fmin beyond friction; 1 = friction range only.'},
+    cli: {name: '--scatter', arg: 'A', help: 'tightening factor alphaA = FM,max/FM,min in total, friction scatter included (VDI 2230); only the part beyond the friction range\'s own spread is added (default: tapwright settings, else 1)'},
+    help: 'alphaA = FM,max/FM,min in total, friction included; only the part beyond the friction range is added.'},
   {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'tightening', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
     cli: {name: '--service-load', arg: 'F', help: 'external axial load on the bolt, taken in full'},
     help: 'External axial load on the bolt in service; empty = none.'},

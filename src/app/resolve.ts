@@ -91,7 +91,7 @@ function nutEngagement(d: Partial<JointInputDraft>, units: UnitSystem): number |
   if (typeof d.thread !== 'string' || d.thread.trim() === '') return undefined;
   try {
     const g = resolveGeometry(d.thread);
-    const dims = nutDimensions(g.nominal);
+    const dims = nutDimensions(g.nominal, d.nutStyle ?? 'hex');
     if (dims) return dims.heightMin;
     return fieldError('joint', 'nutHeight', `is needed (or the engaged length): no tabulated nut height for ${sizeWords(g)}`, 'needed', units);
   } catch (e) {
@@ -144,6 +144,8 @@ export function resolveHoleInput(draft: Partial<RepairInputDraft>, ctx: ResolveC
 export function resolveScrewInput(draft: Partial<ScrewInputDraft>, ctx: ResolveContext = {}): Resolved<ScrewInput> {
   const units = ctx.units ?? 'si';
   const ascii = ctx.ascii ?? true;
+  // A known torque that solves for the load replaces the load: none need be given (checkScrew sets it).
+  if (draft.torque !== undefined && (draft.torqueSolves ?? 'load') === 'load' && draft.load === undefined) draft = {...draft, load: 0};
   const errors = missing('screw', {joint: {}, hole: {}, screw: draft}, draft, units, ascii);
   if (errors.length > 0) return {errors};
   const parsed = SCHEMAS.screw.safeParse(draft);

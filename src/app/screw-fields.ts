@@ -12,6 +12,7 @@ import {
   THREAD_FRICTION,
   THREAD_EXAMPLES,
 } from '../core/screw/index.js';
+import {DUTY_IDS} from '../core/duty.js';
 import {UsageError} from './errors.js';
 import type {FieldRow, OptionReader} from './fields-types.js';
 import {BACKLASH_ROWS} from './backlash-fields.js';
@@ -70,6 +71,7 @@ export const SCREW_ROWS: readonly ScrewRow[] = [
     cli: {name: '--ends', arg: 'E', help: `${END_CONDITION_IDS.join(', ')} (default pinned-pinned)`},
     help: 'How the screw ends are held, for buckling. Enter switches.'},
   {group: 'screw', key: 'load', label: 'Axial load', step: 'screw-nut', kind: 'quantity', dimension: 'force', optional: false, example: '6.4kN',
+    isVisible: v => v.screw?.torque === undefined || v.screw.torqueSolves === 'friction',
     cli: {name: '--load', arg: 'F', help: 'axial load, 0 to 100 MN (6.4kN, 1500lbf)', rangeText: '0 to 100 MN'},
     help: 'Load the screw lifts or pushes; 20kN or 4500lbf accepted.'},
   {group: 'screw', key: 'loadDirection', label: 'Screw is in', step: 'screw-nut', kind: 'choice', choices: ['compression', 'tension'], optional: false,
@@ -88,6 +90,16 @@ export const SCREW_ROWS: readonly ScrewRow[] = [
   {group: 'screw', key: 'speed', label: 'Sliding speed', step: 'screw-nut', kind: 'quantity', dimension: 'speed', optional: true, empty: 'not given',
     cli: {name: '--speed', arg: 'V', help: 'sliding speed at the thread, 0 to 10 m/s (0 = by hand)'},
     help: 'Sliding speed at the thread, for the allowable bearing pressure; 3m/min accepted.'},
+  {group: 'screw', key: 'torque', label: 'Known torque', step: 'screw-nut', kind: 'quantity', dimension: 'torque', optional: true, empty: 'not given',
+    cli: {name: '--torque', arg: 'T', help: 'known raising torque at the screw, thread and collar (a motor or handwheel torque, 12Nm, 9ft-lbf); solves for what --torque-solves says'},
+    help: 'A known raising torque (motor, handwheel); empty = computed from the load.'},
+  {group: 'screw', key: 'torqueSolves', label: 'Torque solves', step: 'screw-nut', kind: 'choice', choices: ['load', 'friction'], optional: false,
+    isVisible: v => v.screw?.torque !== undefined,
+    cli: {name: '--torque-solves', arg: 'W', help: 'with --torque: load (default; the load it raises, replacing --load) or friction (the thread friction it implies at --load)'},
+    help: 'load = the load the torque raises; friction = the thread friction it implies. Enter switches.'},
+  {group: 'screw', key: 'duty', label: 'Duty', step: 'screw-nut', kind: 'choice', choices: DUTY_IDS, optional: false,
+    cli: {name: '--duty', arg: 'D', help: `${DUTY_IDS.join(', ')} (default general): any but general raises WATCH margins to FAIL (lifting: "self-locking only just" too) and asks for a qualified person's sign-off`},
+    help: 'Stricter flags and sign-off unless general. Enter switches.'},
   {group: 'screw', key: 'allowablePressure', label: 'Allowable pressure', kind: 'quantity', dimension: 'stress', optional: true,
     cli: {name: '--allowable-pressure', arg: 'P', help: 'safe nut flank pressure, 0.1 to 500 MPa (overrides)'},
     help: 'Safe nut flank pressure; empty = the table value.'},

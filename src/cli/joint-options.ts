@@ -40,7 +40,7 @@ export function jointDraftFromOptions(values: ParsedOptions['values'], units: Un
   if (tight[0]) d.tightening = tight[0].slice(2);
 
   const tappedOpts = ['--parent', '--parent-rm', '--parent-shear', '--hole-depth'].filter(has);
-  const nutOpts = ['--nut', '--nut-height', '--nut-flats'].filter(has);
+  const nutOpts = ['--nut', '--nut-style', '--nut-height', '--nut-flats'].filter(has);
   if (tappedOpts.length && nutOpts.length) {
     throw new UsageError(`${nutOpts[0]} is for a nut and ${tappedOpts[0]} for a tapped hole; give one kind of internal thread`, nutOpts[0]);
   }
@@ -56,7 +56,7 @@ export function jointDraftFromOptions(values: ParsedOptions['values'], units: Un
     for (const k of ['parent', 'parentRm', 'parentShear', 'holeDepth', 'parentData']) delete d[k];
   } else if (tappedOpts.length) {
     d.internal = 'tapped';
-    for (const k of ['nutClass', 'nutHeight', 'nutFlats']) delete d[k];
+    for (const k of ['nutClass', 'nutStyle', 'nutHeight', 'nutFlats']) delete d[k];
   }
   return d as Partial<JointInputDraft>;
 }

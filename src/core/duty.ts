@@ -43,6 +43,7 @@ export const DUTY_NOTES: Record<Duty, string> = {
 export const RAISED_ON_DUTY: ReadonlySet<string> = new Set([
   // threaded joint
   'strips-before-break',
+  'engagement-below-required',
   'preload-over-yield',
   'blind-hole-too-shallow',
   'outside-model-range',

@@ -24,7 +24,7 @@ function inputRows(input: ScrewInput, units: UnitSystem): string[][] {
   const rows: string[][] = [
     ['Thread', input.thread],
     ['Starts', String(input.starts)],
-    ['Axial load', `${q(input.load, 'force')}, screw in ${input.loadDirection}`],
+    ['Axial load', input.torque !== undefined && input.torqueSolves === 'load' ? `solved from the known torque, screw in ${input.loadDirection}` : `${q(input.load, 'force')}, screw in ${input.loadDirection}`],
     ['Nut', `${input.nutMaterial}, ${q(input.nutLength, 'length')} long, wear ${q(input.nutWear, 'length')}`],
     ['Screw material', input.screwMaterial ?? 'steel'],
     ['Thread friction', mu],
@@ -32,6 +32,7 @@ function inputRows(input: ScrewInput, units: UnitSystem): string[][] {
     ['Free length', input.length > 0 ? `${q(input.length, 'length')}, ends ${input.ends}` : 'not given: no column check'],
   ];
   if (input.backlash !== undefined) rows.push(['Backlash (measured, new)', `${q(input.backlash, 'length')}, ${input.backlashNew !== undefined ? q(input.backlashNew, 'length') : 'not given'}`]);
+  if (input.torque !== undefined) rows.push(['Known torque', `${formatQuantity(input.torque, 'torque', units)}, solves the ${input.torqueSolves === 'load' ? 'load' : 'thread friction'}`]);
   if (input.screwYield !== undefined) rows.push(['Screw yield (given)', q(input.screwYield, 'stress')]);
   if (input.speed !== undefined) rows.push(['Sliding speed', q(input.speed, 'speed')]);
   if (input.allowablePressure !== undefined) rows.push(['Allowable flank pressure (given)', q(input.allowablePressure, 'stress')]);

@@ -34,6 +34,12 @@ export function screwRows(r: ScrewResult, units: UnitSystem): Row[] {
   const muText = mu.min === mu.max ? formatNumber(mu.min, 3) : `${formatNumber(mu.min, 3)} to ${formatNumber(mu.max, 3)}`;
   const collar = r.friction.collar > 0 ? `collar ${formatNumber(r.friction.collar, 3)} on ${q(r.friction.collarDiameter, 'length')}` : 'no collar friction';
   field('Friction', `thread ${muText}, ${collar}`);
+  const ts = r.torqueSolve;
+  if (ts) {
+    field('Torque given', ts.solves === 'load'
+      ? `${q(ts.torque, 'torque')} raises ${q(ts.load, 'force')} (load solved at thread friction ${formatNumber(ts.friction, 3)})`
+      : `${q(ts.torque, 'torque')} at ${q(ts.load, 'force')} implies thread friction ${formatNumber(ts.friction, 3)}`);
+  }
   field('Torque', `raise ${q(r.torque.raise, 'torque')} (thread ${q(r.torque.raiseThread, 'torque')} + collar ${q(r.torque.collar, 'torque')})`);
   field('', `lower ${q(r.torque.lower, 'torque')} (thread ${q(r.torque.lowerThread, 'torque')} + collar ${q(r.torque.collar, 'torque')})`);
   field('Efficiency', `${formatNumber(r.efficiency * 100, 3)} % raising with collar; thread alone ${formatNumber(r.threadEfficiency * 100, 3)} %`);

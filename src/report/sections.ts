@@ -267,7 +267,11 @@ export function resultGroups(result: CheckResult, input: JointInput, f: Fmt): Gr
 
 /** The flags with their messages in the report's units (US: lbf, in); the JSON keeps SI. */
 export function displayFlags(result: CheckResult, input: JointInput, f: Fmt): Flag[] {
-  return flagsInUnits(result, input, f.units);
+  const shown = flagsInUnits(result, input, f.units);
+  if (shown === result.flags) return shown;
+  // Flags added to the result by the caller (the hole state) are not rebuilt by the core: keep them, first.
+  const codes = new Set(shown.map(x => x.code));
+  return [...result.flags.filter(x => !codes.has(x.code)), ...shown];
 }
 
 /** The notes with their lengths in the report's units; the JSON keeps SI. */

@@ -13,7 +13,8 @@ import type {ScrewInput} from '../core/screw/input.js';
 import {listBoltGrades, listNutClasses, listParentMaterials} from '../core/materials/index.js';
 import {listDesignations, nearestDesignations} from '../core/threads/index.js';
 import {formatQuantity, type UnitSystem} from '../core/units.js';
-import {formatCheckMarkdown, formatCheckText, planSectionLines, planText, wrapText} from '../report/index.js';
+import {formatCheckMarkdown, formatCheckText, planSectionLines, planText, screwMarkdown, screwText, wrapText} from '../report/index.js';
+import {screwFlagsInUnits} from '../core/screw/flags.js';
 import {defaultSolidTable} from '../store/solid-tables.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import type {UserParentMaterial} from '../core/joint/input.js';
@@ -196,15 +197,21 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     },
     report(format, result, input, meta) {
       const rep = meta.repairs;
+      const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       if (format === 'text') {
         const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [wrapText(rep.chosenNote, '', '  ').join('\n')] : [])] : [];
-        return formatCheckText(result, input, {units: meta.units, extraSections: extra});
+        return formatCheckText(result, input, {units: meta.units, extraSections: extra, presetName: meta.presetName, date: meta.date, ...(notes ? {notes} : {})});
       }
-      const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       const extra = rep
         ? [['## Repair plan', '', ...(rep.chosenNote ? [`**${rep.chosenNote}**`, ''] : []), ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
         : [];
       return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: extra, ...(notes ? {notes} : {})});
+    },
+    screwReport(format, result, input, meta) {
+      const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
+      const m = {presetName: meta.presetName, date: meta.date, duty: input.duty, ...(notes ? {notes} : {})};
+      const flags = screwFlagsInUnits(result, input, meta.units);
+      return format === 'markdown' ? screwMarkdown(result, input, {...m, units: meta.units}, flags) : screwText(result, meta.units, meta.presetName, m, flags);
     },
     writeFile(file, text, overwrite) {
       const full = path.resolve(opts.cwd, file);

@@ -96,6 +96,8 @@ export interface WorkbenchServices {
   draft: DraftPort;
   /** The work-order report as text or Markdown; undefined while the report module is not in this build. */
   report?: (format: 'text' | 'markdown', result: CheckResult, input: JointInput, meta: ReportMeta) => string;
+  /** The power-screw work-order report as text or Markdown (flags in the display units); undefined: not in this build. */
+  screwReport?: (format: 'text' | 'markdown', result: ScrewResult, input: ScrewInput, meta: ReportMeta) => string;
   /** Write a file; throws when it exists and overwrite is false. */
   writeFile(path: string, text: string, overwrite: boolean): void;
   /** The user's settings the joint depends on (the default scatter); absent: none. */

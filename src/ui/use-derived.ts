@@ -6,6 +6,7 @@
  */
 import {useMemo} from 'react';
 import {holeStateFlags} from '../core/joint/hole-flags.js';
+import {screwFlagsInUnits} from '../core/screw/flags.js';
 import type {WorkbenchServices} from './services.js';
 import {evaluate, evaluateRepairs, evaluateScrew} from './state/evaluate.js';
 import {shownValues, type WorkbenchState} from './state/workbench.js';
@@ -25,7 +26,8 @@ export function useDerived(state: WorkbenchState, svc: WorkbenchServices): Deriv
   const ev = useMemo(() => labelled(evaluate(shown, svc, units, ascii)), [shown, svc, units, ascii]);
   const sev = useMemo(() => (mode === 'screw' ? labelled(evaluateScrew(shown, svc, units, ascii)) : undefined), [shown, svc, units, ascii, mode]);
   const flags = useMemo(
-    () => (mode === 'screw' ? (sev?.result?.flags ?? []) : [...holeStateFlags(shown.hole, units, ascii), ...(ev.result?.flags ?? [])]),
+    // Power-screw flags in the display units (the core writes them in SI).
+    () => (mode === 'screw' ? (sev?.result && sev.input ? screwFlagsInUnits(sev.result, sev.input, units) : []) : [...holeStateFlags(shown.hole, units, ascii), ...(ev.result?.flags ?? [])]),
     [mode, sev, ev, shown.hole, units, ascii],
   );
   const withRepairs = (mode === 'joint' && screen === 'repairs') || screen === 'help';

@@ -134,7 +134,7 @@ describe('tapwright screw exit codes and bad input', () => {
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--screw-yield', '10'], /--screw-yield.*50 to 2500 MPa/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--allowable-pressure', '0'], /--allowable-pressure.*0\.1 to 500 MPa/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--units', 'imperial'], /--units.*si, us/],
-    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--format', 'xml'], /--format.*text, json/],
+    [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--format', 'xml'], /--format.*text, markdown, json/],
     [['--thread', 'Tr24x5', '--load', '5kN', '--nut-length', '40', '--bogus'], /unknown option --bogus/],
   ];
   for (const [args, msg] of bad) {

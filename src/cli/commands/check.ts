@@ -12,6 +12,8 @@ import type {JointInputDraft} from '../../core/joint/input.js';
 import {checkJoint} from '../../core/joint/index.js';
 import {formatCheckMarkdown, formatCheckText, type WorkOrderNotes} from '../../report/index.js';
 import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
+import {holeReport, type ChosenRepair} from './check-hole.js';
+import type {RepairInputDraft} from '../../core/repair/input.js';
 import {JOINT_OPTIONS, UNITS_HELP, jointFromOptions, jointHelp, jointUsageError} from '../joint-options.js';
 
 const OPTIONS: OptionSpec = {...JOINT_OPTIONS, format: {type: 'string'}, json: {type: 'boolean'}, ascii: {type: 'boolean'}, preset: {type: 'string'}, ...NOTE_OPTION_SPEC};
@@ -28,7 +30,7 @@ Output
 ${UNITS_HELP.join('\n')}
   --format text|markdown|json   (--json is short for --format json)
   --ascii              plain ASCII text
-Work order, for --format markdown (default: the notes of the --preset)
+Work order, for text and markdown (default: the notes of the --preset)
   --asset TEXT         asset tag of the machine
   --location TEXT      where it is
   --work-order TEXT    work-order number
@@ -45,11 +47,11 @@ stripping at the least-material limits or the measured diameters; Alexander
 ${CAUTION_LINES.join('\n')}
 `;
 
-async function loadPreset(name: string, io: CliIo): Promise<{joint: JointInputDraft; notes: WorkOrderNotes}> {
+async function loadPreset(name: string, io: CliIo): Promise<{joint: JointInputDraft; notes: WorkOrderNotes; repair?: Partial<RepairInputDraft>; chosen?: ChosenRepair}> {
   const {resolvePreset} = await import('../../store/resolve.js');
   const p = resolvePreset(name, io.env, 'joint', m => io.err(`tapwright: ${m}\n`));
   if (!p.joint) throw new UsageError(`--preset "${name}" holds no joint inputs`, '--preset');
-  return {joint: p.joint, notes: p.notes};
+  return {joint: p.joint, notes: p.notes, ...(p.repair ? {repair: p.repair} : {}), ...(p.chosenRepair ? {chosen: p.chosenRepair} : {})};
 }
 
 export const command: Command = {
@@ -60,12 +62,12 @@ export const command: Command = {
     const {values} = parseOptions(args, OPTIONS, false);
     const format = formatOption(values, ['text', 'markdown', 'json'] as const, 'text');
     const noteOptions = noteOptionsGiven(values);
-    if (noteOptions.length > 0 && format !== 'markdown') {
-      throw new UsageError(`${noteOptions[0]} fills the work-order report; give --format markdown with it`, noteOptions[0]);
+    if (noteOptions.length > 0 && format === 'json') {
+      throw new UsageError(`${noteOptions[0]} fills the work-order report; give --format text or markdown with it`, noteOptions[0]);
     }
     const presetName = str(values, 'preset');
     const preset = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
-    const notes = format === 'markdown' ? await workOrderNotes(values, preset?.notes) : {};
+    const notes = format === 'json' ? {} : await workOrderNotes(values, preset?.notes);
     const {input, units} = await jointFromOptions(values, io, preset?.joint);
     let result;
     try {
@@ -73,12 +75,17 @@ export const command: Command = {
     } catch (e) {
       throw jointUsageError(e, units);
     }
+    // The preset's hole state: the core's hole-state flag first (as the workbench shows it), the plan for a stripped hole.
+    const ascii = values.ascii === true;
+    const hole = await holeReport(preset?.repair, preset?.chosen, input, format === 'json' ? 'si' : units, io, ascii);
+    if (hole) result = {...result, flags: [...hole.flags, ...result.flags]};
+    const meta = {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {}), ...(hole ? {hole: hole.hole} : {})};
     if (format === 'json') {
-      io.out(`${JSON.stringify({...result, input, units: 'si'}, null, 2)}\n`);
+      io.out(`${JSON.stringify({...result, input, units: 'si', cautions: CAUTION_LINES}, null, 2)}\n`);
     } else if (format === 'markdown') {
-      io.out(formatCheckMarkdown(result, input, {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {})}));
+      io.out(formatCheckMarkdown(result, input, {...meta, ...(hole?.markdown ? {extraSections: [hole.markdown]} : {})}));
     } else {
-      io.out(formatCheckText(result, input, {units, ascii: values.ascii === true}));
+      io.out(formatCheckText(result, input, {...meta, ascii, ...(hole?.text ? {extraSections: [hole.text]} : {})}));
     }
     return result.flags.some(f => f.level === 'fail') ? EXIT.fail : EXIT.ok;
   },

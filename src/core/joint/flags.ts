@@ -114,6 +114,13 @@ export function shortEngagement(c: FlagContext): Flag | undefined {
   };
 }
 
+/**
+ * Bolt-breaks-first (forces in N, lengths in mm). `strips-before-break`: a thread strips before
+ * the bolt breaks, stripping force / bolt break force below the required margin (FAIL), or only at
+ * the bolt's upper strength with a matching nut (WATCH; VDI 2230 Part 1 uses Rm,max, from memory).
+ * `engagement-below-required`: the forces still put the bolt first, but less full thread is engaged
+ * than Alexander/VDI 2230 or FED-STD-H28/2B Formula 1 asks for (WATCH; INFO for a matching nut).
+ */
 export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   const ratio = c.weakerForce / c.boltBreakForce;
   const ratioMin = c.boltBreakForceMin !== undefined ? c.weakerForce / c.boltBreakForceMin : ratio;
@@ -135,7 +142,7 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   }
   if (c.effectiveEngagement < c.requiredAlexander) {
     return {
-      code: 'strips-before-break',
+      code: 'engagement-below-required',
       level: c.matchingNut ? 'info' : 'watch',
       message: `Thread bending and nut dilation (Alexander/VDI 2230) call for ${len(c, c.requiredAlexander)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged, so a thread may strip before the bolt breaks.${c.matchingNut ? ` ${MATCHING_NUT}` : ''}`,
       summary: `Alexander/VDI 2230 wants ${len(c, c.requiredAlexander)} full thread; ${len(c, c.effectiveEngagement)} engaged`,
@@ -145,7 +152,7 @@ export function stripsBeforeBreak(c: FlagContext): Flag | undefined {
   // half the tensile strength), so it can ask for more than the force ratio does.
   if (c.effectiveEngagement < c.requiredFedStd) {
     return {
-      code: 'strips-before-break',
+      code: 'engagement-below-required',
       level: c.matchingNut ? 'info' : 'watch',
       message: `FED-STD-H28 Formula 1 calls for ${len(c, c.requiredFedStd)} of full thread; only ${len(c, c.effectiveEngagement)} is engaged. The stripping forces still put the bolt first (ratio ${ratio.toFixed(2)}), but only because of the shear strengths assumed: confirm them or engage more thread.${c.matchingNut ? ` ${MATCHING_NUT}` : ''}`,
       summary: `FED-STD-H28 wants ${len(c, c.requiredFedStd)} full thread; ${len(c, c.effectiveEngagement)} engaged`,

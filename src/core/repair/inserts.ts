@@ -29,7 +29,7 @@ function receivingDesignations(t: ThreadBasics, major: number): string[] {
 }
 
 /** Flags of the inner pair that speak of its own stripping only; the combined margins replace them. */
-const INNER_ONLY = new Set(['strips-at-preload', 'strips-before-break', 'engagement-beyond-useful']);
+const INNER_ONLY = new Set(['strips-at-preload', 'strips-before-break', 'engagement-below-required', 'engagement-beyond-useful']);
 
 /** Combine the two checks of an insert into margins and flags; `outer` gives the parent's stripping force. */
 function combine(o: RepairOption, inner: CheckResult, outer: CheckResult, names: {insert: string; parent: string}): void {

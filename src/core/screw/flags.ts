@@ -5,6 +5,9 @@
  */
 import type {Flag} from '../types.js';
 import type {ScrewResult} from './result.js';
+import type {ScrewInput} from './input.js';
+import {formatNumber, formatQuantity, toDisplay, type UnitSystem} from '../units.js';
+import {applyDuty} from '../duty.js';
 import {LONG_ENGAGEMENT_THREADS, SCREW_FIRST_THREAD_NOTE} from '../thread-stress.js';
 import {PUBLISHED_THREAD_FRICTION} from './torque-solve.js';
 
@@ -29,11 +32,37 @@ export interface FlagContext {
   collarIncomplete: boolean;
   /** False when the size/pitch pair is not in the listed series (square threads have none). */
   pitchListed: boolean;
+  /** Units of the numbers in the messages (default SI: MPa, kN, N·m; US: ksi, lbf, ft·lbf). */
+  units?: UnitSystem;
+}
+
+/**
+ * The numbers of the flag messages in a unit system: SI keeps the fixed decimals the
+ * messages have always had (12.3 MPa, 6.4 kN, 9.77 N·m); US gives ksi, lbf and ft·lbf to
+ * three significant figures (conversions of src/core/units.ts, exact by definition).
+ */
+export function flagNumbers(units: UnitSystem = 'si') {
+  const us = units === 'us';
+  const q = (x: number, d: 'stress' | 'force' | 'torque') => formatQuantity(x, d, 'us');
+  return {
+    /** Stress, MPa in: "12.3 MPa" or "1.78 ksi". */
+    stress: (x: number) => (us ? q(x, 'stress') : `${f1(x)} MPa`),
+    /** Stress without decimals in SI: "312 MPa" or "45.3 ksi". */
+    stress0: (x: number) => (us ? q(x, 'stress') : `${f0(x)} MPa`),
+    /** A stress range, MPa in: "7.0 to 10.0 MPa" or "1.02 to 1.45 ksi". */
+    stressRange: (a: number, b: number) =>
+      us ? `${formatNumber(toDisplay(a, 'stress', 'us'), 3)} to ${q(b, 'stress')}` : `${f1(a)} to ${f1(b)} MPa`,
+    /** Force, N in: "6.4 kN" or "1440 lbf". */
+    force: (x: number) => (us ? q(x, 'force') : `${f1(x / 1000)} kN`),
+    /** Torque, N·m in: "9.77 N·m" or "7.21 ft·lbf". */
+    torque: (x: number) => (us ? q(x, 'torque') : `${f2(x)} N·m`),
+  };
 }
 
 /** All flags for a computed result. */
 export function screwFlags(c: FlagContext): Flag[] {
   const {r} = c;
+  const n = flagNumbers(c.units);
   const out: Flag[] = [];
   if (c.load <= 0) {
     out.push({code: 'no-load', level: 'info', message: 'load is 0: torques and stresses are zero; give --load', summary: 'Load is 0: torques and stresses are zero; give a load'});
@@ -45,14 +74,14 @@ export function screwFlags(c: FlagContext): Flag[] {
     if (r.torque.lower <= 0) {
       out.push({
         code: 'back-drives', level: 'fail',
-        message: `the load runs the screw down by itself: lowering torque ${f2(r.torque.lower)} N·m with collar; f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}. Needs a brake or a self-locking thread`,
-        summary: `Back-drives: the load runs the screw down (lowering ${f2(r.torque.lower)} N·m)`,
+        message: `the load runs the screw down by itself: lowering torque ${n.torque(r.torque.lower)} with collar; f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}. Needs a brake or a self-locking thread`,
+        summary: `Back-drives: the load runs the screw down (lowering ${n.torque(r.torque.lower)})`,
       });
     } else {
       out.push({
         code: 'back-drives', level: 'watch',
-        message: `thread alone back-drives (f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}); only collar friction holds the load (lowering torque ${f2(r.torque.lower)} N·m). Vibration or grease can let it run down`,
-        summary: `Thread alone back-drives; collar holds it (lowering ${f2(r.torque.lower)} N·m)`,
+        message: `thread alone back-drives (f sec(alpha) ${f3(fsec)} < tan(lead angle) ${f3(tanL)}); only collar friction holds the load (lowering torque ${n.torque(r.torque.lower)}). Vibration or grease can let it run down`,
+        summary: `Thread alone back-drives; collar holds it (lowering ${n.torque(r.torque.lower)})`,
       });
     }
   }
@@ -66,22 +95,22 @@ export function screwFlags(c: FlagContext): Flag[] {
   const p = r.nut.bearingPressure;
   const allow = r.nut.allowablePressure;
   if (c.allowableOverride !== undefined) {
-    if (p > c.allowableOverride) out.push({code: 'bearing-pressure-high', level: 'fail', message: `nut flank pressure ${f1(p)} MPa is above the given allowable ${f1(c.allowableOverride)} MPa: fast wear`, summary: `Nut flank pressure ${f1(p)} MPa above the given ${f1(c.allowableOverride)} MPa`});
+    if (p > c.allowableOverride) out.push({code: 'bearing-pressure-high', level: 'fail', message: `nut flank pressure ${n.stress(p)} is above the given allowable ${n.stress(c.allowableOverride)}: fast wear`, summary: `Nut flank pressure ${n.stress(p)} above the given ${n.stress(c.allowableOverride)}`});
   } else if (allow) {
     if (p > allow.max) {
-      out.push({code: 'bearing-pressure-high', level: 'fail', message: `nut flank pressure ${f1(p)} MPa is above the safe ${f1(allow.min)} to ${f1(allow.max)} MPa (${allow.condition}): fast wear, galling. Longer nut or larger screw`, summary: `Nut flank pressure ${f1(p)} MPa above the safe ${f1(allow.min)} to ${f1(allow.max)} MPa`});
+      out.push({code: 'bearing-pressure-high', level: 'fail', message: `nut flank pressure ${n.stress(p)} is above the safe ${n.stressRange(allow.min, allow.max)} (${allow.condition}): fast wear, galling. Longer nut or larger screw`, summary: `Nut flank pressure ${n.stress(p)} above the safe ${n.stressRange(allow.min, allow.max)}`});
     } else if (p > allow.min) {
-      out.push({code: 'bearing-pressure-high', level: 'watch', message: `nut flank pressure ${f1(p)} MPa is inside the upper part of the safe ${f1(allow.min)} to ${f1(allow.max)} MPa (${allow.condition})`, summary: `Nut flank pressure ${f1(p)} MPa, high in the safe ${f1(allow.min)} to ${f1(allow.max)} MPa`});
+      out.push({code: 'bearing-pressure-high', level: 'watch', message: `nut flank pressure ${n.stress(p)} is inside the upper part of the safe ${n.stressRange(allow.min, allow.max)} (${allow.condition})`, summary: `Nut flank pressure ${n.stress(p)}, high in the safe ${n.stressRange(allow.min, allow.max)}`});
     }
   } else {
-    out.push({code: 'bearing-allowable-unknown', level: 'info', message: `no tabulated safe flank pressure for a ${r.nut.material} nut at this speed; pressure is ${f1(p)} MPa. Give --allowable-pressure from the nut maker`, summary: `Flank pressure ${f1(p)} MPa; no tabulated safe value for this nut`});
+    out.push({code: 'bearing-allowable-unknown', level: 'info', message: `no tabulated safe flank pressure for a ${r.nut.material} nut at this speed; pressure is ${n.stress(p)}. Give --allowable-pressure from the nut maker`, summary: `Flank pressure ${n.stress(p)}; no tabulated safe value for this nut`});
   }
   const s = r.nut.stripping;
   const weakerForce = Math.min(s.nutForce, s.screwForce);
   if (s.margin < 1) {
-    out.push({code: 'strips', level: 'fail', message: `${s.weaker} threads strip at ${f1(weakerForce / 1000)} kN, below the load ${f1(c.load / 1000)} kN (margin ${f2(s.margin)})`, summary: `${cap(s.weaker)} threads strip at ${f1(weakerForce / 1000)} kN < load ${f1(c.load / 1000)} kN`});
+    out.push({code: 'strips', level: 'fail', message: `${s.weaker} threads strip at ${n.force(weakerForce)}, below the load ${n.force(c.load)} (margin ${f2(s.margin)})`, summary: `${cap(s.weaker)} threads strip at ${n.force(weakerForce)} < load ${n.force(c.load)}`});
   } else if (s.margin < WATCH_MARGIN.stripping) {
-    out.push({code: 'strips', level: 'watch', message: `${s.weaker} threads strip at ${f1(weakerForce / 1000)} kN, only ${f2(s.margin)} times the load`, summary: `${cap(s.weaker)} threads strip at ${f1(weakerForce / 1000)} kN, only ${f2(s.margin)} times the load`});
+    out.push({code: 'strips', level: 'watch', message: `${s.weaker} threads strip at ${n.force(weakerForce)}, only ${f2(s.margin)} times the load`, summary: `${cap(s.weaker)} threads strip at ${n.force(weakerForce)}, only ${f2(s.margin)} times the load`});
   }
   if (r.nut.engagedThreads < SHARE_THREADS) {
     out.push({
@@ -93,16 +122,16 @@ export function screwFlags(c: FlagContext): Flag[] {
   const sy = r.screw.yield;
   const vm = r.stress.firstThread.vonMises;
   if (vm >= sy) {
-    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa reaches the screw yield ${f0(sy)} MPa`});
+    out.push({code: 'first-thread-over-yield', level: 'fail', message: `von Mises at the first thread root ${n.stress0(vm)} reaches the screw yield ${n.stress0(sy)}. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${n.stress0(vm)} reaches the screw yield ${n.stress0(sy)}`});
   } else if (sy / vm < WATCH_MARGIN.yield) {
-    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${f0(vm)} MPa is ${f2(sy / vm)} times below the screw yield ${f0(sy)} MPa. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${f0(vm)} MPa, yield ${f0(sy)} MPa only ${f2(sy / vm)} times it`});
+    out.push({code: 'first-thread-over-yield', level: 'watch', message: `von Mises at the first thread root ${n.stress0(vm)} is ${f2(sy / vm)} times below the screw yield ${n.stress0(sy)}. ${SCREW_FIRST_THREAD_NOTE}`, summary: `First thread root ${n.stress0(vm)}, yield ${n.stress0(sy)} only ${f2(sy / vm)} times it`});
   }
   const b = r.buckling;
   if (b.checked && b.criticalLoad !== null && b.margin !== null) {
     if (b.margin < 1) {
-      out.push({code: 'buckling', level: 'fail', message: `screw buckles: critical load ${f1(b.criticalLoad / 1000)} kN (${b.method === 'euler' ? 'Euler' : 'J. B. Johnson'}, C = ${b.endConstant}) is below the load ${f1(c.load / 1000)} kN`, summary: `Screw buckles: critical load ${f1(b.criticalLoad / 1000)} kN < load ${f1(c.load / 1000)} kN`});
+      out.push({code: 'buckling', level: 'fail', message: `screw buckles: critical load ${n.force(b.criticalLoad)} (${b.method === 'euler' ? 'Euler' : 'J. B. Johnson'}, C = ${b.endConstant}) is below the load ${n.force(c.load)}`, summary: `Screw buckles: critical load ${n.force(b.criticalLoad)} < load ${n.force(c.load)}`});
     } else if (b.margin < WATCH_MARGIN.buckling) {
-      out.push({code: 'buckling', level: 'watch', message: `critical column load ${f1(b.criticalLoad / 1000)} kN is only ${f2(b.margin)} times the load; column failure gives no warning`, summary: `Critical column load ${f1(b.criticalLoad / 1000)} kN, only ${f2(b.margin)} times the load`});
+      out.push({code: 'buckling', level: 'watch', message: `critical column load ${n.force(b.criticalLoad)} is only ${f2(b.margin)} times the load; column failure gives no warning`, summary: `Critical column load ${n.force(b.criticalLoad)}, only ${f2(b.margin)} times the load`});
     }
   }
   if (!c.pitchListed) {
@@ -122,4 +151,22 @@ export function screwFlags(c: FlagContext): Flag[] {
     });
   }
   return out;
+}
+
+/**
+ * The flags of a computed power screw with their numbers in `units` (US: ksi, lbf, ft·lbf),
+ * for the text and Markdown reports and the workbench. Same codes, levels and order as
+ * result.flags (the duty applied again), which (and so the JSON) stay in SI.
+ */
+export function screwFlagsInUnits(result: ScrewResult, input: ScrewInput, units: UnitSystem): Flag[] {
+  if (units === 'si') return result.flags;
+  const {flags: _flags, ...r} = result;
+  const flags = screwFlags({
+    r, load: result.input.load, muMin: result.friction.thread.min, flankAngle: result.geometry.flankAngle,
+    ...(input.allowablePressure !== undefined ? {allowableOverride: input.allowablePressure} : {}),
+    collarIncomplete: (input.muCollar > 0) !== (input.collarDiameter > 0),
+    pitchListed: result.thread.isStandardPitch || result.thread.family === 'square',
+    units,
+  });
+  return applyDuty(flags, input.duty);
 }

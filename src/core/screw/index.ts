@@ -29,6 +29,7 @@ export {END_CONDITIONS, END_CONDITION_SOURCE} from './buckling.js';
 export {nutMaterialIds, screwMaterialIds} from './materials.js';
 export {parsePowerThread, THREAD_EXAMPLES} from './designation.js';
 export {powerThreadGeometry} from './geometry.js';
+export {screwFlagsInUnits, flagNumbers} from './flags.js';
 
 /** First-thread share of the load (Shigley 9th ed., p. 419); the joint's constant. */
 export const FIRST_THREAD_SHARE = FIRST_THREAD_SHARE_LONG;

@@ -7,7 +7,7 @@ import {formatCheckText} from '../../../src/report/index.js';
 // engagement with a shear area of twice the tensile stress area, which is more
 // demanding than the stripping-force ratio built from shear strengths of about
 // 0.6 Rm. When only Formula 1 asks for more thread, the check must still say so.
-describe('strips-before-break: Formula 1 asks for more than is engaged', () => {
+describe('engagement-below-required: Formula 1 asks for more than is engaged', () => {
   const input = JointInputSchema.parse({
     thread: '3/8-16 UNC', boltGrade: 'SAE-5', parent: '6061-T6',
     engagement: 12.7, tightening: 'torque', torque: 33.9,
@@ -22,7 +22,9 @@ describe('strips-before-break: Formula 1 asks for more than is engaged', () => {
     const r129 = checkJoint(i129);
     expect(r129.stripping.effectiveEngagement).toBeLessThan(r129.stripping.requiredEngagement.fedStd);
     expect(r129.margin.boltBreaksFirst).toBeGreaterThanOrEqual(1);
-    const f = r129.flags.find(x => x.code === 'strips-before-break');
+    // The forces still put the bolt first: its own code, not strips-before-break (issue 14 item 14).
+    expect(r129.flags.find(x => x.code === 'strips-before-break')).toBeUndefined();
+    const f = r129.flags.find(x => x.code === 'engagement-below-required');
     expect(f?.level).toBe('watch');
     expect(f?.message).toMatch(/Formula 1 calls for [\d.]+ mm of full thread; only 13\.5 mm/);
   });
@@ -37,6 +39,14 @@ describe('strips-before-break: Formula 1 asks for more than is engaged', () => {
     const long = checkJoint({...input, engagement: 20});
     expect(long.stripping.effectiveEngagement).toBeGreaterThan(long.stripping.requiredEngagement.fedStd);
     expect(long.flags.find(x => x.code === 'strips-before-break')).toBeUndefined();
+    expect(long.flags.find(x => x.code === 'engagement-below-required')).toBeUndefined();
+  });
+
+  it('on a lifting duty the engagement shortfall is raised to FAIL (src/core/duty.ts RAISED_ON_DUTY)', () => {
+    const lifting = checkJoint(JointInputSchema.parse({thread: 'M10', boltGrade: '12.9', parent: 'S355', engagement: 13.5, duty: 'lifting'}));
+    const f = lifting.flags.find(x => x.code === 'engagement-below-required');
+    expect(f?.level).toBe('fail');
+    expect(f?.message).toMatch(/raised to FAIL/);
   });
 
   it('names the inch head and hole standards for the default bearing diameter', () => {

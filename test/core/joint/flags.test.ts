@@ -54,11 +54,14 @@ describe('flags (src/core/joint/flags.ts)', () => {
     expect(f?.message).toMatch(/5\.9 full threads.*41 %/);
   });
 
-  it('strips-before-break: fail when stripping force / break force is below the required margin; watch when only Alexander asks for more', () => {
+  it('strips-before-break: fail when stripping force / break force is below the required margin; engagement-below-required (watch) when only Alexander asks for more', () => {
     expect(stripsBeforeBreak({...ok, weakerForce: 46400})).toBeUndefined();
     expect(stripsBeforeBreak({...ok, weakerForce: 46300})?.level).toBe('fail');
+    expect(stripsBeforeBreak({...ok, weakerForce: 46300})?.code).toBe('strips-before-break');
     expect(stripsBeforeBreak({...ok, requiredMargin: 1.3})?.level).toBe('fail');
     expect(stripsBeforeBreak({...ok, requiredAlexander: 12.1})?.level).toBe('watch');
+    expect(stripsBeforeBreak({...ok, requiredAlexander: 12.1})?.code).toBe('engagement-below-required');
+    expect(stripsBeforeBreak({...ok, requiredFedStd: 12.1})?.code).toBe('engagement-below-required');
     expect(stripsBeforeBreak({...ok, requiredAlexander: 12})).toBeUndefined();
   });
 

@@ -35,7 +35,7 @@ export function ScrewReadout({result: r, units, width, height, problem}: Props) 
   const lines: Line[] = [
     row('Lead', `${q(r.lead, 'length')}, lead angle ${formatNumber(r.leadAngle, 3)} deg`),
     row('Torque', `raise ${q(r.torque.raise, 'torque')}, lower ${q(r.torque.lower, 'torque')}`),
-    row('', `of which collar ${q(r.torque.collar, 'torque')}`),
+    row('', r.torqueSolve ? `${r.torqueSolve.solves === 'load' ? `raises ${q(r.torqueSolve.load, 'force')}` : `implies f ${n(r.torqueSolve.friction)}`}; collar ${q(r.torque.collar, 'torque')}` : `of which collar ${q(r.torque.collar, 'torque')}`),
     row('Efficiency', `${formatNumber(r.efficiency * 100, 2)}% (thread alone ${formatNumber(r.threadEfficiency * 100, 2)}%)`),
     row('Self-lock', r.selfLocking ? `yes, locks for f above ${n(r.selfLockingFriction)}` : `NO, back-drives (needs f > ${n(r.selfLockingFriction)})`, r.selfLocking ? undefined : t.tone('fail')),
     row('Body', `axial ${ns(r.stress.body.axial)}, torsion ${ns(r.stress.body.torsion)} ${su}`),

@@ -26,7 +26,7 @@ export function chosenOption(plan: RepairPlan | undefined, c: RepairChoice | und
  * FAIL, or at WATCH when they say a thread may strip first (not the WATCH that
  * still puts the bolt first).
  */
-const stripFlag = (o: RepairOption) => o.flags.find(f => f.code.startsWith('strips-') && (f.level === 'fail' || /\bmay strip\b/i.test(f.message)));
+const stripFlag = (o: RepairOption) => o.flags.find(f => (f.code.startsWith('strips-') || f.code === 'engagement-below-required') && (f.level === 'fail' || /\bmay strip\b/i.test(f.message)));
 
 /**
  * One line on the chosen repair as the inputs stand now: ok, or why it no

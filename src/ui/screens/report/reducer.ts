@@ -8,7 +8,7 @@ import {holeStateFlags} from '../../../core/joint/hole-flags.js';
 import type {WorkbenchServices} from '../../services.js';
 import {bodyHeight} from '../../layout.js';
 import {wrapLines} from '../../components/scroll-view.js';
-import {evaluate, evaluateRepairs, type Evaluation} from '../../state/evaluate.js';
+import {evaluate, evaluateRepairs, evaluateScrew, type Evaluation} from '../../state/evaluate.js';
 import {withEffects, type Step} from '../../state/effects.js';
 import {errText, fail, type WorkbenchState} from '../../state/workbench.js';
 import {chosenOption, chosenStatus} from '../repairs/reducer.js';
@@ -36,7 +36,7 @@ function reportRepairs(s: WorkbenchState, svc: WorkbenchServices, ev: Evaluation
 /** The report text for the current joint, or a reason it cannot be made. */
 export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input?: unknown; result?: unknown}): {text?: string; why?: string} {
   if (!svc.report) return {why: 'The report writer is not available in this workbench.'};
-  if (s.mode === 'screw') return {why: 'The work-order report covers threaded joints; for this power screw save the preset and run tapwright screw --preset NAME.'};
+  if (s.mode === 'screw') return screwReportText(s, svc);
   if (!ev.input || !ev.result) return {why: 'Fix the joint inputs first: the report needs a computed joint.'};
   try {
     const repairs = reportRepairs(s, svc, ev as Evaluation);
@@ -52,6 +52,18 @@ export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input
         ...(repairs ? {repairs} : {}),
       }),
     };
+  } catch (e) {
+    return {why: `Cannot build the report: ${errText(e)}`};
+  }
+}
+
+/** The power-screw work-order report (text or Markdown) with its notes, date and sign-off, as tapwright screw prints it. */
+function screwReportText(s: WorkbenchState, svc: WorkbenchServices): {text?: string; why?: string} {
+  if (!svc.screwReport) return {why: 'The power-screw report is not available in this workbench.'};
+  const sev = evaluateScrew(s.values, svc, s.units, s.ascii);
+  if (!sev.input || !sev.result) return {why: 'Fix the power-screw inputs first: the report needs a computed screw.'};
+  try {
+    return {text: svc.screwReport(s.report.format, sev.result, sev.input, {presetName: s.preset.name, date: svc.now(), units: s.units, notes: shownNotes(s)})};
   } catch (e) {
     return {why: `Cannot build the report: ${errText(e)}`};
   }
