@@ -41,7 +41,8 @@ function loadRange(input: JointInput, s: ServiceInput): {min: number; max: numbe
 /**
  * The service state of a joint already checked by checkJoint. Without `service.clamp` the
  * service load is taken in full by the bolt (C = 1) and only the yield and load factors are
- * given. Throws JointInputError naming `clamp` for parts that cannot be resolved.
+ * given. Throws JointInputError naming `service.clamp` (or `service.boltLength`) for parts that
+ * cannot be resolved.
  */
 export function checkService(input: JointInput, result: CheckResult, service: ServiceInput, units: UnitSystem = 'si'): ServiceResult {
   const g = result.geometry;
@@ -94,16 +95,16 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
   const tapped = input.internal === 'tapped';
   const parts: ResolvedPart[] = service.clamp.map((p, i) => {
     const r = resolvePart(p, input.parentData);
-    if (typeof r === 'string') throw new JointInputError('clamp', `--clamp: entry ${i + 1}: ${r}`);
+    if (typeof r === 'string') throw new JointInputError('service.clamp', `--clamp: entry ${i + 1}: ${r}`);
     return r;
   });
   if (tapped && parts.length < 2) {
-    throw new JointInputError('clamp', '--clamp: with a tapped hole list the parts under the head and, last, the part that holds the thread (at least two entries)');
+    throw new JointInputError('service.clamp', '--clamp: with a tapped hole list the parts under the head and, last, the part that holds the thread (at least two entries)');
   }
   const grip = effectiveGrip(parts.map(p => ({thickness: p.thickness, modulus: p.modulus})), d, tapped);
   const through = tapped ? grip.grip - (grip.layers[grip.layers.length - 1]?.thickness ?? 0) : grip.grip;
   if (service.boltLength !== undefined && service.boltLength <= through) {
-    throw new JointInputError('boltLength', `--bolt-length ${service.boltLength.toFixed(1)} mm does not reach ${tapped ? 'the tapped part' : 'past the clamped parts'} (${through.toFixed(1)} mm${tapped ? ' above the tapped part' : ' of parts'}); give the bolt length under the head`);
+    throw new JointInputError('service.boltLength', `--bolt-length ${service.boltLength.toFixed(1)} mm does not reach ${tapped ? 'the tapped part' : 'past the clamped parts'} (${through.toFixed(1)} mm${tapped ? ' above the tapped part' : ' of parts'}); give the bolt length under the head`);
   }
   const kbOut = boltStiffness({d, stressArea: At, modulus: Eb, grip: grip.grip, inch, ...(service.boltLength !== undefined ? {boltLength: service.boltLength} : {}), ...(service.threadLength !== undefined ? {threadLength: service.threadLength} : {})});
   if (service.boltLength === undefined && service.threadLength !== undefined) notes.push('Thread length given without the bolt length: the bolt is taken as threaded through the grip.');

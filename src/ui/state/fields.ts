@@ -23,6 +23,7 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'engagement', title: 'Engagement'},
   {id: 'tightening', title: 'Tightening'},
   {id: 'hole', title: 'Hole state'},
+  {id: 'service', title: 'Service'},
 ];
 
 export const SCREW_STEPS: readonly {id: StepId; title: string}[] = [
