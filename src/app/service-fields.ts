@@ -116,10 +116,10 @@ const S = 'service' as const;
 export const SERVICE_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'service.serviceLoad', label: 'Load cycles', empty: 'static load', step: S, kind: 'quantity', dimension: 'force', optional: true, text: CYCLING_TEXT,
     help: 'Cycling load MIN..MAX per bolt (2..9 kN); empty = the static load above. Fatigue is checked.'},
-  {group: 'joint', key: 'service.clamp', label: 'Clamped parts', empty: 'none: load in full', step: S, kind: 'text', optional: true, text: CLAMP_TEXT, section: 'service', example: '"12 6082-T6, 20 S355"',
+  {group: 'joint', key: 'service.clamp', label: 'Clamped parts', empty: 'none (in full)', step: S, kind: 'text', optional: true, text: CLAMP_TEXT, section: 'service', example: '"12 6082-T6, 20 S355"',
     cli: {name: '--clamp', arg: '"T1 M1, ..."', help: 'clamped parts from under the head down: thickness and material id (tapwright materials) or modulus (110GPa); tapped hole: last = the part with the thread', read: clampRead},
-    help: 'Parts from under the head down: "3 steel, 12 6082-T6, 20 S355"; tapped: last holds the thread.'},
-  {group: 'joint', key: 'service.boltLength', label: 'Bolt length', empty: 'threaded in grip', step: S, kind: 'quantity', dimension: 'length', optional: true, section: 'service',
+    help: 'Head side first: "3 steel, 12 6082-T6, 20 S355"; tapped hole: the last part holds the thread.'},
+  {group: 'joint', key: 'service.boltLength', label: 'Bolt length', empty: 'thread in grip', step: S, kind: 'quantity', dimension: 'length', optional: true, section: 'service',
     cli: {name: '--bolt-length', arg: 'LEN', help: 'bolt length under the head (default: threaded through the grip)'},
     help: 'Length under the head; with it the shank and thread in the grip follow Shigley Table 8-7.'},
   {group: 'joint', key: 'service.threadLength', label: 'Thread length', empty: 'standard rule', step: S, kind: 'quantity', dimension: 'length', optional: true, section: 'service', isVisible: has('boltLength'),
@@ -140,7 +140,7 @@ export const SERVICE_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'service.interfaceFriction', label: 'Interface friction', step: S, kind: 'ratio', optional: true, section: 'service', isVisible: has('transverseLoad'),
     cli: {name: '--interface-friction', arg: 'MU', help: 'static friction of the interface under the transverse load (default 0.10)'},
     help: 'Static friction of the interface that carries the transverse load; default 0.10.'},
-  {group: 'joint', key: 'service.preloadProof', label: 'Preload / proof', empty: 'from tightening', step: S, kind: 'ratio', optional: true, section: 'service',
+  {group: 'joint', key: 'service.preloadProof', label: 'Preload / proof', empty: 'tightening', step: S, kind: 'ratio', optional: true, section: 'service',
     cli: {name: '--preload-proof', arg: 'X', help: 'service preload as a fraction of the proof load As x Sp (0.75 reused, 0.90 permanent joints)'},
     help: 'Preload as a fraction of the proof load: 0.75 reused, 0.90 permanent (Marks Eqs. 8.25-8.26).'},
 ];

@@ -22,8 +22,9 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'parts', title: 'Parts'},
   {id: 'engagement', title: 'Engagement'},
   {id: 'tightening', title: 'Tightening'},
-  {id: 'hole', title: 'Hole state'},
+  // The service state (issue 16) after tightening; the hole state for the repair planner stays last.
   {id: 'service', title: 'Service'},
+  {id: 'hole', title: 'Hole state'},
 ];
 
 export const SCREW_STEPS: readonly {id: StepId; title: string}[] = [

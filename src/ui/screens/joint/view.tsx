@@ -19,6 +19,7 @@ import {loadShareLines} from '../../components/pictures.js';
 import {Lines, type Line} from '../../components/lines.js';
 import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
+import {ServicePanel} from '../../components/service-panel.js';
 
 interface Props {
   state: WorkbenchState;
@@ -49,7 +50,7 @@ function StepTabs({state, width}: {state: WorkbenchState; width: number}) {
           {` ${i + 1} ${s.title} `}
         </Text>
       ))}
-      <Text color={t.tone('dim')}>{fit(`  ${t.ascii ? '<- ->' : '← →'} steps`, Math.max(0, width - 62), '')}</Text>
+      <Text color={t.tone('dim')}>{fit(`  ${t.ascii ? '<- ->' : '← →'} steps`, Math.max(0, width - 1 - stepsFor(state.mode).reduce((n, s, i) => n + ` ${i + 1} ${s.title} `.length, 0) - (state.mode === 'screw' ? 24 : 0)), '')}</Text>
       {state.mode === 'screw' ? <Text bold>{'  POWER SCREW (m: joint)'}</Text> : null}
     </Box>
   );
@@ -215,6 +216,8 @@ export function JointView({state, derived, svc, width, height}: ScreenProps) {
           <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
         ) : state.mode === 'screw' ? (
           <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
+        ) : STEPS[state.step]?.id === 'service' ? (
+          <ServicePanel result={props.ev.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
         ) : (
           <Readout result={props.ev.result} input={props.ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
         )}
