@@ -20,9 +20,11 @@ import {parentMaterial} from '../core/materials/index.js';
 import {findClampMaterial} from '../core/service/materials.js';
 import {formatNumber, formatQuantity, parseQuantity, toDisplay, type UnitSystem} from '../core/units.js';
 import {UsageError} from './errors.js';
-import {boundsOf, plain} from './field-table.js';
 import type {FieldText, FormValues, OptionReader} from './fields-types.js';
 import type {JointRow} from './joint-fields.js';
+
+/** A number without trailing zeros, to 5 significant figures (field-table.ts's plain; not imported: that module imports these rows). */
+const plain = (x: number) => String(Number(x.toPrecision(5)));
 
 const service = (v: FormValues) => (v.joint.service ?? {}) as Record<string, unknown>;
 const has = (key: string) => (v: FormValues) => service(v)[key] !== undefined;
@@ -70,29 +72,32 @@ const EMBEDDING_TEXT: FieldText = {
   format: (value, units, ascii) => (typeof value === 'number' ? formatQuantity(value, 'length', units, {ascii, significant: 2}) : String(value)),
 };
 
-/** Degrees C, with or without a C suffix ("80", "80C", "80 degC"); Fahrenheit is refused with the conversion. */
-function celsius(text: string, key: string): {ok: true; value: number} | {ok: false; error: string} {
+/**
+ * Degrees C as typed, "80", "80C", "80 degC": the number without its unit, or a message
+ * for Fahrenheit (with the conversion). The range is checked by the row's bounds (schema).
+ */
+function celsiusText(text: string): {ok: true; value: string} | {ok: false; error: string} {
   const t = text.trim();
   if (/^[+-]?[\d.]+(e[+-]?\d+)?\s*(\u00b0\s*)?f$/i.test(t)) return {ok: false, error: `"${t}" is in Fahrenheit; give degrees C: (F - 32) / 1.8`};
-  const p = parseQuantity(t.replace(/\s*(\u00b0\s*c|degc|c)$/i, ''), 'ratio');
-  const b = boundsOf('joint', key);
-  const range = `accepted ${b.min} to ${b.max} deg C`;
-  if (!p.ok) return {ok: false, error: `${p.error}; ${range}`};
-  if ((b.min !== undefined && p.value < b.min) || (b.max !== undefined && p.value > b.max)) return {ok: false, error: `${t} is out of range; ${range}`};
-  return p;
+  return {ok: true, value: t.replace(/\s*(\u00b0\s*c|degc|c)$/i, '')};
 }
 
-const temperatureText = (key: string): FieldText => ({
-  parse: text => celsius(text, key),
+const TEMPERATURE_TEXT: FieldText = {
+  parse: text => {
+    const c = celsiusText(text);
+    if (!c.ok) return c;
+    const p = parseQuantity(c.value, 'ratio');
+    return p.ok ? p : {ok: false, error: `${p.error}; give degrees C`};
+  },
   format: (value, _u, ascii) => `${formatNumber(Number(value), 3)} ${ascii ? 'deg C' : '\u00b0C'}`,
-});
+};
 
 const temperatureRead =
   (key: string): OptionReader =>
   (text, c) => {
-    const r = celsius(text, key);
+    const r = celsiusText(text);
     if (!r.ok) throw new UsageError(`${c.option}: ${r.error}`, c.option);
-    return {[key]: r.value};
+    return {[key]: c.quantity(r.value)};
   };
 
 /** --clamp: parseClamp with the display unit; the user's own material is accepted when it is also the --parent. */
@@ -128,10 +133,10 @@ export const SERVICE_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'service.embedding', label: 'Embedding', step: S, kind: 'text', optional: true, text: EMBEDDING_TEXT, section: 'service',
     cli: {name: '--embedding', arg: 'LEN|auto', help: 'settling of the faces (8um, 0.008mm); auto: VDI 2230 guide values; 0 off (default auto)', read: embeddingRead, rangeText: 'auto or 0 to 1 mm'},
     help: 'Settling: auto (VDI 2230 guide values, from memory), a length (8um), or 0 for none.'},
-  {group: 'joint', key: 'service.serviceTemperature', label: 'Service temp.', empty: 'no change', step: S, kind: 'ratio', optional: true, text: temperatureText('service.serviceTemperature'), section: 'service',
+  {group: 'joint', key: 'service.serviceTemperature', label: 'Service temp.', empty: 'no change', step: S, kind: 'ratio', optional: true, text: TEMPERATURE_TEXT, section: 'service',
     cli: {name: '--service-temperature', arg: 'T', help: 'temperature of bolt and parts in service, deg C only ("80" or "80C")', read: temperatureRead('service.serviceTemperature'), rangeSuffix: ' deg C'},
     help: 'Degrees C of bolt and parts in service (80 or 80C); empty = no thermal change.'},
-  {group: 'joint', key: 'service.assemblyTemperature', label: 'Assembly temp.', step: S, kind: 'ratio', optional: true, text: temperatureText('service.assemblyTemperature'), section: 'service', isVisible: has('serviceTemperature'),
+  {group: 'joint', key: 'service.assemblyTemperature', label: 'Assembly temp.', step: S, kind: 'ratio', optional: true, text: TEMPERATURE_TEXT, section: 'service', isVisible: has('serviceTemperature'),
     cli: {name: '--assembly-temperature', arg: 'T', help: 'temperature at assembly, deg C only (default 20)', read: temperatureRead('service.assemblyTemperature'), rangeSuffix: ' deg C'},
     help: 'Degrees C when the joint was tightened; default 20.'},
   {group: 'joint', key: 'service.transverseLoad', label: 'Transverse load', empty: 'none', step: S, kind: 'quantity', dimension: 'force', optional: true, section: 'service',

@@ -10,7 +10,6 @@ import {formatOption, parseOptions, str, type OptionSpec} from '../args.js';
 import {CAUTION_LINES} from '../../core/cautions.js';
 import type {JointInputDraft} from '../../core/joint/input.js';
 import {checkJoint} from '../../core/joint/index.js';
-import {serviceJson} from '../../core/service/json.js';
 import {formatCheckMarkdown, formatCheckText, type WorkOrderNotes} from '../../report/index.js';
 import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
 import {JOINT_OPTIONS, UNITS_HELP, jointFromOptions, jointHelp, jointUsageError} from '../joint-options.js';
@@ -75,7 +74,7 @@ export const command: Command = {
       throw jointUsageError(e, units);
     }
     if (format === 'json') {
-      io.out(`${JSON.stringify({...result, ...(result.service ? {service: serviceJson(result.service)} : {}), input, units: 'si'}, null, 2)}\n`);
+      io.out(`${JSON.stringify({...result, input, units: 'si'}, null, 2)}\n`);
     } else if (format === 'markdown') {
       io.out(formatCheckMarkdown(result, input, {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {})}));
     } else {

@@ -1,9 +1,9 @@
 /**
- * The service state as `check --json` prints it (issue 16 contract, SI): the
- * ServiceResult with every value that has no finite number left out: a factor
- * with no load to divide by (infinite), a separation load or factor without
- * clamped parts, a limiting pressure or expansion that is not known (null). The
- * text and Markdown reports say those in words ("no load", "not known"). Pure.
+ * The service state holds finite numbers only, so `check --json` (SI, issue 16
+ * contract) prints no null or infinite value: a factor with no load to divide by
+ * (infinite), a separation load or factor without clamped parts, a limiting pressure
+ * or an expansion that is not known are left out. The text and Markdown reports say
+ * those in words ("no load", "not known"). Pure.
  */
 import type {ServiceResult} from './result.js';
 
@@ -18,7 +18,7 @@ function clean(v: unknown): unknown {
   return out;
 }
 
-/** The ServiceResult for JSON: the same keys and SI numbers, without null or non-finite values. */
-export function serviceJson(s: ServiceResult): Record<string, unknown> {
-  return clean(s) as Record<string, unknown>;
+/** The ServiceResult without null, undefined or non-finite values (same keys otherwise). */
+export function finiteOnly(s: ServiceResult): ServiceResult {
+  return clean(s) as ServiceResult;
 }

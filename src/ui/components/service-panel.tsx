@@ -14,7 +14,8 @@ import {Lines, type Line} from './lines.js';
 import {jointDiagram} from './joint-diagram.js';
 import {fit, useTheme, wrap} from '../theme.js';
 
-const factor = (x: number | null | undefined) => (x === null || x === undefined ? '-' : Number.isFinite(x) ? formatNumber(x, 2) : 'no load');
+/** A factor; absent or infinite means there is no load to divide by. */
+const factor = (x: number | undefined) => (x !== undefined && Number.isFinite(x) ? formatNumber(x, 2) : 'no load');
 
 /** One line of the deciding service numbers for the readout ("C 0.45 kept 17.2 kN sep 5.3 fat 1.9"); undefined without clamped parts. */
 export function serviceSummary(s: ServiceResult | undefined, units: UnitSystem, ascii: boolean): string | undefined {
@@ -60,7 +61,7 @@ export function ServicePanel({result, units, width, height, problem}: Props) {
     fit(`Kept ${F(s.preloadRetained.min)} (settling -${N(s.embeddingLoss)}${s.thermalChange !== 0 ? `, temp ${s.thermalChange > 0 ? '+' : ''}${N(s.thermalChange)}` : ''})`, width, t.sym.ellipsis),
     {text: fit(`Opens at ${F(s.separationLoad ?? 0)}: separation factor ${factor(s.factors.separation)}`, width, t.sym.ellipsis), color: open ? t.tone('fail') : undefined, bold: open},
     fit(
-      [s.factors.fatigue !== undefined ? `Fatigue ${factor(s.factors.fatigue)}` : 'Static load', `yield ${factor(s.factors.yield)}`, s.bearingPressure ? `head ${s.bearingPressure.limit !== null ? `${formatNumber(toDisplay(s.bearingPressure.head, 'stress', units), 3)}/${S(s.bearingPressure.limit)}` : S(s.bearingPressure.head)}` : ''].filter(Boolean).join(', '),
+      [s.factors.fatigue !== undefined ? `Fatigue ${factor(s.factors.fatigue)}` : 'Static load', `yield ${factor(s.factors.yield)}`, s.bearingPressure ? `head ${s.bearingPressure.limit !== undefined ? `${formatNumber(toDisplay(s.bearingPressure.head, 'stress', units), 3)}/${S(s.bearingPressure.limit)}` : S(s.bearingPressure.head)}` : ''].filter(Boolean).join(', '),
       width,
       t.sym.ellipsis,
     ),

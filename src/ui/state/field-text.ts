@@ -82,7 +82,9 @@ export function parseField(f: FieldDef, text: string, units: UnitSystem, ascii: 
   }
   if (f.text) {
     const p = f.text.parse(t, units);
-    return p.ok ? p : {ok: false, error: `${f.label}: ${p.error}`};
+    if (!p.ok) return {ok: false, error: `${f.label}: ${p.error}`};
+    const bad = typeof p.value === 'number' ? checkBounds(f, p.value, t, units, ascii) : undefined;
+    return bad ? {ok: false, error: bad} : p;
   }
   switch (f.kind) {
     case 'quantity': {
