@@ -156,15 +156,19 @@ function labelled(name: string, message: string): string {
   return /^(is|are|needs|must|or) /.test(message) ? `${name} ${message}` : `${name}: ${message}`;
 }
 
+/** Whether a core message already starts with its option ("--clamp: entry 1 ...", "--bolt-length 20 mm ..."). */
+const namesOption = (e: FieldError) => e.message.startsWith(`${e.option}:`) || e.message.startsWith(`${e.option} `);
+
 /** The message for the command line: "--engage is needed, e.g. --engage 15mm; accepted: 0.5 mm to 1000 mm". */
 export function optionMessage(e: FieldError): string {
   const example = e.example ? `, e.g. ${e.option} ${e.example}` : '';
   const accepted = e.optionAccepted && e.source !== 'core' ? `; accepted: ${e.optionAccepted}` : '';
-  return labelled(e.option, `${e.message}${example}${accepted}`);
+  return namesOption(e) ? `${e.message}${example}${accepted}` : labelled(e.option, `${e.message}${example}${accepted}`);
 }
 
 /** The message for the workbench: "Engaged length is needed; accepted 0.5 to 1000 mm". */
 export function labelMessage(e: FieldError): string {
+  if (e.source === 'core' && namesOption(e)) return `${e.label}: ${e.message.slice(e.option.length).replace(/^:?\s*/, '')}`;
   if (e.source === 'core') return e.message.toLowerCase().startsWith(e.label.toLowerCase()) ? e.message : `${e.label}: ${e.message}`;
   const msg = e.source === 'schema' ? e.message.toLowerCase() : e.message;
   return labelled(e.label, `${msg}${e.accepted ? `; accepted ${e.accepted}` : ''}`);

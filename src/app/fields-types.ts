@@ -25,14 +25,14 @@ export interface FormValues {
   notes?: Notes;
 }
 
-export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'measured' | 'screw-thread' | 'screw-nut' | 'screw-friction';
+export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'measured' | 'service' | 'screw-thread' | 'screw-nut' | 'screw-friction';
 export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
 export type PickSource = 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction';
 
 /** What a CLI option's text sets, for options whose text is more than a number or a word. */
 export type OptionReader = (
   text: string,
-  ctx: {option: string; units: UnitSystem; row: FieldRow; quantity: (text: string) => number; range: (text: string) => {min: number; max: number}},
+  ctx: {option: string; units: UnitSystem; row: FieldRow; quantity: (text: string) => number; range: (text: string) => {min: number; max: number}; other?: (name: string) => string | undefined},
 ) => Record<string, unknown>;
 
 export interface CliOption {
@@ -50,6 +50,16 @@ export interface CliOption {
   rangeText?: string;
   /** Words after the generated range in messages (', or "all"'). */
   rangeSuffix?: string;
+}
+
+/**
+ * The workbench's own reading and showing of a field whose value is not one number or
+ * word (a list of parts, MIN..MAX forces, "auto"): `parse` gets the typed text (a bare
+ * number in the unit shown beside the field), `format` the stored value in working units.
+ */
+export interface FieldText {
+  parse: (text: string, units: UnitSystem) => {ok: true; value: unknown} | {ok: false; error: string};
+  format: (value: unknown, units: UnitSystem, ascii: boolean) => string;
 }
 
 export interface FieldRow {
@@ -78,6 +88,8 @@ export interface FieldRow {
   significant?: number;
   /** What applies when the field is empty, shown in its place ("from grade"); a needed field may have one when the resolver fills it (a nut's engaged length). */
   empty?: string;
+  /** The workbench's own text of the field, when the kind's is not right (see FieldText). */
+  text?: FieldText;
   /** One line shown under the fields in the workbench when this one is selected. */
   help: string;
   /** An example value for the "is needed" message ("15mm"). */

@@ -6,8 +6,10 @@
  * JointInputSchema and one row here, in the order the workbench shows it.
  */
 import {DUTY_IDS} from '../core/duty.js';
-import type {FieldRow, FormValues} from './fields-types.js';
+import type {FieldRow, FormValues, OptionReader} from './fields-types.js';
+import {UsageError} from './errors.js';
 import {MEASURED_ROWS} from './measured-fields.js';
+import {SERVICE_ROWS} from './service-fields.js';
 
 const isNut = (v: FormValues) => v.joint.internal === 'nut';
 const isTapped = (v: FormValues) => v.joint.internal !== 'nut';
@@ -15,14 +17,26 @@ const tighten = (m: string) => (v: FormValues) => (v.joint.tightening ?? 'utilis
 const MU_RANGE = '0.02 to 0.6, or min..max';
 
 /** --help section of each joint option (see JOINT_SECTIONS). */
-export type JointSection = 'joint' | 'tightening' | 'loads' | 'measured';
+export type JointSection = 'joint' | 'tightening' | 'loads' | 'measured' | 'service';
 
 export const JOINT_SECTIONS: readonly {id: JointSection; title: string}[] = [
   {id: 'joint', title: 'The joint'},
   {id: 'tightening', title: 'Tightening (one of; default --utilisation 0.9)'},
   {id: 'loads', title: 'Loads and margins'},
   {id: 'measured', title: 'As measured (each optional; stripping uses them in place of the class limits)'},
+  {id: 'service', title: 'Service state (optional; without --clamp the service load is taken in full)'},
 ];
+
+/** --service-load F (static: serviceLoad) or MIN..MAX (cycling: service.serviceLoad, and serviceLoad = MAX); see service-fields.ts. */
+const serviceLoadRead: OptionReader = (text, c) => {
+  const parts = text.split('..');
+  if (parts.length > 2) throw new UsageError(`${c.option} takes F or MIN..MAX, got "${text}"`, c.option);
+  if (parts.length === 1) return {serviceLoad: c.quantity(text), 'service.serviceLoad': undefined};
+  const min = c.quantity(parts[0] ?? '');
+  const max = c.quantity(parts[1] ?? '');
+  if (min > max) throw new UsageError(`${c.option} ${text}: MIN must not exceed MAX`, c.option);
+  return {serviceLoad: max, 'service.serviceLoad': {min, max}};
+};
 
 /** A joint row; `section` places its option in `check --help`. Rows of a feature may live in a file of their own and be spread in below. */
 export type JointRow = FieldRow & {group: 'joint'; section?: JointSection};
@@ -104,8 +118,9 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'scatter', label: 'Method scatter', empty: 'from settings', step: 'tightening', kind: 'ratio', optional: true, section: 'tightening',
     cli: {name: '--scatter', arg: 'A', help: 'tightening factor alphaA = FM,max/FM,min in total, friction scatter included (VDI 2230); only the part beyond the friction range\'s own spread is added (default: tapwright settings, else 1)'},
     help: 'alphaA = FM,max/FM,min in total, friction included; only the part beyond the friction range is added.'},
-  {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'tightening', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
-    cli: {name: '--service-load', arg: 'F', help: 'external axial load on the bolt, taken in full'},
-    help: 'External axial load on the bolt in service; empty = none.'},
+  {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'service', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
+    cli: {name: '--service-load', arg: 'F|MIN..MAX', help: 'external axial load per bolt; MIN..MAX: it cycles (fatigue). Taken in full without --clamp, shared with it', read: serviceLoadRead},
+    help: 'External axial load per bolt in service (static); empty = none.'},
   ...MEASURED_ROWS,
+  ...SERVICE_ROWS,
 ];

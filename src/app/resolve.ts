@@ -108,6 +108,10 @@ export function resolveJointInput(draft: Partial<JointInputDraft>, ctx: ResolveC
   const ascii = ctx.ascii ?? true;
   const d: Record<string, unknown> & Partial<JointInputDraft> = {...draft};
   if (d.scatter === undefined && ctx.settings?.scatterDefault !== undefined) d.scatter = ctx.settings.scatterDefault;
+  // A cycling service load (service.serviceLoad): the thread and tightening checks take its largest value in full.
+  const cyc = d.service?.serviceLoad;
+  const cycMax = typeof cyc === 'number' ? cyc : cyc?.max;
+  if (typeof cycMax === 'number' && !(typeof d.serviceLoad === 'number' && d.serviceLoad >= cycMax)) d.serviceLoad = cycMax;
   if (d.engagement === undefined && d.internal === 'nut') {
     const e = nutEngagement(d, units);
     if (typeof e === 'number') d.engagement = e;

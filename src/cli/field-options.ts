@@ -86,7 +86,7 @@ export function readRowOptions(rows: readonly FieldRow[], values: ParsedOptions[
     const q = (t: string) => quantity(o, t, row.dimension ?? 'ratio', rule());
     const r = (t: string) => range(o, t, rule());
     if (cli.read) {
-      Object.assign(out, cli.read(text, {option: o, units, row, quantity: q, range: r}));
+      Object.assign(out, cli.read(text, {option: o, units, row, quantity: q, range: r, other: n => str(values, n)}));
       continue;
     }
     switch (row.kind) {

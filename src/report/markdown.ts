@@ -12,6 +12,7 @@ import {boltWords, displayFlags, displayNotes, inputRows, internalWords, levelWo
 import {isoDate, reportFacts, signOff, workOrderFields, type WorkOrderNotes} from './work-order.js';
 import type {Duty} from '../core/duty.js';
 import {measurementsMarkdown} from './measurements.js';
+import {serviceMarkdown, serviceShown} from './service-text.js';
 
 export type {WorkOrderNotes};
 
@@ -98,6 +99,7 @@ export function formatCheckMarkdown(result: CheckResult, input: JointInput, meta
 
   const measured = measurementsMarkdown(result.stripping, {units: meta.units});
   if (measured.length > 0) out.push(...measured, '');
+  if (result.service) out.push(serviceMarkdown(serviceShown(result.service, flags), f).trimEnd(), '');
   for (const section of meta.extraSections ?? []) out.push(section.trimEnd(), '');
 
   out.push('## Cautions', '');

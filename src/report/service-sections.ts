@@ -12,9 +12,9 @@ export function stiffnessText(v: number, f: Fmt): string {
   return f.units === 'si' ? `${formatNumber(v / 1000, 4)} kN/mm` : `${formatNumber(v / (CONVERSION.LBF_N / CONVERSION.IN_MM) / 1000, 4)} klbf/in`;
 }
 
-function factor(x: number | null | undefined): string {
-  if (x === null || x === undefined) return 'n/a';
-  return Number.isFinite(x) ? x.toFixed(2) : 'no load';
+/** A factor; absent or infinite means there is no load to divide by. */
+function factor(x: number | undefined): string {
+  return x !== undefined && Number.isFinite(x) ? x.toFixed(2) : 'no load';
 }
 
 function pct(x: number): string {
@@ -73,7 +73,7 @@ export function serviceGroups(s: ServiceResult, f: Fmt): Group[] {
       {label: 'Embedding loss', value: F(s.embeddingLoss), note: `settling of ${formatNumber(s.embeddingAmount * 1000, 3)} um; ${s.embeddingSource}; F_Z = f_Z / (1/kb + 1/km)`},
       {label: 'Thermal change', value: F(s.thermalChange), note: '+ gain, - loss; differential expansion of bolt and parts with both springs (Bickford Eq. 11.13 form, derived)'},
       {label: 'Preload retained', value: `${F(s.preloadRetained.min)} to ${F(s.preloadRetained.max)}`, note: 'after embedding, at the worse of assembly and service temperature'},
-      {label: 'Separation load', value: s.separationLoad === null ? 'n/a' : F(s.separationLoad), note: 'P0 = F_i,min / (1 - C), Marks Eq. 8.47'},
+      {label: 'Separation load', value: s.separationLoad === undefined ? 'not computed' : F(s.separationLoad), note: 'P0 = F_i,min / (1 - C), Marks Eq. 8.47'},
       {label: 'Clamp left at max load', value: F(s.clampUnderLoad), note: 'F_i,min - (1 - C) P_max; at or below zero the joint opens, loosens and leaks'},
       {label: 'Largest bolt load', value: F(s.boltLoadMax), note: 'F_i,max + C P_max (Marks Eq. 8.39)'},
     ],
@@ -106,9 +106,9 @@ export function serviceGroups(s: ServiceResult, f: Fmt): Group[] {
   if (b) {
     const rows: Row[] = [
       {label: 'Pressure under the head', value: S(b.head), note: `largest bolt load on pi/4 (d_w^2 - d_h^2), d_w ${L(b.bearingDiameter)}, hole ${L(b.holeDiameter)} (VDI 2230 Part 1, from memory)`},
-      {label: 'Limiting pressure', value: b.limit === null ? 'not known' : S(b.limit), note: b.limitSource ?? 'no limiting pressure for this material'},
+      {label: 'Limiting pressure', value: b.limit === undefined ? 'not known' : S(b.limit), note: b.limitSource ?? 'no limiting pressure for this material'},
     ];
-    if (b.nut !== undefined) rows.push({label: 'Pressure under the nut', value: S(b.nut), note: b.nutLimit === null || b.nutLimit === undefined ? 'limit not known' : `limit ${S(b.nutLimit)}`});
+    if (b.nut !== undefined) rows.push({label: 'Pressure under the nut', value: S(b.nut), note: b.nutLimit === undefined ? 'limit not known' : `limit ${S(b.nutLimit)}`});
     if (b.washerDiameter !== undefined) rows.push({label: 'Washer needed', value: `hardened, at least ${L(b.washerDiameter)} outside`, note: 'spreads the load to the limiting pressure'});
     groups.push({title: 'Surface pressure', rows});
   }

@@ -1,10 +1,10 @@
 /**
  * The Service section of the text and Markdown reports (issue 16): every number of
- * the service state with its method and source, its flags and notes. The lead's
- * report builders pass the result to `formatCheckText` / `formatCheckMarkdown` as an
- * extra section.
+ * the service state with its method and source, its flags and notes. formatCheckText
+ * and formatCheckMarkdown add it whenever the result has a service part.
  */
 import type {ServiceResult} from '../core/service/result.js';
+import type {Flag} from '../core/types.js';
 import type {UnitSystem} from '../core/units.js';
 import {levelWord, type Fmt, type Row} from './sections.js';
 import {serviceGroups} from './service-sections.js';
@@ -13,6 +13,12 @@ import {wrapText} from './wrap.js';
 import {cell} from './markdown.js';
 
 const LABEL = 30;
+
+/** The service state with its flags as the report shows them (in the report's units, raised by the duty): those of `shown` with a service code. */
+export function serviceShown(s: ServiceResult, shown: readonly Flag[]): ServiceResult {
+  const codes = new Set(s.flags.map(x => x.code));
+  return {...s, flags: shown.filter(x => codes.has(x.code))};
+}
 
 function rowLines(r: Row, wrap: (t: string, a: string, b: string) => string[]): string[] {
   const label = `  ${r.label}`;

@@ -13,6 +13,7 @@ import {TEXT_WIDTH, wrapText} from './wrap.js';
 import {signOffTextLines, workOrderTextLines, type WorkOrderMeta} from './work-order.js';
 import type {HoleFacts} from './sections.js';
 import {measurementsText} from './measurements.js';
+import {serviceShown, serviceText} from './service-text.js';
 
 export {TEXT_WIDTH, wrapText};
 const LABEL = 36;
@@ -126,6 +127,7 @@ export function formatCheckText(result: CheckResult, input: JointInput, opts: Te
   out.push('', 'SOURCES');
   for (const s of sourceLines(result)) out.push(...wrap(s, '  - ', '    '));
 
+  if (result.service) out.push('', light, serviceText(serviceShown(result.service, flags), f));
   for (const section of opts.extraSections ?? []) out.push('', light, section.trimEnd());
 
   out.push('', light);

@@ -71,7 +71,7 @@ export const KEYMAP = [
   {command: 'field.prev', keys: [k('up')], context: 'joint', hint: 'field', description: 'Previous field'},
   {command: 'field.next', keys: [k('down')], context: 'joint', description: 'Next field'},
   {command: 'step.prev', keys: [k('left'), k('tab', {shift: true})], context: 'joint', hint: 'step', description: 'Previous step'},
-  {command: 'step.next', keys: [k('right'), k('tab')], context: 'joint', description: 'Next step (Thread, Parts, Engagement, Tightening, Hole state)'},
+  {command: 'step.next', keys: [k('right'), k('tab')], context: 'joint', description: 'Next step (Thread, Parts, Engagement, Tightening, Service, Hole state)'},
   {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
   {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
   {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},

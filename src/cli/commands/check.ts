@@ -42,7 +42,10 @@ or usage.
 Methods: VDI 2230 Part 1 tightening; Shigley, Mechanical Engineering Design
 9th ed. section 8-2 thread stresses; spring-chain load share; FED-STD-H28/2B
 stripping at the least-material limits or the measured diameters; Alexander
-(1977) / VDI 2230 engagement.
+(1977) / VDI 2230 engagement. Service state (--clamp): Shigley 9th ed. Eqs.
+8-17 to 8-51 and Marks' Calculations for Machine Design Ch. 8 (stiffness,
+joint constant, factors, fatigue); VDI 2230 Part 1 (embedding, surface
+pressure, slip).
 
 ${CAUTION_LINES.join('\n')}
 `;

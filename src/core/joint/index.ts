@@ -20,6 +20,9 @@ import {BLIND_HOLE_INCOMPLETE_PITCHES, jointFlags, type FlagContext} from './fla
 import type {Flag} from '../types.js';
 import type {UnitSystem} from '../units.js';
 import {applyDuty} from '../duty.js';
+import {checkService} from '../service/check.js';
+import {ServiceInputSchema} from '../service/input.js';
+import type {ServiceResult} from '../service/result.js';
 
 export {JointInputSchema, FrictionRangeSchema, type JointInput, type JointInputDraft} from './input.js';
 export type {CheckResult} from './result.js';
@@ -192,8 +195,23 @@ export function checkResolved(input: JointInput, r: ResolvedJoint): CheckResult 
     notes: [...r.notes, ...g.notes],
     sources: input.measured?.overWires !== undefined ? [...SOURCES, WIRE_METHOD_SOURCE] : [...SOURCES],
   };
-  result.flags = applyDuty(jointFlags(flagContext(result, input, 'si')), input.duty);
+  const service = serviceOf(input, result, 'si');
+  if (service) result.service = service;
+  result.flags = applyDuty([...jointFlags(flagContext(result, input, 'si')), ...(service?.flags ?? [])], input.duty);
   return result;
+}
+
+/** Service inputs with every default: a joint that gives a service load but no `service` object. */
+const NO_SERVICE_INPUT = ServiceInputSchema.parse({});
+
+/**
+ * The service state (src/core/service, checkService) of a checked joint, when the input
+ * describes it (`service`) or carries a service load; undefined otherwise. Without clamped
+ * parts it says the service load is taken in full by the bolt. Flags written in `units`.
+ */
+function serviceOf(input: JointInput, result: CheckResult, units: UnitSystem): ServiceResult | undefined {
+  if (input.service === undefined && !(input.serviceLoad > 0)) return undefined;
+  return checkService(input, result, input.service ?? NO_SERVICE_INPUT, units);
 }
 
 /** The inputs of the flag rules, read from a result and its input (forces N, lengths mm). */
@@ -244,11 +262,12 @@ export function notesInUnits(result: CheckResult, input: JointInput, units: Unit
 
 /**
  * The result's flags with their messages written in `units` (US: lbf, in), for the
- * text and Markdown reports. Same codes, levels and order as result.flags, which
+ * text and Markdown reports (the service flags of result.service included, recomputed in `units`). Same codes, levels and order as result.flags, which
  * (and so the JSON) stay in SI. A result without the model-range notes (built
  * outside checkResolved) keeps its flags as they are.
  */
 export function flagsInUnits(result: CheckResult, input: JointInput, units: UnitSystem): Flag[] {
   if (units === 'si' || result.stripping.alexander.outOfRange === undefined) return result.flags;
-  return applyDuty(jointFlags(flagContext(result, input, units)), input.duty);
+  const service = result.service ? serviceOf(input, result, units) : undefined;
+  return applyDuty([...jointFlags(flagContext(result, input, units)), ...(service?.flags ?? [])], input.duty);
 }

@@ -7,6 +7,7 @@ import * as z from 'zod';
 import {DUTY_IDS} from '../duty.js';
 import {MeasuredThreadSchema} from './measured-input.js';
 import {safeText} from '../text-safety.js';
+import {ServiceInputSchema} from '../service/input.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -98,6 +99,8 @@ export const JointInputSchema = z.object({
   duty: z.enum(DUTY_IDS).default('general'),
   /** What was measured on the bolt and the hole (mm); stripping uses these where given (src/core/joint/measured.ts). */
   measured: MeasuredThreadSchema.optional(),
+  /** The joint in service (src/core/service): clamped parts, a cycling load, embedding, temperature, slip. */
+  service: ServiceInputSchema.optional(),
 });
 
 export type JointInput = z.output<typeof JointInputSchema>;

@@ -21,6 +21,7 @@ import {embeddingAmount, embeddingLoss, loadFactor, requiredClampForSlip, separa
 import {enduranceStrength, threadFatigue, vdiThreadEndurance} from './fatigue.js';
 import {bearingArea, washerDiameterFor} from './bearing.js';
 import {serviceFlags, type ServiceFlagContext} from './flags.js';
+import {finiteOnly} from './json.js';
 
 export const SERVICE_SOURCES: readonly string[] = [
   "Shigley's Mechanical Engineering Design, 9th ed. (Budynas and Nisbett): Table 8-7 (grip, thread length), Eq. 8-17 (bolt stiffness), Eq. 8-18 (members in series), Eq. 8-23 with Table 8-8 (exponential member-stiffness fit), Eqs. 8-28 to 8-30 (yield, load and separation factors), Eqs. 8-35, 8-36, 8-45, 8-51 and p. 445 (fatigue), Table 8-17 (endurance strengths)",
@@ -41,7 +42,8 @@ function loadRange(input: JointInput, s: ServiceInput): {min: number; max: numbe
 /**
  * The service state of a joint already checked by checkJoint. Without `service.clamp` the
  * service load is taken in full by the bolt (C = 1) and only the yield and load factors are
- * given. Throws JointInputError naming `clamp` for parts that cannot be resolved.
+ * given. Throws JointInputError naming `service.clamp` (or `service.boltLength`) for parts that
+ * cannot be resolved.
  */
 export function checkService(input: JointInput, result: CheckResult, service: ServiceInput, units: UnitSystem = 'si'): ServiceResult {
   const g = result.geometry;
@@ -70,13 +72,12 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
   if (!service.clamp) {
     const boltLoadMax = preload.max + load.max;
     notes.push('Service load taken in full by the bolt: no clamped parts given (--clamp), so the share the parts carry, separation, embedding and fatigue are not computed.');
-    return {
+    return finiteOnly({
       model: 'in-full',
       jointConstant: 1,
       serviceLoad: load,
       preload,
       proofLoad,
-      separationLoad: null,
       preloadRetained: {min: preload.min, max: preload.max},
       clampUnderLoad: preload.min - 0,
       embeddingLoss: 0,
@@ -84,26 +85,26 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
       embeddingSource: 'not computed without clamped parts',
       thermalChange: 0,
       boltLoadMax,
-      factors: {yield: proofLoad / boltLoadMax, load: loadFactor(sp, At, 1, load.max, preload.max), separation: null},
+      factors: {yield: proofLoad / boltLoadMax, load: loadFactor(sp, At, 1, load.max, preload.max)},
       flags: [],
       notes,
       sources: [SERVICE_SOURCES[0] as string],
-    };
+    });
   }
 
   const tapped = input.internal === 'tapped';
   const parts: ResolvedPart[] = service.clamp.map((p, i) => {
     const r = resolvePart(p, input.parentData);
-    if (typeof r === 'string') throw new JointInputError('clamp', `--clamp: entry ${i + 1}: ${r}`);
+    if (typeof r === 'string') throw new JointInputError('service.clamp', `--clamp: entry ${i + 1}: ${r}`);
     return r;
   });
   if (tapped && parts.length < 2) {
-    throw new JointInputError('clamp', '--clamp: with a tapped hole list the parts under the head and, last, the part that holds the thread (at least two entries)');
+    throw new JointInputError('service.clamp', '--clamp: with a tapped hole list the parts under the head and, last, the part that holds the thread (at least two entries)');
   }
   const grip = effectiveGrip(parts.map(p => ({thickness: p.thickness, modulus: p.modulus})), d, tapped);
   const through = tapped ? grip.grip - (grip.layers[grip.layers.length - 1]?.thickness ?? 0) : grip.grip;
   if (service.boltLength !== undefined && service.boltLength <= through) {
-    throw new JointInputError('boltLength', `--bolt-length ${service.boltLength.toFixed(1)} mm does not reach ${tapped ? 'the tapped part' : 'past the clamped parts'} (${through.toFixed(1)} mm${tapped ? ' above the tapped part' : ' of parts'}); give the bolt length under the head`);
+    throw new JointInputError('service.boltLength', `--bolt-length ${service.boltLength.toFixed(1)} mm does not reach ${tapped ? 'the tapped part' : 'past the clamped parts'} (${through.toFixed(1)} mm${tapped ? ' above the tapped part' : ' of parts'}); give the bolt length under the head`);
   }
   const kbOut = boltStiffness({d, stressArea: At, modulus: Eb, grip: grip.grip, inch, ...(service.boltLength !== undefined ? {boltLength: service.boltLength} : {}), ...(service.threadLength !== undefined ? {threadLength: service.threadLength} : {})});
   if (service.boltLength === undefined && service.threadLength !== undefined) notes.push('Thread length given without the bolt length: the bolt is taken as threaded through the grip.');
@@ -171,19 +172,19 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
   const Ap = bearingArea(dw, dh);
   const pHead = boltLoadMax / Ap;
   const last = parts[parts.length - 1] as ResolvedPart;
-  const limit = first.limitingPressure ?? null;
-  const nutLimit = !tapped ? (last.limitingPressure ?? null) : undefined;
+  const limit = first.limitingPressure;
+  const nutLimit = !tapped ? last.limitingPressure : undefined;
   const worstLimit = Math.min(limit ?? Infinity, nutLimit ?? Infinity);
   const bearingPressure: ServiceResult['bearingPressure'] = {
     head: pHead,
     limit,
     ...(first.limitingPressureSource ? {limitSource: first.limitingPressureSource.source} : {}),
-    ...(!tapped ? {nut: pHead, nutLimit: nutLimit ?? null} : {}),
+    ...(!tapped ? {nut: pHead, nutLimit} : {}),
     bearingDiameter: dw,
     holeDiameter: dh,
     ...(pHead > worstLimit ? {washerDiameter: washerDiameterFor(boltLoadMax, worstLimit, dh)} : {}),
   };
-  if (limit === null) notes.push(`Limiting surface pressure not known for ${first.name}: the head pressure is shown without a limit.`);
+  if (limit === undefined) notes.push(`Limiting surface pressure not known for ${first.name}: the head pressure is shown without a limit.`);
   notes.push('Surface pressure checked on the first part under the head' + (tapped ? '' : ' and the last part above the nut') + '; how a washer spreads the load onto the part beneath it is not computed.');
   if (!tapped) notes.push('Nut bearing face taken as the head\'s (same width across flats); the nut pressure equals the head pressure.');
 
@@ -202,15 +203,15 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
     separationFactor: factors.separation ?? Infinity,
     ...(fatigue ? {fatigue: {goodman: fatigue.goodman, alternatingStress: fatigue.alternatingStress, enduranceStrength: fatigue.enduranceStrength, vdiFactor: fatigue.vdiFactor}} : {}),
     ...(bearingPressure.washerDiameter !== undefined
-      ? {bearing: {where: limit !== null && pHead > limit ? ('head' as const) : ('nut' as const), pressure: pHead, limit: worstLimit, washer: bearingPressure.washerDiameter}}
+      ? {bearing: {where: limit !== undefined && pHead > limit ? ('head' as const) : ('nut' as const), pressure: pHead, limit: worstLimit, washer: bearingPressure.washerDiameter}}
       : {}),
-    ...(slip ? {slip: {available: slip.availableClamp, required: slip.requiredClamp, factor: slip.factor}} : {}),
+    ...(slip ? {slip: {available: slip.availableClamp, required: slip.requiredClamp, factor: slip.factor ?? Infinity}} : {}),
   };
 
-  return {
+  return finiteOnly({
     model: 'shared',
     grip: grip.grip,
-    parts: parts.map((p, i) => ({id: p.id, name: p.name, thickness: p.thickness, inGrip: grip.layers[i]?.thickness ?? 0, modulus: p.modulus, modulusSource: p.modulusSource, expansion: p.expansion ?? null})),
+    parts: parts.map((p, i) => ({id: p.id, name: p.name, thickness: p.thickness, inGrip: grip.layers[i]?.thickness ?? 0, modulus: p.modulus, modulusSource: p.modulusSource, expansion: p.expansion})),
     stiffness: {
       bolt: kb,
       members: km,
@@ -236,5 +237,5 @@ export function checkService(input: JointInput, result: CheckResult, service: Se
     flags: serviceFlags(ctx),
     notes,
     sources: [...SERVICE_SOURCES],
-  };
+  });
 }

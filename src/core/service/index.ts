@@ -9,3 +9,4 @@ export type {ServiceResult, ServicePartOut} from './result.js';
 export {clampMaterialIds, findClampMaterial, resolvePart, stiffnessMaterial} from './materials.js';
 export {serviceFlags, FATIGUE_FAIL, FATIGUE_WATCH, SLIP_WATCH} from './flags.js';
 export {parseServiceLoad, parseEmbedding} from './text-parse.js';
+export {finiteOnly} from './json.js';

@@ -14,8 +14,8 @@ export interface ServicePartOut {
   /** MPa */
   modulus: number;
   modulusSource: Provenance;
-  /** 1/K, null when unknown. */
-  expansion: number | null;
+  /** 1/K; absent when unknown. */
+  expansion?: number;
 }
 
 export interface ServiceResult {
@@ -37,8 +37,8 @@ export interface ServiceResult {
   /** Preload used, N: from the tightening range, or a fraction of the proof load. */
   preload: {min: number; nominal: number; max: number; source: string};
   proofLoad: number;
-  /** N; null without clamp input (the joint's stiffness is not known). */
-  separationLoad: number | null;
+  /** N; absent without clamp input (the joint's stiffness is not known). */
+  separationLoad?: number;
   /** Preload after embedding and at the worst temperature, before the service load, N. */
   preloadRetained: {min: number; max: number};
   /** Clamp load left under the largest service load with the minimum retained preload, N. */
@@ -49,8 +49,11 @@ export interface ServiceResult {
   thermalChange: number;
   /** Bolt load at the largest service load with the largest preload, N. */
   boltLoadMax: number;
-  /** Separation factor null without clamp input. */
-  factors: {yield: number; load: number; separation: number | null; fatigue?: number};
+  /**
+   * Load and separation factors are absent with no service load (nothing to divide by), the
+   * separation factor also without clamp input. Every value of a ServiceResult is finite (json.ts).
+   */
+  factors: {yield: number; load?: number; separation?: number; fatigue?: number};
   fatigue?: {
     alternatingStress: number;
     meanStress: number;
@@ -63,17 +66,18 @@ export interface ServiceResult {
   };
   bearingPressure?: {
     head: number;
-    /** MPa, null when the part's limiting pressure is not known. */
-    limit: number | null;
+    /** MPa; absent when the part's limiting pressure is not known. */
+    limit?: number;
     limitSource?: string;
     nut?: number;
-    nutLimit?: number | null;
+    nutLimit?: number;
     bearingDiameter: number;
     holeDiameter: number;
     /** Washer outside diameter that keeps the pressure at the limit, mm (when exceeded). */
     washerDiameter?: number;
   };
-  slip?: {transverseLoad: number; friction: number; requiredClamp: number; availableClamp: number; factor: number};
+  /** `factor` absent when no clamp load is needed (no transverse load). */
+  slip?: {transverseLoad: number; friction: number; requiredClamp: number; availableClamp: number; factor?: number};
   flags: Flag[];
   notes: string[];
   sources: string[];

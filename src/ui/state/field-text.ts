@@ -38,6 +38,7 @@ export function formatField(f: FieldDef, value: unknown, units: UnitSystem, asci
     const shown = formatField(f, d, units, ascii);
     return shown.length <= 4 ? `${shown} (default)` : `${shown} (def.)`;
   }
+  if (f.text) return f.text.format(value, units, ascii);
   switch (f.kind) {
     case 'quantity':
       return typeof value === 'number' ? formatQuantity(value, f.dimension ?? 'ratio', units, {ascii, significant: f.significant ?? 3}) : String(value);
@@ -57,6 +58,7 @@ export function formatField(f: FieldDef, value: unknown, units: UnitSystem, asci
 /** Text put in the edit buffer when editing starts (number without its unit). */
 export function editText(f: FieldDef, value: unknown, units: UnitSystem): string {
   if (value === undefined || value === null) return '';
+  if (f.text) return f.text.format(value, units, true);
   if (f.kind === 'quantity' && typeof value === 'number') return plain(toDisplay(value, f.dimension ?? 'ratio', units));
   if (f.kind === 'range' || f.kind === 'ratio' || f.kind === 'bool') return formatField(f, value, units, true);
   return String(value);
@@ -77,6 +79,12 @@ export function parseField(f: FieldDef, text: string, units: UnitSystem, ascii: 
     if (f.optional) return {ok: true, value: undefined};
     const r = rangeText(f, units, ascii);
     return {ok: false, error: `${f.label} is needed${r ? `; accepted ${r}` : ''}`};
+  }
+  if (f.text) {
+    const p = f.text.parse(t, units);
+    if (!p.ok) return {ok: false, error: `${f.label}: ${p.error}`};
+    const bad = typeof p.value === 'number' ? checkBounds(f, p.value, t, units, ascii) : undefined;
+    return bad ? {ok: false, error: bad} : p;
   }
   switch (f.kind) {
     case 'quantity': {

@@ -22,6 +22,8 @@ export const STEPS: readonly {id: StepId; title: string}[] = [
   {id: 'parts', title: 'Parts'},
   {id: 'engagement', title: 'Engagement'},
   {id: 'tightening', title: 'Tightening'},
+  // The service state (issue 16) after tightening; what was measured, then the hole state for the repair planner last.
+  {id: 'service', title: 'Service'},
   {id: 'measured', title: 'Measured'},
   {id: 'hole', title: 'Hole state'},
 ];

@@ -13,8 +13,8 @@ import {evaluate, evaluateRepairs} from '../../state/evaluate.js';
 import {shownValues, type WorkbenchState} from '../../state/workbench.js';
 
 export const SCREEN_GUIDE: readonly string[] = [
-  'Joint: the inputs in five steps on the left (Thread, Parts, Engagement,',
-  '  Tightening, Hole state); the results on the right change as you type.',
+  'Joint: the inputs in six steps on the left (Thread, Parts, Engagement,',
+  '  Tightening, Service, Hole state); the results on the right follow at once.',
   'Repairs: the fixes for a weak or stripped hole, best first. c chooses the',
   '  marked repair for the work order: the choice follows the repair (not its',
   '  row) when the list re-ranks, is saved with the preset and named on the',

@@ -10,6 +10,7 @@ import type {JointInput} from '../../../core/joint/input.js';
 import {displayUnit, formatNumber, formatQuantity, toDisplay, type Dimension, type UnitSystem} from '../../../core/units.js';
 import {useTheme, pad, fit, wrap} from '../../theme.js';
 import {engagementScale, marginGauge} from '../../components/pictures.js';
+import {serviceSummary} from '../../components/service-panel.js';
 
 interface Props {
   result?: CheckResult;
@@ -81,5 +82,8 @@ export function Readout({result, input, units, width, height, problem}: Props) {
     row('r', 'Needed', `F ${num(st.requiredEngagement.fedStd, 'length')} FED-STD, A ${num(st.requiredEngagement.alexander, 'length')} Alex. ${displayUnit('length', units, t.ascii)}`),
     row('sc', ` ${t.sym.barFull}=present`, `${scale} ${formatNumber(toDisplay(end, 'length', units), 2)}`),
   ];
+  // The deciding service numbers (the Service step shows them all): below the rest, or in place of the last line shown.
+  const service = serviceSummary(result.service, units, t.ascii);
+  if (service !== undefined) lines.splice(Math.min(lines.length, height - 1), 1, row('sv', 'Service', service));
   return <Lines lines={lines} width={width} height={height} />;
 }

@@ -19,6 +19,7 @@ import {loadShareLines} from '../../components/pictures.js';
 import {Lines, type Line} from '../../components/lines.js';
 import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
+import {ServicePanel} from '../../components/service-panel.js';
 
 interface Props {
   state: WorkbenchState;
@@ -223,6 +224,8 @@ export function JointView({state, derived, svc, width, height}: ScreenProps) {
           <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
         ) : state.mode === 'screw' ? (
           <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
+        ) : STEPS[state.step]?.id === 'service' ? (
+          <ServicePanel result={props.ev.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
         ) : (
           <Readout result={props.ev.result} input={props.ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
         )}
