@@ -6,6 +6,7 @@
  * JointInputSchema and one row here, in the order the workbench shows it.
  */
 import type {FieldRow, FormValues} from './fields-types.js';
+import {LUBRICANT_ROWS, WINDOW_ROWS} from './window-fields.js';
 
 const isNut = (v: FormValues) => v.joint.internal === 'nut';
 const isTapped = (v: FormValues) => v.joint.internal !== 'nut';
@@ -13,11 +14,12 @@ const tighten = (m: string) => (v: FormValues) => (v.joint.tightening ?? 'utilis
 const MU_RANGE = '0.02 to 0.6, or min..max';
 
 /** --help section of each joint option (see JOINT_SECTIONS). */
-export type JointSection = 'joint' | 'tightening' | 'loads';
+export type JointSection = 'joint' | 'tightening' | 'window' | 'loads';
 
 export const JOINT_SECTIONS: readonly {id: JointSection; title: string}[] = [
   {id: 'joint', title: 'The joint'},
   {id: 'tightening', title: 'Tightening (one of; default --utilisation 0.9)'},
+  {id: 'window', title: 'Tightening window (lubricant, locking element, wrench)'},
   {id: 'loads', title: 'Loads and margins'},
 ];
 
@@ -80,12 +82,13 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'preload', label: 'Target preload', step: 'tightening', kind: 'quantity', dimension: 'force', optional: false, isVisible: tighten('preload'), section: 'tightening',
     example: '25kN', cli: {name: '--preload', arg: 'F', help: 'target preload at mid friction (25kN, 5000lbf)'},
     help: 'Wanted clamp force; 20kN or 4500lbf accepted.'},
+  ...LUBRICANT_ROWS,
   {group: 'joint', key: 'muThread', label: 'Thread friction', step: 'tightening', kind: 'range', optional: true, section: 'tightening',
     cli: {name: '--mu-thread', arg: 'MU', help: 'thread friction, a value or min..max (default 0.10..0.16)', rangeText: MU_RANGE},
-    help: 'muG as one value or min..max, e.g. 0.10..0.16.'},
+    table: 'fastenerThreadFriction', help: 'muG as one value or min..max, e.g. 0.10..0.16; t: published table.'},
   {group: 'joint', key: 'muHead', label: 'Head friction', step: 'tightening', kind: 'range', optional: true, section: 'tightening',
     cli: {name: '--mu-head', arg: 'MU', help: 'under-head friction, a value or min..max (default 0.10..0.16)', rangeText: MU_RANGE},
-    help: 'muK as one value or min..max, e.g. 0.10..0.16.'},
+    table: 'fastenerHeadFriction', help: 'muK as one value or min..max, e.g. 0.10..0.16; t: published table.'},
   {group: 'joint', key: 'nutFactor', label: 'Nut factor K', empty: 'use friction', step: 'tightening', kind: 'ratio', optional: true, section: 'tightening',
     cli: {name: '--nut-factor', arg: 'K', help: 'use T = K F d instead of the friction coefficients'},
     help: 'K of T = K F d; when given it replaces the two friction values. Empty = friction.'},
@@ -98,4 +101,5 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'tightening', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
     cli: {name: '--service-load', arg: 'F', help: 'external axial load on the bolt, taken in full'},
     help: 'External axial load on the bolt in service; empty = none.'},
+  ...WINDOW_ROWS,
 ];

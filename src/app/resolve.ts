@@ -19,6 +19,7 @@ import type {UnitSystem} from '../core/units.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import {ALL_ROWS, boundsOf, fieldError, rowOf, SCHEMAS} from './field-table.js';
 import type {FieldError, FormValues, InputGroup} from './fields-types.js';
+import {lubricantSets} from './window-fields.js';
 
 /** What the resolver needs beyond the draft. */
 export interface ResolveContext {
@@ -101,6 +102,8 @@ export function resolveJointInput(draft: Partial<JointInputDraft>, ctx: ResolveC
   const ascii = ctx.ascii ?? true;
   const d: Record<string, unknown> & Partial<JointInputDraft> = {...draft};
   if (d.scatter === undefined && ctx.settings?.scatterDefault !== undefined) d.scatter = ctx.settings.scatterDefault;
+  // A lubricant pick gives the friction ranges not typed (issue 18).
+  for (const [k, v] of Object.entries(lubricantSets(d.window?.lubricant))) if (d[k] === undefined) d[k] = v;
   if (d.engagement === undefined && d.internal === 'nut') {
     const e = nutEngagement(d, units);
     if (typeof e === 'number') d.engagement = e;

@@ -13,6 +13,8 @@ import {checkJoint} from '../../core/joint/index.js';
 import {formatCheckMarkdown, formatCheckText, type WorkOrderNotes} from '../../report/index.js';
 import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
 import {JOINT_OPTIONS, UNITS_HELP, jointFromOptions, jointHelp, jointUsageError} from '../joint-options.js';
+import {outlookJson, tighteningOutlook} from '../../app/tightening.js';
+import {outlookMarkdown, outlookText} from '../../report/outlook-sections.js';
 
 const OPTIONS: OptionSpec = {...JOINT_OPTIONS, format: {type: 'string'}, json: {type: 'boolean'}, ascii: {type: 'boolean'}, preset: {type: 'string'}, ...NOTE_OPTION_SPEC};
 
@@ -67,18 +69,20 @@ export const command: Command = {
     const preset = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
     const notes = format === 'markdown' ? await workOrderNotes(values, preset?.notes) : {};
     const {input, units} = await jointFromOptions(values, io, preset?.joint);
-    let result;
+    let result, outlook;
     try {
       result = checkJoint(input);
+      outlook = tighteningOutlook(input, result);
     } catch (e) {
       throw jointUsageError(e, units);
     }
+    const fmt = {units, ascii: values.ascii === true};
     if (format === 'json') {
-      io.out(`${JSON.stringify({...result, input, units: 'si'}, null, 2)}\n`);
+      io.out(`${JSON.stringify({...result, ...outlookJson(outlook), input, units: 'si'}, null, 2)}\n`);
     } else if (format === 'markdown') {
-      io.out(formatCheckMarkdown(result, input, {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {})}));
+      io.out(formatCheckMarkdown(result, input, {date: io.now(), units, notes, extraSections: [outlookMarkdown(outlook, fmt)], ...(presetName !== undefined ? {presetName} : {})}));
     } else {
-      io.out(formatCheckText(result, input, {units, ascii: values.ascii === true}));
+      io.out(formatCheckText(result, input, {...fmt, extraSections: [outlookText(outlook, fmt)]}));
     }
     return result.flags.some(f => f.level === 'fail') ? EXIT.fail : EXIT.ok;
   },

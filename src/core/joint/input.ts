@@ -6,6 +6,7 @@
 import * as z from 'zod';
 import {DUTY_IDS} from '../duty.js';
 import {MeasuredThreadSchema} from './measured-input.js';
+import {WindowInputSchema} from './window-options.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -97,6 +98,8 @@ export const JointInputSchema = z.object({
   duty: z.enum(DUTY_IDS).default('general'),
   /** What was measured on the bolt and the hole (mm); stripping uses these where given (src/core/joint/measured.ts). */
   measured: MeasuredThreadSchema.optional(),
+  /** Tightening-window inputs: lubricant pick, locking element, prevailing torque, least clamp load, wrench accuracy (src/core/joint/window-options.ts). */
+  window: WindowInputSchema.optional(),
 });
 
 export type JointInput = z.output<typeof JointInputSchema>;
