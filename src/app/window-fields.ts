@@ -25,7 +25,7 @@ const LUBRICANT_HELP =
  * read after it replaces the pick's range; the other rows follow the friction rows.
  */
 export const LUBRICANT_ROWS: readonly JointRow[] = [
-  {group: 'joint', key: 'window.lubricant', label: 'Lubricant', empty: 'friction as typed', step: 'tightening', kind: 'pick', pick: 'fastenerLubricant', optional: true, section: 'window',
+  {group: 'joint', key: 'window.lubricant', label: 'Lubricant', empty: 'as typed', step: 'tightening', kind: 'pick', pick: 'fastenerLubricant', optional: true, section: 'window',
     sets: lubricantSets,
     cli: {
       name: '--lubricant', arg: 'ID', help: LUBRICANT_HELP,
@@ -50,7 +50,7 @@ export const WINDOW_ROWS: readonly JointRow[] = [
       },
     },
     help: 'Lock nut or patch screw; Enter opens the list. Its prevailing torque adds on the wrench.'},
-  {group: 'joint', key: 'window.prevailingTorque', label: 'Prevailing torque', empty: 'ISO 2320 or none', step: 'tightening', kind: 'quantity', dimension: 'torque', optional: true, section: 'window',
+  {group: 'joint', key: 'window.prevailingTorque', label: 'Prevailing torque', empty: 'ISO 2320/none', step: 'tightening', kind: 'quantity', dimension: 'torque', optional: true, section: 'window',
     cli: {name: '--prevailing-torque', arg: 'T', help: 'prevailing torque of the locking element (the maker\'s figure); replaces the ISO 2320 value'},
     help: 'Torque to turn the locking element with no preload; empty = ISO 2320 table value.'},
   {group: 'joint', key: 'window.leastClamp', label: 'Least clamp load', kind: 'quantity', dimension: 'force', optional: true, section: 'window',

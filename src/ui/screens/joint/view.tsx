@@ -19,6 +19,7 @@ import {loadShareLines} from '../../components/pictures.js';
 import {Lines, type Line} from '../../components/lines.js';
 import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
+import {WindowPanel} from '../../components/window-panel.js';
 
 interface Props {
   state: WorkbenchState;
@@ -148,7 +149,11 @@ function LeftColumn({state, ev, sev, svc, width, height}: Props) {
   const fields = fieldLines(state, state.mode === 'screw' && sev ? sev : ev, width, t);
   const sel = currentField(state);
   const rest = height - fields.length;
-  if (state.picker) return <Lines lines={[...fields, ...pickerLines(state, svc, width, rest, t)]} width={width} height={height} />;
+  if (state.picker) {
+    // A long step (Tightening) leaves the list too few lines for its entries and their source: show only the field being picked.
+    const shown = rest >= 6 ? fields : fields.filter((_, i) => currentFields(state)[i] === sel);
+    return <Lines lines={[...shown, ...pickerLines(state, svc, width, height - shown.length, t)]} width={width} height={height} />;
+  }
   const helpLines: Line[] = (sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : []).map(text => ({text, color: t.tone('dim')}));
   const below = rest - helpLines.length - 1;
   const shares = state.mode === 'joint' ? (ev.result?.loadShare ?? []) : [];
@@ -215,6 +220,8 @@ export function JointView({state, derived, svc, width, height}: ScreenProps) {
           <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
         ) : state.mode === 'screw' ? (
           <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
+        ) : derived.outlook ? (
+          <WindowPanel ev={derived.outlook} units={state.units} width={rightW} height={bodyH} {...(problem !== undefined ? {problem} : {})} />
         ) : (
           <Readout result={props.ev.result} input={props.ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
         )}
