@@ -106,3 +106,14 @@ describe('the window pieces of the workbench', () => {
     expect(lines[8]).toMatch(/\/ low \. high friction {2}\^ now 40\.0 N\*m/);
   });
 });
+
+describe('a locking element on a size ISO 2320 does not list', () => {
+  it('the panel says so and names the Prevailing torque field, not an option', async () => {
+    const {evaluateOutlook} = await import('../../src/ui/state/outlook.js');
+    const input = JointInputSchema.parse({thread: '1/2-13 UNC', parent: 'S355', engagement: 19, window: {locking: 'all-metal-nut'}});
+    const o = evaluateOutlook({input, result: checkJoint(input), errors: {}});
+    expect(o.outlook).toBeUndefined();
+    expect(o.error).toMatch(/ISO 2320 lists no prevailing torque/);
+    expect(o.error).toMatch(/give a Prevailing torque/);
+  });
+});

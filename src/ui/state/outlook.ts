@@ -27,7 +27,9 @@ export function evaluateOutlook(ev: Evaluation, units: UnitSystem = 'si'): Outlo
     out = {outlook: tighteningOutlook(input, result)};
   } catch (e) {
     const f = coreFieldError(e, 'joint', units);
-    out = {error: f ? labelMessage(f) : e instanceof Error ? e.message : String(e)};
+    // The core names the command-line option; the workbench names its field.
+    const msg = f ? labelMessage(f) : e instanceof Error ? e.message : String(e);
+    out = {error: msg.replace('give --prevailing-torque', 'give a Prevailing torque')};
   }
   cache.set(result, out);
   return out;
