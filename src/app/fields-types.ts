@@ -27,7 +27,9 @@ export interface FormValues {
 
 export type StepId = 'thread' | 'parts' | 'engagement' | 'tightening' | 'hole' | 'measured' | 'service' | 'screw-thread' | 'screw-nut' | 'screw-friction';
 export type FieldKind = 'quantity' | 'ratio' | 'range' | 'choice' | 'pick' | 'thread' | 'bool' | 'text';
-export type PickSource = 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction';
+export type PickSource =
+  | 'boltGrade' | 'parent' | 'nutClass' | 'screwThreadFriction' | 'screwCollarFriction'
+  | 'fastenerLubricant' | 'lockingElement' | 'fastenerThreadFriction' | 'fastenerHeadFriction';
 
 /** What a CLI option's text sets, for options whose text is more than a number or a word. */
 export type OptionReader = (
@@ -80,6 +82,8 @@ export interface FieldRow {
   pick?: PickSource;
   /** A published table whose rows can be picked for this number field (t on the field). */
   table?: PickSource;
+  /** Other inputs this one sets when chosen in the workbench (a lubricant sets both friction ranges); keys of the same group. */
+  sets?: (value: unknown) => Record<string, unknown>;
   /** May be left empty (the core then uses its default or leaves it out). */
   optional: boolean;
   /** Whole numbers only (shown without decimals). */

@@ -10,6 +10,7 @@ import type {FieldRow, FormValues, OptionReader} from './fields-types.js';
 import {UsageError} from './errors.js';
 import {MEASURED_ROWS} from './measured-fields.js';
 import {SERVICE_ROWS} from './service-fields.js';
+import {LUBRICANT_ROWS, WINDOW_ROWS} from './window-fields.js';
 
 const isNut = (v: FormValues) => v.joint.internal === 'nut';
 const isTapped = (v: FormValues) => v.joint.internal !== 'nut';
@@ -17,11 +18,12 @@ const tighten = (m: string) => (v: FormValues) => (v.joint.tightening ?? 'utilis
 const MU_RANGE = '0.02 to 0.6, or min..max';
 
 /** --help section of each joint option (see JOINT_SECTIONS). */
-export type JointSection = 'joint' | 'tightening' | 'loads' | 'measured' | 'service';
+export type JointSection = 'joint' | 'tightening' | 'window' | 'loads' | 'measured' | 'service';
 
 export const JOINT_SECTIONS: readonly {id: JointSection; title: string}[] = [
   {id: 'joint', title: 'The joint'},
   {id: 'tightening', title: 'Tightening (one of; default --utilisation 0.9)'},
+  {id: 'window', title: 'Tightening window (lubricant, locking element, wrench)'},
   {id: 'loads', title: 'Loads and margins'},
   {id: 'measured', title: 'As measured (each optional; stripping uses them in place of the class limits)'},
   {id: 'service', title: 'Service state (optional; without --clamp the service load is taken in full)'},
@@ -103,12 +105,13 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'preload', label: 'Target preload', step: 'tightening', kind: 'quantity', dimension: 'force', optional: false, isVisible: tighten('preload'), section: 'tightening',
     example: '25kN', cli: {name: '--preload', arg: 'F', help: 'target preload at mid friction (25kN, 5000lbf)'},
     help: 'Wanted clamp force; 20kN or 4500lbf accepted.'},
+  ...LUBRICANT_ROWS,
   {group: 'joint', key: 'muThread', label: 'Thread friction', step: 'tightening', kind: 'range', optional: true, section: 'tightening',
     cli: {name: '--mu-thread', arg: 'MU', help: 'thread friction, a value or min..max (default 0.10..0.16)', rangeText: MU_RANGE},
-    help: 'muG as one value or min..max, e.g. 0.10..0.16.'},
+    table: 'fastenerThreadFriction', help: 'muG as one value or min..max, e.g. 0.10..0.16; t: published table.'},
   {group: 'joint', key: 'muHead', label: 'Head friction', step: 'tightening', kind: 'range', optional: true, section: 'tightening',
     cli: {name: '--mu-head', arg: 'MU', help: 'under-head friction, a value or min..max (default 0.10..0.16)', rangeText: MU_RANGE},
-    help: 'muK as one value or min..max, e.g. 0.10..0.16.'},
+    table: 'fastenerHeadFriction', help: 'muK as one value or min..max, e.g. 0.10..0.16; t: published table.'},
   {group: 'joint', key: 'nutFactor', label: 'Nut factor K', empty: 'use friction', step: 'tightening', kind: 'ratio', optional: true, section: 'tightening',
     cli: {name: '--nut-factor', arg: 'K', help: 'use T = K F d instead of the friction coefficients'},
     help: 'K of T = K F d; when given it replaces the two friction values. Empty = friction.'},
@@ -121,6 +124,7 @@ export const JOINT_ROWS: readonly JointRow[] = [
   {group: 'joint', key: 'serviceLoad', label: 'Service load', step: 'service', kind: 'quantity', dimension: 'force', optional: true, section: 'loads',
     cli: {name: '--service-load', arg: 'F|MIN..MAX', help: 'external axial load per bolt; MIN..MAX: it cycles (fatigue). Taken in full without --clamp, shared with it', read: serviceLoadRead},
     help: 'External axial load per bolt in service (static); empty = none.'},
+  ...WINDOW_ROWS,
   ...MEASURED_ROWS,
   ...SERVICE_ROWS,
 ];

@@ -19,6 +19,7 @@ import type {UnitSystem} from '../core/units.js';
 import {withUserMaterial} from '../store/user-materials.js';
 import {ALL_ROWS, boundsOf, fieldError, rowOf, SCHEMAS} from './field-table.js';
 import type {FieldError, FormValues, InputGroup} from './fields-types.js';
+import {lubricantSets} from './window-fields.js';
 
 /** What the resolver needs beyond the draft. */
 export interface ResolveContext {
@@ -112,6 +113,8 @@ export function resolveJointInput(draft: Partial<JointInputDraft>, ctx: ResolveC
   const cyc = d.service?.serviceLoad;
   const cycMax = typeof cyc === 'number' ? cyc : cyc?.max;
   if (typeof cycMax === 'number' && !(typeof d.serviceLoad === 'number' && d.serviceLoad >= cycMax)) d.serviceLoad = cycMax;
+  // A lubricant pick gives the friction ranges not typed (issue 18).
+  for (const [k, v] of Object.entries(lubricantSets(d.window?.lubricant))) if (d[k] === undefined) d[k] = v;
   if (d.engagement === undefined && d.internal === 'nut') {
     const e = nutEngagement(d, units);
     if (typeof e === 'number') d.engagement = e;

@@ -13,13 +13,13 @@ import {INPUT_WORDS, MARGIN_WORDS, limitLines, sensitivityLines, windowRows, typ
 export function windowMarkdown(
   w: TighteningWindow,
   f: WindowFmt,
-  extra: {sensitivity?: readonly SensitivityItem[]; margin?: DecidingMargin; level?: number; picture?: boolean} = {},
+  extra: {sensitivity?: readonly SensitivityItem[]; margin?: DecidingMargin; level?: number; picture?: boolean; inputs?: readonly {label: string; value: string}[]} = {},
 ): string {
   const h = '#'.repeat(extra.level ?? 2);
   const out: string[] = [`${h} Tightening window`, ''];
   if (extra.picture !== false) out.push('```', ...windowPicture(w, 76, 10, true, f.units), '```', '');
   out.push('| | |', '|---|---|');
-  for (const r of windowRows(w, f)) out.push(`| ${cell(r.label)} | ${cell(r.value)} |`);
+  for (const r of [...windowRows(w, f), ...(extra.inputs ?? [])]) out.push(`| ${cell(r.label)} | ${cell(r.value)} |`);
   out.push('', 'Limits:', '');
   for (const l of limitLines(w, f)) out.push(`- ${l}`);
   if (w.suggestions.length > 0) {

@@ -15,11 +15,11 @@ const LABEL = 32;
 export function windowText(
   w: TighteningWindow,
   f: WindowFmt,
-  extra: {sensitivity?: readonly SensitivityItem[]; margin?: DecidingMargin; picture?: boolean} = {},
+  extra: {sensitivity?: readonly SensitivityItem[]; margin?: DecidingMargin; picture?: boolean; inputs?: readonly {label: string; value: string}[]} = {},
 ): string {
   const out: string[] = ['TIGHTENING WINDOW'];
   if (extra.picture !== false) out.push(...windowPicture(w, TEXT_WIDTH - 4, 10, f.ascii, f.units).map(l => `  ${l}`.trimEnd()));
-  for (const r of windowRows(w, f)) out.push(...wrapText(r.value, `  ${r.label}`.padEnd(LABEL), ' '.repeat(LABEL)));
+  for (const r of [...windowRows(w, f), ...(extra.inputs ?? [])]) out.push(...wrapText(r.value, `  ${r.label}`.padEnd(LABEL), ' '.repeat(LABEL)));
   out.push('  Limits:');
   for (const l of limitLines(w, f)) out.push(...wrapText(l, '  - ', '    '));
   if (w.suggestions.length > 0) {

@@ -146,9 +146,10 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   // The hint area keeps the height of the screen's own hints while a field is edited or a
   // picker or question is open, so the screen below does not move by a line (and repaint).
   const holds = new Set<HintCondition>(state.screen === 'joint' && currentField(state)?.table ? ['field-has-table'] : []);
+  if (derived.outlook?.outlook?.window.torque) holds.add('window-open');
   const hints = hintLines(contextsOf(state), t.ascii, columns, holds);
   // (counted with every conditional key shown, so moving between fields does not change it)
-  const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns, new Set<HintCondition>(['field-has-table'])).length);
+  const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns, new Set<HintCondition>(['field-has-table', 'window-open'])).length);
   while (hints.length < hintRows) hints.push('');
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
   const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;

@@ -15,7 +15,7 @@ export type Overlay = 'edit' | 'picker' | 'prompt' | 'confirm' | 'unsaved' | 'dr
 export type Context = 'any' | 'screens' | Screen | Overlay;
 
 /** Conditions the hint line can check (worked out from the state by the app). */
-export type HintCondition = 'field-has-table';
+export type HintCondition = 'field-has-table' | 'window-open';
 
 export interface KeySpec {
   name: KeyName;
@@ -75,7 +75,8 @@ export const KEYMAP = [
   {command: 'field.edit', keys: [k('enter')], context: 'joint', hint: 'edit', description: 'Edit the field; on a choice, switch to the next choice'},
   {command: 'field.type', keys: [{name: 'char', digits: true}], context: 'joint', description: 'On a number field: start typing a new value at once'},
   {command: 'field.clear', keys: [k('backspace')], context: 'joint', description: 'Empty an optional field (its default applies)'},
-  {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', hintWhen: 'field-has-table', description: 'On a friction field of the power screw: pick a row of the published friction table'},
+  {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', hintWhen: 'field-has-table', description: 'On a friction field (joint or power screw): pick a row of the published friction table'},
+  {command: 'window.middle', keys: [c('b')], context: 'joint', hint: 'band middle', hintWhen: 'window-open', description: "On the Tightening step: set the torque to the middle of the tightening window's band (tightening switches to torque)"},
   {command: 'mode.toggle', keys: [c('m')], context: 'joint', hint: 'joint/screw', description: 'Switch between a threaded joint and a power screw (lead screw and nut)'},
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},

@@ -27,6 +27,10 @@ import {openPresetStore, type Preset, type PresetStore} from '../store/presets.j
 import type {Draft, PickItem, WorkbenchServices} from './services.js';
 import {sizeRangeWords} from '../core/inch-drills.js';
 import type {FormValues, PickSource} from './state/fields.js';
+import {windowPicks} from './window-picks.js';
+import {tighteningOutlook} from '../app/tightening.js';
+import {outlookMarkdown, outlookText} from '../report/outlook-sections.js';
+import type {CheckResult} from '../core/joint/result.js';
 
 export function presetValues(p: Preset): FormValues {
   const v = {joint: structuredClone(p.joint ?? {thread: 'M10', engagement: 10}), hole: structuredClone(p.repair ?? {})} as FormValues;
@@ -43,7 +47,19 @@ const sizeText = (r: {sizeMinMm?: number; sizeMaxMm?: number}, units: UnitSystem
   return w === '' ? '' : `${w}: `;
 };
 
+/** The tightening window and sensitivity list as a report section (none when the outlook cannot be computed). */
+function outlookSection(format: 'text' | 'markdown', result: CheckResult, input: JointInput, units: UnitSystem): string[] {
+  try {
+    const o = tighteningOutlook(input, result);
+    return [format === 'text' ? outlookText(o, {units, ascii: false}) : outlookMarkdown(o, {units, ascii: false})];
+  } catch {
+    return [];
+  }
+}
+
 function picks(source: PickSource, units: UnitSystem): PickItem[] {
+  const windowItems = windowPicks(source);
+  if (windowItems) return windowItems;
   const s = (v: number) => formatQuantity(v, 'stress', units, {significant: 3});
   const group = <T extends {id: string; name: string; provenance: PickItem['provenance']}>(rows: T[], detail: (r: T) => string): PickItem[] => {
     const ids = [...new Set(rows.map(r => r.id))];
@@ -200,12 +216,12 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       if (format === 'text') {
         const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [wrapText(rep.chosenNote, '', '  ').join('\n')] : [])] : [];
-        return formatCheckText(result, input, {units: meta.units, extraSections: extra, presetName: meta.presetName, date: meta.date, ...(notes ? {notes} : {})});
+        return formatCheckText(result, input, {units: meta.units, extraSections: [...outlookSection('text', result, input, meta.units), ...extra], presetName: meta.presetName, date: meta.date, ...(notes ? {notes} : {})});
       }
       const extra = rep
         ? [['## Repair plan', '', ...(rep.chosenNote ? [`**${rep.chosenNote}**`, ''] : []), ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
         : [];
-      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: extra, ...(notes ? {notes} : {})});
+      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: [...outlookSection('markdown', result, input, meta.units), ...extra], ...(notes ? {notes} : {})});
     },
     screwReport(format, result, input, meta) {
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;

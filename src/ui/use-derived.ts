@@ -13,6 +13,8 @@ import {shownValues, type WorkbenchState} from './state/workbench.js';
 import {reportText} from './screens/report/reducer.js';
 import {withLabels} from './labels.js';
 import type {Derived} from './screens/types.js';
+import {evaluateOutlook} from './state/outlook.js';
+import {stepsFor} from './state/fields.js';
 
 /** An evaluation with its messages in the form's words (no internal input names). */
 function labelled<E extends {errors: Record<string, string>; error?: string}>(e: E): E {
@@ -39,5 +41,7 @@ export function useDerived(state: WorkbenchState, svc: WorkbenchServices): Deriv
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [screen, values, prompt, rs.format, preset.name, mode, units, ev, svc],
   );
-  return {ev, ...(sev ? {sev} : {}), flags, ...(rep ? {rep} : {}), ...(report ? {report} : {})};
+  const onTightening = mode === 'joint' && screen === 'joint' && stepsFor(mode)[state.step]?.id === 'tightening';
+  const outlook = useMemo(() => (onTightening ? evaluateOutlook(ev, units) : undefined), [onTightening, ev, units]);
+  return {ev, ...(sev ? {sev} : {}), flags, ...(rep ? {rep} : {}), ...(report ? {report} : {}), ...(outlook ? {outlook} : {})};
 }

@@ -16,6 +16,7 @@ import {parseOptions} from '../../src/cli/args.js';
 import {command as check} from '../../src/cli/commands/check.js';
 import {JOINT_OPTIONS, jointDraftFromOptions} from '../../src/cli/joint-options.js';
 import {JOINT_ROWS} from '../../src/app/joint-fields.js';
+import {outlookJson, tighteningOutlook} from '../../src/app/tightening.js';
 import {evaluate, evaluateScrew} from '../../src/ui/state/evaluate.js';
 import {presetValues, realServices} from '../../src/ui/real-services.js';
 import {shippedPresets} from '../../src/store/shipped.js';
@@ -80,11 +81,13 @@ async function same(dir: string, s: Setup, draft: Partial<JointInputDraft>, args
     return;
   }
   expect(ev.errors, `${JSON.stringify(args)} -> ${JSON.stringify(ev)}`).toEqual({});
-  const {input, units: _u, cautions: _c, ...result} = cli.json!;
+  const {input, units: _u, cautions: _c, window, sensitivity, decidingMargin, ...result} = cli.json!;
   expect(JSON.parse(JSON.stringify(ev.input))).toEqual(input);
   // The workbench shows the hole-state flags (the core's holeStateFlags) before the check's, as check --preset reports them.
   const shown = ev.result ? {...ev.result, flags: [...holeStateFlags(hole), ...ev.result.flags]} : ev.result;
   expect(JSON.parse(JSON.stringify(shown))).toEqual(result);
+  // The tightening window and the sensitivity list (issue 18) from the workbench's joint.
+  expect(JSON.parse(JSON.stringify(outlookJson(tighteningOutlook(ev.input!, ev.result!))))).toEqual({window, sensitivity, decidingMargin});
   expect(evUnits.input).toEqual(ev.input);
 }
 

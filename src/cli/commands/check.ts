@@ -15,6 +15,8 @@ import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.
 import {holeReport, type ChosenRepair} from './check-hole.js';
 import type {RepairInputDraft} from '../../core/repair/input.js';
 import {JOINT_OPTIONS, UNITS_HELP, jointFromOptions, jointHelp, jointUsageError} from '../joint-options.js';
+import {outlookJson, tighteningOutlook} from '../../app/tightening.js';
+import {outlookMarkdown, outlookText} from '../../report/outlook-sections.js';
 
 const OPTIONS: OptionSpec = {...JOINT_OPTIONS, format: {type: 'string'}, json: {type: 'boolean'}, ascii: {type: 'boolean'}, preset: {type: 'string'}, ...NOTE_OPTION_SPEC};
 
@@ -72,23 +74,25 @@ export const command: Command = {
     const preset = presetName !== undefined ? await loadPreset(presetName, io) : undefined;
     const notes = format === 'json' ? {} : await workOrderNotes(values, preset?.notes);
     const {input, units} = await jointFromOptions(values, io, preset?.joint);
-    let result;
+    let result, outlook;
     try {
       result = checkJoint(input);
+      outlook = tighteningOutlook(input, result);
     } catch (e) {
       throw jointUsageError(e, units);
     }
     // The preset's hole state: the core's hole-state flag first (as the workbench shows it), the plan for a stripped hole.
     const ascii = values.ascii === true;
+    const fmt = {units, ascii};
     const hole = await holeReport(preset?.repair, preset?.chosen, input, format === 'json' ? 'si' : units, io, ascii);
     if (hole) result = {...result, flags: [...hole.flags, ...result.flags]};
     const meta = {date: io.now(), units, notes, ...(presetName !== undefined ? {presetName} : {}), ...(hole ? {hole: hole.hole} : {})};
     if (format === 'json') {
-      io.out(`${JSON.stringify({...result, input, units: 'si', cautions: CAUTION_LINES}, null, 2)}\n`);
+      io.out(`${JSON.stringify({...result, ...outlookJson(outlook), input, units: 'si', cautions: CAUTION_LINES}, null, 2)}\n`);
     } else if (format === 'markdown') {
-      io.out(formatCheckMarkdown(result, input, {...meta, ...(hole?.markdown ? {extraSections: [hole.markdown]} : {})}));
+      io.out(formatCheckMarkdown(result, input, {...meta, extraSections: [outlookMarkdown(outlook, fmt), ...(hole?.markdown ? [hole.markdown] : [])]}));
     } else {
-      io.out(formatCheckText(result, input, {...meta, ascii, ...(hole?.text ? {extraSections: [hole.text]} : {})}));
+      io.out(formatCheckText(result, input, {...meta, ascii, extraSections: [outlookText(outlook, fmt), ...(hole?.text ? [hole.text] : [])]}));
     }
     return result.flags.some(f => f.level === 'fail') ? EXIT.fail : EXIT.ok;
   },

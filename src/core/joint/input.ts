@@ -8,6 +8,7 @@ import {DUTY_IDS} from '../duty.js';
 import {MeasuredThreadSchema} from './measured-input.js';
 import {safeText} from '../text-safety.js';
 import {ServiceInputSchema} from '../service/input.js';
+import {WindowInputSchema} from './window-options.js';
 
 /** A friction coefficient given as one value (min = max) or a min..max range. */
 export const FrictionRangeSchema = z
@@ -101,6 +102,8 @@ export const JointInputSchema = z.object({
   measured: MeasuredThreadSchema.optional(),
   /** The joint in service (src/core/service): clamped parts, a cycling load, embedding, temperature, slip. */
   service: ServiceInputSchema.optional(),
+  /** Tightening-window inputs: lubricant pick, locking element, prevailing torque, least clamp load, wrench accuracy (src/core/joint/window-options.ts). */
+  window: WindowInputSchema.optional(),
 });
 
 export type JointInput = z.output<typeof JointInputSchema>;

@@ -82,6 +82,9 @@ export interface TighteningWindow {
  */
 export const DEFAULT_FLOOR_FRACTION = 0.4;
 
+/** Relative inset of the band's ends (rounding only: 1e-9 of the torque). */
+const EDGE = 1e-9;
+
 const SOURCES: Record<WindowLimitName, string> = {
   'yield-utilisation': 'VDI 2230 Part 1, permissible assembly preload FM,zul at the utilisation limit',
   stripping: 'FED-STD-H28/2B shear areas at the least-material limits; stripping force / required margin, less the service load',
@@ -110,11 +113,13 @@ export function tighteningWindow(input: JointInput, result: CheckResult, opts: W
 
   // JSON carries no NaN or Infinity: a torque that cannot be reached is shown as 0 (and the window is empty).
   const finite = (x: number): number => (Number.isFinite(x) ? Math.max(0, x) : 0);
-  const upper = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'upper', preload, torque: finite(preload / a), source: SOURCES[name]});
-  const lower = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'lower', preload, torque: finite(preload / b), source: SOURCES[name]});
+  // Each end is pulled into the band by one part in 10^9 (EDGE), so a check run at the printed end
+  // torque, with its own last-digit rounding, lands inside the limit and raises no flag.
+  const upper = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'upper', preload, torque: finite((preload / a) * (1 - EDGE)), source: SOURCES[name]});
+  const lower = (name: WindowLimitName, preload: number): WindowLimit => ({name, kind: 'lower', preload, torque: finite((preload / b) * (1 + EDGE)), source: SOURCES[name]});
 
   const limits: WindowLimit[] = [
-    {...upper('yield-utilisation', Number.isFinite(yieldPreload) ? yieldPreload : 0), torque: finite(yieldTorque)},
+    {...upper('yield-utilisation', Number.isFinite(yieldPreload) ? yieldPreload : 0), torque: finite(yieldTorque * (1 - EDGE))},
     upper('stripping', weakerForce / input.requiredMargin - input.serviceLoad),
     upper('bolt-break', st.boltBreakForce - input.serviceLoad),
   ];

@@ -49,7 +49,7 @@ export function windowPicture(w: TighteningWindow, width: number, height: number
   const W = Math.max(20, Math.floor(width));
   const H = Math.max(5, Math.floor(height));
   const s = ascii ? ASCII : UNICODE;
-  const legendRows = H >= 8 ? 2 : 1;
+  const legendRows = H >= 9 && W < 60 ? 3 : H >= 8 ? 2 : 1;
   const plotH = H - 1 - legendRows;
   const plotW = W - 3; // y axis on the left, a space and the limit letter on the right
   const byName = (n: WindowLimitName) => w.limits.find(l => l.name === n);
@@ -107,8 +107,12 @@ export function windowPicture(w: TighteningWindow, width: number, height: number
     : `no band: ${LIMIT_WORD[w.lowerLimit]} ${LIMIT_LETTER[w.lowerLimit]} is above ${LIMIT_WORD[w.upperLimit]} ${LIMIT_LETTER[w.upperLimit]}`;
   const line1 = [band, `${s.marker} now ${tq(w.present.torque)}`, `to ${tq(xEnd)}, ${fq(yEnd)}`];
   const names = [...new Set(shown.map(l => l.name))].map(n => `${LIMIT_LETTER[n]} ${LIMIT_WORD[n]}`);
-  const line2 = ['/ low friction', '. high friction', ...names, ...(letters.includes('*') ? ['* two limits'] : [])];
-  if (legendRows === 2) {
+  const key = ['/ low friction', '. high friction'];
+  const line2 = [...(legendRows === 3 ? [] : key), ...names, ...(letters.includes('*') ? [legendRows === 3 ? '* 2 limits' : '* two limits'] : [])];
+  if (legendRows === 3) {
+    // Three rows (a narrow panel): the limits on their own row, the friction key and the marker below.
+    out.push(joinFit([band, `to ${tq(xEnd)}, ${fq(yEnd)}`], W), joinFit(line2, W), joinFit(['/ low . high friction', `${s.marker} now ${tq(w.present.torque)}`], W));
+  } else if (legendRows === 2) {
     out.push(joinFit(line1, W), joinFit(line2, W));
   } else {
     out.push(joinFit(line1, W));

@@ -2,6 +2,7 @@
 import type {Flag} from '../../core/types.js';
 import type {WorkbenchServices} from '../services.js';
 import type {Evaluation, RepairEvaluation, ScrewEvaluation} from '../state/evaluate.js';
+import type {OutlookEvaluation} from '../state/outlook.js';
 import type {WorkbenchState} from '../state/workbench.js';
 
 /** Computed once per change of the values (use-derived.ts), never inside a view. */
@@ -14,6 +15,8 @@ export interface Derived {
   flags: Flag[];
   /** The ranked repairs, on the screens that show them. */
   rep?: RepairEvaluation;
+  /** The tightening window and sensitivity list, on the joint screen's Tightening step. */
+  outlook?: OutlookEvaluation;
   /** The report text (or why there is none), on the report screen. */
   report?: {text?: string; why?: string};
 }

@@ -4,6 +4,8 @@ import type {Handler} from '../../state/effects.js';
 import {fieldById, setValue} from '../../state/fields.js';
 import {currentField, fail, info, pickerItems} from '../../state/workbench.js';
 import {saveOpen} from '../../state/save-commands.js';
+import {setChosen} from '../../state/chosen.js';
+import {bandMiddle} from '../../state/band-middle.js';
 import {clearField, commitEdit, moveField, moveStep, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
 
 const joint = {
@@ -24,6 +26,7 @@ const joint = {
     const f = currentField(s);
     return f ? startTablePick(s, f, svc) : s;
   },
+  'window.middle': (s, _ev, svc) => bandMiddle(s, svc),
   'mode.toggle': (s, _ev, svc) => toggleMode(s, svc),
   'panel.flags': s => ({...s, showFlags: !s.showFlags}),
   'preset.save': s => saveOpen(s),
@@ -70,7 +73,7 @@ const picker = {
     const marked = p.index >= 0 ? items[p.index] : undefined;
     const value = marked ? (marked.item?.value ?? marked.value) : p.filter.trim();
     if (value === undefined || value === '') return {...s, message: fail(`${field.label}: nothing matches "${p.filter}"; Backspace to widen, Esc to keep the old value`)};
-    return {...s, values: setValue(s.values, field.id, value), picker: undefined, preview: undefined, message: undefined};
+    return {...s, values: setChosen(s.values, field.id, value), picker: undefined, preview: undefined, message: undefined};
   },
   'pick.cancel': s => ({...s, picker: undefined, preview: undefined, message: info('Kept the old value')}),
 } satisfies Record<CommandsOf<'picker'>, Handler>;

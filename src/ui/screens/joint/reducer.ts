@@ -8,6 +8,7 @@ import {holeStateFlags} from '../../../core/joint/hole-flags.js';
 import type {WorkbenchServices} from '../../services.js';
 import {FIELDS, fieldBounds, fieldById, getValue, setValue, stepsFor, type FieldDef, type Mode, type StepId} from '../../state/fields.js';
 import {editText, parseField} from '../../state/field-text.js';
+import {setChosen} from '../../state/chosen.js';
 import {currentFields, fail, info, pickerItems, shownValues, type Values, type WorkbenchState} from '../../state/workbench.js';
 
 export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
@@ -17,7 +18,7 @@ export function withPickerPreview(s: WorkbenchState, svc: WorkbenchServices): Wo
   const marked = s.picker.index >= 0 ? items[s.picker.index] : undefined;
   const chosen = marked ? (marked.item?.value ?? marked.value) : f.kind === 'thread' ? s.picker.filter.trim() : undefined;
   if (chosen === undefined || chosen === '') return {...s, preview: undefined};
-  return {...s, preview: setValue(s.values, f.id, chosen)};
+  return {...s, preview: setChosen(s.values, f.id, chosen)};
 }
 
 export function withEditPreview(s: WorkbenchState): WorkbenchState {

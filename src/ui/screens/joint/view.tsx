@@ -20,6 +20,7 @@ import {Lines, type Line} from '../../components/lines.js';
 import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
 import {ServicePanel} from '../../components/service-panel.js';
+import {WindowPanel} from '../../components/window-panel.js';
 
 interface Props {
   state: WorkbenchState;
@@ -157,7 +158,11 @@ function LeftColumn({state, ev, sev, svc, width, height}: Props) {
   const fields = fieldLines(state, state.mode === 'screw' && sev ? sev : ev, width, t);
   const sel = currentField(state);
   const rest = height - fields.length;
-  if (state.picker) return <Lines lines={[...fields, ...pickerLines(state, svc, width, rest, t)]} width={width} height={height} />;
+  if (state.picker) {
+    // A long step (Tightening) leaves the list too few lines for its entries and their source: show only the field being picked.
+    const shown = rest >= 6 ? fields : fields.filter((_, i) => currentFields(state)[i] === sel);
+    return <Lines lines={[...shown, ...pickerLines(state, svc, width, height - shown.length, t)]} width={width} height={height} />;
+  }
   const helpLines: Line[] = (sel ? wrap(sel.help, width, rest >= 7 ? 3 : 2, t.sym.ellipsis) : []).map(text => ({text, color: t.tone('dim')}));
   const below = rest - helpLines.length - 1;
   const shares = state.mode === 'joint' ? (ev.result?.loadShare ?? []) : [];
@@ -226,6 +231,8 @@ export function JointView({state, derived, svc, width, height}: ScreenProps) {
           <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
         ) : STEPS[state.step]?.id === 'service' ? (
           <ServicePanel result={props.ev.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
+        ) : derived.outlook ? (
+          <WindowPanel ev={derived.outlook} units={state.units} width={rightW} height={bodyH} {...(problem !== undefined ? {problem} : {})} />
         ) : (
           <Readout result={props.ev.result} input={props.ev.input} units={state.units} width={rightW} height={bodyH} problem={problem} />
         )}
