@@ -12,9 +12,9 @@ import {contextsOf, currentField, isDirty, shownValues, snapshot, type Screen, t
 import {handleKeys} from './run-effects.js';
 import {useDerived} from './use-derived.js';
 import type {WorkbenchServices} from './services.js';
-import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
+import {ThemeProvider, fit, pad, useTheme, type Theme} from './theme.js';
 import {Lines} from './components/lines.js';
-import {ScreenGuard} from './components/screen-guard.js';
+import {ScreenGuard, TooSmall} from './components/screen-guard.js';
 import {SCREENS, screenRow} from './screens/registry.js';
 import {withLabels} from './labels.js';
 
@@ -72,9 +72,9 @@ const PresetLine = React.memo(function PresetLine({presetName, readOnly, dirty, 
   );
 });
 
-const Caution = React.memo(function Caution({columns}: {columns: number}) {
+const Caution = React.memo(function Caution({columns, screen}: {columns: number; screen: Screen}) {
   const t = useTheme();
-  return <Lines lines={cautionLines(columns).map(text => ({text, color: t.tone('watch')}))} width={columns} />;
+  return <Lines lines={cautionLines(columns, screen).map(text => ({text, color: t.tone('watch')}))} width={columns} />;
 });
 
 function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Record<string, string>; error?: string}; width: number}) {
@@ -151,7 +151,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns, new Set<HintCondition>(['field-has-table'])).length);
   while (hints.length < hintRows) hints.push('');
   const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
-  const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;
+  const bodyH = bodyHeight({columns, rows}, state.screen) - (hintRows - 1) - promptError;
   const {View} = screenRow(state.screen);
   const body = <View state={state} derived={derived} svc={svc} width={columns} height={bodyH} />;
   return (
@@ -162,7 +162,7 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
         <ScreenGuard resetKey={`${state.screen}.${state.mode}.${state.units}.${snapshot(shownValues(state))}`}>{body}</ScreenGuard>
       </Box>
       <MessageLine state={state} ev={state.screen === 'joint' && derived.sev ? derived.sev : derived.ev} width={columns} />
-      <Caution columns={columns} />
+      <Caution columns={columns} screen={state.screen} />
       <Lines lines={hints.map(text => ({text, color: t.tone('dim')}))} width={columns} />
     </Box>
   );
@@ -198,11 +198,7 @@ export function App({initial, svc, theme, onState, onQuit}: AppProps) {
   return (
     <ThemeProvider theme={theme}>
       {small ? (
-        <Box flexDirection="column">
-          {wrap(`Terminal is ${columns}x${rows}; tapwright needs at least ${MIN_COLUMNS}x${MIN_ROWS}. Enlarge it, or press q to quit.`, Math.max(10, columns - 1), Math.max(1, rows - 1), '').map((l, i) => (
-            <Text key={i}>{l}</Text>
-          ))}
-        </Box>
+        <TooSmall columns={columns} rows={rows} minColumns={MIN_COLUMNS} minRows={MIN_ROWS} />
       ) : (
         <Frame state={state} svc={svc} columns={columns} rows={rows} />
       )}

@@ -71,7 +71,7 @@ export function defaultReportPath(s: WorkbenchState, svc: WorkbenchServices): st
 
 /** Scroll the preview by d lines, within the report as drawn. */
 export function scrollReport(s: WorkbenchState, svc: WorkbenchServices, d: number): WorkbenchState {
-  const rows = bodyHeight(s.size) - 1;
+  const rows = bodyHeight(s.size, 'report') - 1;
   const lines = wrapLines((reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii)).text ?? '').split('\n'), s.size.columns);
   return {...s, report: {...s.report, scroll: Math.max(0, Math.min(s.report.scroll + d, lines.length - rows))}};
 }
@@ -79,7 +79,7 @@ export function scrollReport(s: WorkbenchState, svc: WorkbenchServices, d: numbe
 /** n: the work-order notes, with the preview scrolled to its work-order section. */
 export function openNotes(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   return startNotes(s, md => {
-    const rows = bodyHeight(md.size) - 1;
+    const rows = bodyHeight(md.size, 'report') - 1;
     const lines = wrapLines((reportText(md, svc, evaluate(md.values, svc, md.units, md.ascii)).text ?? '').split('\n'), md.size.columns);
     const at = lines.findIndex(l => /^#+ *work order/i.test(l));
     return Math.max(0, Math.min(at - 1, lines.length - rows));
