@@ -78,6 +78,8 @@ export const KEYMAP = [
   {command: 'field.table', keys: [c('t')], context: 'joint', hint: 'table', hintWhen: 'field-has-table', description: 'On a friction field of the power screw: pick a row of the published friction table'},
   {command: 'mode.toggle', keys: [c('m')], context: 'joint', hint: 'joint/screw', description: 'Switch between a threaded joint and a power screw (lead screw and nut)'},
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
+  {command: 'flags.pageUp', keys: [k('pageup')], context: 'joint', description: 'In the full flag view (f): scroll the flags up a page'},
+  {command: 'flags.pageDown', keys: [k('pagedown'), c(' ')], context: 'joint', description: 'In the full flag view (f): scroll the flags down a page (every flag can be read whole)'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},
 
   {command: 'edit.commit', keys: [k('enter')], context: 'edit', hint: 'keep', description: 'Keep the typed value'},
@@ -122,6 +124,8 @@ export const KEYMAP = [
   {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'mark', description: 'Previous repair'},
   {command: 'list.down', keys: [k('down')], context: 'repairs', description: 'Next repair'},
   {command: 'repair.choose', keys: [c('c')], context: 'repairs', hint: 'choose', description: 'Choose the marked repair for the work order (kept with the preset and named on the report); c on the chosen one clears the choice'},
+  {command: 'detail.pageUp', keys: [k('pageup')], context: 'repairs', hint: 'detail', description: 'Scroll the detail of the marked repair up a page'},
+  {command: 'detail.pageDown', keys: [k('pagedown'), c(' ')], context: 'repairs', description: 'Scroll the detail of the marked repair down a page (every line of it can be read)'},
   {command: 'repair.hole', keys: [k('enter')], context: 'repairs', hint: 'hole state', description: 'Edit the hole state (joint screen, Hole state step)'},
   {command: 'screen.back', keys: [k('escape')], context: 'repairs', description: 'Back to the joint screen'},
 
@@ -222,7 +226,7 @@ export function hintLines(contexts: readonly Context[], ascii: boolean, width: n
 /** Commands whose key is shown together with another's on the hint line (↑↓ field). */
 function pairOf(command: string): string | undefined {
   const pairs: Record<string, string> = {
-    'field.prev': 'field.next', 'step.prev': 'step.next', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down',
+    'field.prev': 'field.next', 'step.prev': 'step.next', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down', 'detail.pageUp': 'detail.pageDown', 'flags.pageUp': 'flags.pageDown',
   };
   return pairs[command];
 }

@@ -96,6 +96,10 @@ export interface WorkbenchState {
   report: {format: 'text' | 'markdown'; scroll: number};
   helpScroll: number;
   repairIndex: number;
+  /** The first line of the marked repair's detail on the Repairs screen (PgUp/PgDn). */
+  repairDetailScroll: number;
+  /** The first line of the full flag view (f) on the joint screen (PgUp/PgDn). */
+  flagScroll: number;
   draftOffer?: Draft;
   size: {columns: number; rows: number};
   quit?: 'quit' | 'interrupt';
@@ -133,6 +137,8 @@ export function initialState(opts: {
     report: {format: 'markdown', scroll: 0},
     helpScroll: 0,
     repairIndex: 0,
+    repairDetailScroll: 0,
+    flagScroll: 0,
     draftOffer: opts.draft,
     message: opts.message,
     size: opts.size ?? {columns: 80, rows: 24},

@@ -4,6 +4,7 @@ import type {Handler} from '../../state/effects.js';
 import {fieldById, setValue} from '../../state/fields.js';
 import {currentField, fail, info, pickerItems} from '../../state/workbench.js';
 import {saveOpen} from '../../state/save-commands.js';
+import {scrollFlags} from './flag-scroll.js';
 import {clearField, commitEdit, moveField, moveStep, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
 
 const joint = {
@@ -25,7 +26,9 @@ const joint = {
     return f ? startTablePick(s, f, svc) : s;
   },
   'mode.toggle': (s, _ev, svc) => toggleMode(s, svc),
-  'panel.flags': s => ({...s, showFlags: !s.showFlags}),
+  'panel.flags': s => ({...s, showFlags: !s.showFlags, flagScroll: 0}),
+  'flags.pageUp': (s, _ev, svc) => scrollFlags(s, svc, -1),
+  'flags.pageDown': (s, _ev, svc) => scrollFlags(s, svc, 1),
   'preset.save': s => saveOpen(s),
 } satisfies Record<CommandsOf<'joint'>, Handler>;
 
