@@ -101,3 +101,19 @@ describe('the Repairs detail', () => {
     app.unmount();
   });
 });
+
+describe('a long message', () => {
+  it('an import error wraps over lines instead of ending in "..."', async () => {
+    const svc = fixtureServices();
+    const long = 'cannot import /some/long/folder/name/presets-export.json: the file is a preset export of a later version of tapwright with keys this version does not know, so nothing was imported; the end of the message';
+    svc.presets.importFile = () => {
+      throw new Error(long);
+    };
+    const app = startApp({svc});
+    await app.press(['p', 'i'], 'Import');
+    await app.press(['x', KEY.enter], 'the end of the message');
+    expect(flat(app.frame())).toContain(flat(long));
+    expect(app.frame().split('\n').length).toBeLessThanOrEqual(23);
+    app.unmount();
+  });
+});

@@ -42,7 +42,9 @@ export function FlagsPanel({flags, width, height, scroll}: {flags: Flag[]; width
   const rows = flagPanelRows(height);
   const top = clampFlagScroll(scroll, body.length, rows);
   const end = Math.min(body.length, top + rows);
-  const where = body.length > rows ? ` lines ${top + 1}-${end} of ${body.length}, ${end < body.length ? 'PgDn more' : 'PgUp back'}` : '';
-  const title: Line = {text: fit(`All flags (${flags.length});${where}; f back`, width, t.sym.ellipsis), bold: true};
+  const title: Line = {
+    text: fit(body.length > rows ? `All flags (${flags.length}): ${top + 1}-${end} of ${body.length} lines, ${end < body.length ? 'PgDn more' : 'PgUp back'}` : `All flags (${flags.length}); f back to results`, width, t.sym.ellipsis),
+    bold: true,
+  };
   return <Lines lines={[title, ...body.slice(top, end)]} width={width} height={height} />;
 }
