@@ -86,11 +86,17 @@ function messageOf(state: WorkbenchState, ev: {errors: Record<string, string>; e
   let isError = false;
   if (state.prompt) {
     // A long text shows its end, where the cursor is; the title stays.
+    // The text wraps whole over up to MESSAGE_LINES lines (a full path can be read);
+    // longer, the last line shows its end, where the cursor is.
+    const all = Array.from(`${state.prompt.title}: ${state.prompt.buffer}${t.sym.cursor}`);
+    const lines: string[] = [];
+    for (let i = 0; i < all.length; i += width) lines.push(all.slice(i, i + width).join(''));
+    if (lines.length <= MESSAGE_LINES) return {lines, isError: false};
     const head = `${state.prompt.title}: `;
     const room = Math.max(8, width - Array.from(head).length);
     const tail = Array.from(`${state.prompt.buffer}${t.sym.cursor}`);
     const cut = Array.from(t.sym.ellipsis).length;
-    return {lines: [`${head}${tail.length > room ? `${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}` : tail.join('')}`], isError: false};
+    return {lines: [`${head}${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}`], isError: false};
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
   } else if (state.unsaved) {

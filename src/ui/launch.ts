@@ -101,7 +101,10 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     stdout.rows = Number(io.env.LINES) || 24;
   }
   const units = opts.units ?? saved.units ?? 'si';
-  const initial = initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}});
+  const initial = {
+    ...initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}}),
+    ...(saved.lastReportDir ? {reportDir: saved.lastReportDir} : {}),
+  };
   const theme = makeTheme(wantsColor(tenv, opts.color), ascii);
 
   let latest: WorkbenchState = initial;
@@ -193,7 +196,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   }
   try {
     settings ??= await openHandle();
-    settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64)});
+    settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64), ...(latest.reportDir ? {lastReportDir: latest.reportDir.slice(0, 1024)} : {})});
   } catch {
     // Settings are a convenience.
   }

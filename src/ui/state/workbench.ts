@@ -96,6 +96,8 @@ export interface WorkbenchState {
   report: {format: 'text' | 'markdown'; scroll: number};
   helpScroll: number;
   repairIndex: number;
+  /** The folder of the last report written (kept in the settings): the report path prompt starts there. */
+  reportDir?: string;
   /** The first line of the marked repair's detail on the Repairs screen (PgUp/PgDn). */
   repairDetailScroll: number;
   /** The first line of the full flag view (f) on the joint screen (PgUp/PgDn). */

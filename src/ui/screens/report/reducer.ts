@@ -61,12 +61,21 @@ export function reportText(s: WorkbenchState, svc: WorkbenchServices, ev: {input
 export function writeReport(s: WorkbenchState, svc: WorkbenchServices, path: string, overwrite: boolean): WorkbenchState | Step {
   const r = reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii));
   if (!r.text) return {...s, message: fail(r.why ?? 'No report')};
-  return withEffects(s, {type: 'writeReport', path, text: r.text, format: s.report.format, overwrite});
+  // "~" and "~/" expanded and a relative path made full, so every message names the real file.
+  const full = svc.resolvePath ? svc.resolvePath(path) : path;
+  return withEffects(s, {type: 'writeReport', path: full, text: r.text, format: s.report.format, overwrite});
 }
 
+/**
+ * The path the report prompt offers: the folder of the last report written (kept in
+ * the settings), else the current folder, in full; then a file name of the preset and date.
+ */
 export function defaultReportPath(s: WorkbenchState, svc: WorkbenchServices): string {
   const d = svc.now().toISOString().slice(0, 10);
-  return `tapwright-${slug(s.preset.name)}-${d}.${s.report.format === 'markdown' ? 'md' : 'txt'}`;
+  const name = `tapwright-${slug(s.preset.name)}-${d}.${s.report.format === 'markdown' ? 'md' : 'txt'}`;
+  const dir = s.reportDir ?? svc.cwd;
+  if (!dir) return name;
+  return `${dir.replace(/[\\/]+$/, '')}/${name}`;
 }
 
 /** Scroll the preview by d lines, within the report as drawn. */
