@@ -17,6 +17,7 @@ import {Lines} from './components/lines.js';
 import {ScreenGuard, TooSmall} from './components/screen-guard.js';
 import {SCREENS, screenRow} from './screens/registry.js';
 import {withLabels} from './labels.js';
+import {NEW_JOINT} from './screens/presets/reducer.js';
 
 
 /** Terminal size that follows resizes; 0 or missing sizes fall back to 80x24. */
@@ -101,7 +102,8 @@ function messageOf(state: WorkbenchState, ev: {errors: Record<string, string>; e
     text = `${state.confirm.question} (y/n)`;
   } else if (state.unsaved) {
     // The open preset's name is on the line above, with its "unsaved changes" mark.
-    text = `Unsaved edits: s save, d discard, Esc cancel; then "${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
+    const then = state.unsaved.target === NEW_JOINT ? 'a new blank joint opens' : `"${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
+    text = `Unsaved edits: s save, d discard, Esc cancel; then ${then}`;
   } else if (state.draftOffer) {
     text = `Restore the unsaved edits from ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')}? y/n (preset ${state.draftOffer.presetName})`;
   } else if (state.edit?.error) {

@@ -80,6 +80,7 @@ export const KEYMAP = [
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
   {command: 'flags.pageUp', keys: [k('pageup')], context: 'joint', description: 'In the full flag view (f): scroll the flags up a page'},
   {command: 'flags.pageDown', keys: [k('pagedown'), c(' ')], context: 'joint', description: 'In the full flag view (f): scroll the flags down a page (every flag can be read whole)'},
+  {command: 'preset.new', keys: [c('N')], context: 'joint', description: 'Start a new blank joint (asks first about unsaved edits, as loading a preset does)'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},
 
   {command: 'edit.commit', keys: [k('enter')], context: 'edit', hint: 'keep', description: 'Keep the typed value'},
@@ -102,6 +103,7 @@ export const KEYMAP = [
   {command: 'list.down', keys: [k('down')], context: 'presets', description: 'Next preset'},
   {command: 'preset.load', keys: [k('enter')], context: 'presets', hint: 'load', description: 'Load the marked preset into the joint screen'},
   {command: 'preset.search', keys: [c('/')], context: 'presets', hint: 'search', description: 'Search presets by name or notes'},
+  {command: 'preset.new', keys: [c('N')], context: 'presets', hint: 'new', description: 'Start a new blank joint (asks first about unsaved edits, as loading a preset does)'},
   {command: 'preset.save', keys: [c('s')], context: 'presets', hint: 'save', description: 'Save the joint into the current preset'},
   {command: 'preset.saveAs', keys: [c('a')], context: 'presets', hint: 'save as', description: 'Save the joint under a new name'},
   {command: 'preset.rename', keys: [c('n')], context: 'presets', hint: 'rename', description: 'Rename the marked preset'},

@@ -88,7 +88,7 @@ export interface WorkbenchState {
   ascii: boolean;
   showFlags: boolean;
   /** The open preset; `kind` is what it was saved as (a joint preset stays a joint preset). */
-  preset: {name: string; readOnly: boolean; saved: string; kind?: Mode};
+  preset: {name: string; readOnly: boolean; saved: string; kind?: Mode; /** A new blank joint not saved yet: s asks for a name. */ unnamed?: boolean};
   /** Loading another preset while the open one has unsaved edits: save, discard or cancel. */
   unsaved?: {target: string};
   message?: Message;

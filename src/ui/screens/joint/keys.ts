@@ -5,6 +5,7 @@ import {fieldById, setValue} from '../../state/fields.js';
 import {currentField, fail, info, pickerItems} from '../../state/workbench.js';
 import {saveOpen} from '../../state/save-commands.js';
 import {scrollFlags} from './flag-scroll.js';
+import {newJoint} from '../presets/reducer.js';
 import {clearField, commitEdit, moveField, moveStep, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
 
 const joint = {
@@ -30,6 +31,7 @@ const joint = {
   'flags.pageUp': (s, _ev, svc) => scrollFlags(s, svc, -1),
   'flags.pageDown': (s, _ev, svc) => scrollFlags(s, svc, 1),
   'preset.save': s => saveOpen(s),
+  'preset.new': s => newJoint(s),
 } satisfies Record<CommandsOf<'joint'>, Handler>;
 
 const typed = (s: Parameters<Handler>[0], buffer: string) => withEditPreview({...s, edit: {...s.edit!, buffer}});
