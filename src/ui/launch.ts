@@ -17,6 +17,7 @@ import {yogaReady} from './terminal/yoga-ready.js';
 import {configDir} from '../store/paths.js';
 import {readSettingsFile} from '../store/settings-schema.js';
 import {realServices} from './real-services.js';
+import {openingPreset} from './opening-preset.js';
 import {App} from './app.js';
 import {initialState, isDirty, type Message, type WorkbenchState} from './state/workbench.js';
 import {makeTheme} from './theme.js';
@@ -73,7 +74,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   let values: FormValues;
   let mode: 'joint' | 'screw' = 'joint';
   try {
-    const p = svc.presets.load(presetName);
+    const p = openingPreset(svc.presets, opts.preset, saved.lastPreset);
     ({name, readOnly, values} = p);
     if (p.kind === 'screw') mode = 'screw';
   } catch (e) {

@@ -61,3 +61,15 @@ describe('report preview of another preset', () => {
     app.unmount();
   });
 });
+
+describe('the preset the workbench opens on', () => {
+  it('is the last preset used (settings lastPreset), unless --preset names one; a gone one falls back to the default', async () => {
+    const {openingPreset} = await import('../../src/ui/opening-preset.js');
+    const svc = withSaved();
+    expect(openingPreset(svc.presets, undefined, 'pump casing', 'demo-fixture').name).toBe('pump casing');
+    expect(openingPreset(svc.presets, 'gear cover', 'pump casing', 'demo-fixture').name).toBe('gear cover');
+    expect(openingPreset(svc.presets, undefined, 'deleted since', 'demo-fixture').name).toBe('demo-fixture');
+    expect(openingPreset(svc.presets, undefined, undefined, 'demo-fixture').name).toBe('demo-fixture');
+    expect(() => openingPreset(svc.presets, 'no such', undefined, 'demo-fixture')).toThrow(/no preset named "no such"/);
+  });
+});
