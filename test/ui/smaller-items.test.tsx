@@ -73,3 +73,19 @@ describe('the preset the workbench opens on', () => {
     expect(() => openingPreset(svc.presets, 'no such', undefined, 'demo-fixture')).toThrow(/no preset named "no such"/);
   });
 });
+
+describe('"Stripped to depth" takes "all", as the CLI option does', () => {
+  it('all: the whole engaged length (the field empties, as --stripped-depth all leaves the depth out)', async () => {
+    const app = startApp();
+    await app.see('Designation');
+    await app.press(KEY.left, '> Hole');
+    await app.press(KEY.enter, /Hole\s+stripped/);
+    await app.press(KEY.down, '> Stripped to depth');
+    await app.press(['3', KEY.enter], /Stripped to depth\s+3\.00 mm/);
+    await app.press([KEY.enter, KEY.ctrlU, ...'all', KEY.enter], /Stripped to depth\s+all\s/);
+    expect(app.frame()).not.toMatch(/! /);
+    expect(app.states.at(-1)!.values.hole.holeState).toBe('stripped');
+    expect((app.states.at(-1)!.values.hole as {strippedDepth?: number}).strippedDepth).toBeUndefined();
+    app.unmount();
+  });
+});

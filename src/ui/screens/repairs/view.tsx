@@ -24,7 +24,7 @@ function holeSummary(state: WorkbenchState, t: Theme): string {
   const h = shownValues(state).hole;
   const len = (id: string) => formatField(fieldById(id), (h as Record<string, unknown>)[id.slice(5)], state.units, t.ascii);
   const parts = [
-    h.holeState !== 'stripped' ? 'hole intact' : h.strippedDepth !== undefined ? `stripped to ${len('hole.strippedDepth')}` : 'stripped (depth not given)',
+    h.holeState !== 'stripped' ? 'hole intact' : h.strippedDepth !== undefined ? `stripped to ${len('hole.strippedDepth')}` : 'stripped along the whole engagement',
     h.through ? 'through' : 'blind',
     h.depthAvailable !== undefined ? `depth ${len('hole.depthAvailable')}` : 'depth not given',
     h.wall !== undefined ? `wall ${len('hole.wall')}` : 'wall not given',
