@@ -211,7 +211,11 @@ export function hintLines(contexts: readonly Context[], ascii: boolean, width: n
       seen.add(b.command);
       const same = table.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
       const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);
-      parts.push(`${keys.map(s => keyLabel(s, ascii)).join(ascii ? '/' : '')} ${b.hint}`);
+      // In ASCII the arrow pairs are written short (Up/Dn, Lt/Rt) so the hints keep to one line at 80 columns.
+      const short: Partial<Record<KeyName, string>> = {down: 'Dn', left: 'Lt', right: 'Rt'};
+      const labels = keys.map(s => (ascii && keys.length > 1 && short[s.name] ? short[s.name]! : keyLabel(s, ascii)));
+      // Arrows sit together (↑↓); named keys are kept apart (PgUp/PgDn).
+      parts.push(`${labels.join(ascii || labels.some(l => Array.from(l).length > 1) ? '/' : '')} ${b.hint}`);
     }
   }
   const lines: string[] = [''];
