@@ -89,3 +89,14 @@ describe('"Stripped to depth" takes "all", as the CLI option does', () => {
     app.unmount();
   });
 });
+
+describe('typed units', () => {
+  it('in US units a length field takes "1/2" (inches) and a torque field "20 ft lbs"', async () => {
+    const app = startApp({state: {units: 'us'}});
+    await app.see('Designation');
+    await app.press([KEY.right, KEY.right], '> Engaged length');
+    await app.press([KEY.enter, KEY.ctrlU, ...'1/2', KEY.enter], /Engaged length\s+0\.500 in/);
+    expect(app.states.at(-1)!.values.joint.engagement).toBeCloseTo(12.7, 9);
+    app.unmount();
+  });
+});
