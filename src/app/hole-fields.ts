@@ -15,11 +15,11 @@ type HoleRow = FieldRow & {group: 'hole'};
 export const HOLE_ROWS: readonly HoleRow[] = [
   {group: 'hole', key: 'holeState', label: 'Hole', step: 'hole', kind: 'choice', choices: ['intact', 'stripped'], optional: false,
     help: 'State of the tapped hole, for the repair planner. Enter switches.'},
-  {group: 'hole', key: 'strippedDepth', label: 'Stripped to depth', empty: 'not given', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
+  {group: 'hole', key: 'strippedDepth', label: 'Stripped to depth', empty: 'all', step: 'hole', kind: 'quantity', dimension: 'length', optional: true,
     isVisible: v => v.hole.holeState === 'stripped',
     cli: {name: '--stripped-depth', arg: 'L', read: strippedDepth, rangeSuffix: ', or "all"',
       help: 'stripped from the surface to L, good thread below it; "all": the whole engaged length is gone'},
-    help: 'Thread is gone from the surface to this depth; good thread below.'},
+    help: 'Thread gone from the surface to this depth; good thread below. "all" or empty: all of it.'},
   {group: 'hole', key: 'through', label: 'Through hole', step: 'hole', kind: 'bool', optional: false,
     cli: {name: '--through', flag: true, help: 'the hole goes through the part (a nut can be fitted)'},
     help: 'yes = a nut can go on the far side. Enter switches.'},

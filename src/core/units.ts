@@ -44,8 +44,8 @@ const UNITS: Record<Dimension, UnitDef[]> = {
     {factor: 1, names: ['nm', 'n·m', 'n.m', 'n-m', 'n*m'], label: 'Nm'},
     {factor: 0.001, names: ['nmm', 'n·mm', 'n.mm', 'n-mm', 'n*mm'], label: 'Nmm'},
     {factor: 1000, names: ['knm', 'kn·m', 'kn.m', 'kn-m'], label: 'kNm'},
-    {factor: LBF_N * IN_MM * 12 / 1000, names: ['ft-lbf', 'ftlbf', 'ft-lb', 'ftlb', 'lbf-ft', 'lbfft', 'lb-ft', 'lbft', 'ft·lbf', 'lbf·ft']},
-    {factor: LBF_N * IN_MM / 1000, names: ['in-lbf', 'inlbf', 'in-lb', 'inlb', 'lbf-in', 'lbfin', 'lb-in', 'lbin', 'in·lbf', 'lbf·in']},
+    {factor: LBF_N * IN_MM * 12 / 1000, names: ['ft-lbf', 'ftlbf', 'ft-lb', 'ftlb', 'ft-lbs', 'ftlbs', 'lbf-ft', 'lbfft', 'lb-ft', 'lbft', 'lbs-ft', 'lbsft', 'ft·lbf', 'lbf·ft']},
+    {factor: LBF_N * IN_MM / 1000, names: ['in-lbf', 'inlbf', 'in-lb', 'inlb', 'in-lbs', 'inlbs', 'lbf-in', 'lbfin', 'lb-in', 'lbin', 'lbs-in', 'lbsin', 'in·lbf', 'lbf·in']},
   ],
   stress: [
     {factor: 1, names: ['mpa', 'n/mm2', 'n/mm^2', 'n/mm²'], label: 'MPa'},

@@ -15,6 +15,8 @@ export const SettingsSchema = z.object({
   ascii: z.boolean().default(false),
   /** The preset the workbench had open last. */
   lastPreset: safeText(z.string().min(1).max(64)).optional(),
+  /** The folder of the last report the workbench wrote: the report path prompt starts there. */
+  lastReportDir: safeText(z.string().min(1).max(1024)).optional(),
   /** Default tightening-method scatter factor alphaA (1 = friction range only). */
   scatterDefault: z.number().min(1).max(4).default(1),
 });
@@ -25,6 +27,7 @@ export const FIELD_RULE: Record<keyof Settings, string> = {
   ascii: 'true or false',
   lastPreset: 'a preset name of 1 to 64 characters',
   scatterDefault: 'a number from 1 to 4',
+  lastReportDir: 'a folder path of 1 to 1024 characters',
 };
 
 export const DEFAULT_SETTINGS: Settings = SettingsSchema.parse({});

@@ -14,9 +14,10 @@ import {useDerived} from './use-derived.js';
 import type {WorkbenchServices} from './services.js';
 import {ThemeProvider, fit, pad, useTheme, wrap, type Theme} from './theme.js';
 import {Lines} from './components/lines.js';
-import {ScreenGuard} from './components/screen-guard.js';
+import {ScreenGuard, TooSmall} from './components/screen-guard.js';
 import {SCREENS, screenRow} from './screens/registry.js';
 import {withLabels} from './labels.js';
+import {NEW_JOINT} from './screens/presets/reducer.js';
 
 
 /** Terminal size that follows resizes; 0 or missing sizes fall back to 80x24. */
@@ -72,29 +73,37 @@ const PresetLine = React.memo(function PresetLine({presetName, readOnly, dirty, 
   );
 });
 
-const Caution = React.memo(function Caution({columns}: {columns: number}) {
+const Caution = React.memo(function Caution({columns, screen}: {columns: number; screen: Screen}) {
   const t = useTheme();
-  return <Lines lines={cautionLines(columns).map(text => ({text, color: t.tone('watch')}))} width={columns} />;
+  return <Lines lines={cautionLines(columns, screen).map(text => ({text, color: t.tone('watch')}))} width={columns} />;
 });
 
-function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Record<string, string>; error?: string}; width: number}) {
-  const t = useTheme();
-  // A prompt or question keeps its line; an error about it goes on the line above.
-  const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? state.message.text : undefined;
+/** A long message wraps over at most this many lines (the screen above gives them up while it shows). */
+const MESSAGE_LINES = 4;
+
+/** The message line's text and tone: a prompt, a question, an error or a note. */
+function messageOf(state: WorkbenchState, ev: {errors: Record<string, string>; error?: string}, width: number, t: Theme): {lines: string[]; isError: boolean} {
   let text = '';
   let isError = false;
   if (state.prompt) {
     // A long text shows its end, where the cursor is; the title stays.
+    // The text wraps whole over up to MESSAGE_LINES lines (a full path can be read);
+    // longer, the last line shows its end, where the cursor is.
+    const all = Array.from(`${state.prompt.title}: ${state.prompt.buffer}${t.sym.cursor}`);
+    const lines: string[] = [];
+    for (let i = 0; i < all.length; i += width) lines.push(all.slice(i, i + width).join(''));
+    if (lines.length <= MESSAGE_LINES) return {lines, isError: false};
     const head = `${state.prompt.title}: `;
     const room = Math.max(8, width - Array.from(head).length);
     const tail = Array.from(`${state.prompt.buffer}${t.sym.cursor}`);
     const cut = Array.from(t.sym.ellipsis).length;
-    text = `${head}${tail.length > room ? `${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}` : tail.join('')}`;
+    return {lines: [`${head}${t.sym.ellipsis}${tail.slice(tail.length - room + cut).join('')}`], isError: false};
   } else if (state.confirm) {
     text = `${state.confirm.question} (y/n)`;
   } else if (state.unsaved) {
     // The open preset's name is on the line above, with its "unsaved changes" mark.
-    text = `Unsaved edits: s save, d discard, Esc cancel; then "${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
+    const then = state.unsaved.target === NEW_JOINT ? 'a new blank joint opens' : `"${fit(state.unsaved.target, 28, t.sym.ellipsis)}" loads`;
+    text = `Unsaved edits: s save, d discard, Esc cancel; then ${then}`;
   } else if (state.draftOffer) {
     text = `Restore the unsaved edits from ${state.draftOffer.savedAt.slice(0, 16).replace('T', ' ')}? y/n (preset ${state.draftOffer.presetName})`;
   } else if (state.edit?.error) {
@@ -113,15 +122,39 @@ function MessageLine({state, ev, width}: {state: WorkbenchState; ev: {errors: Re
       isError = true;
     }
   }
+  const full = `${isError ? '! ' : ''}${withLabels(text)}`;
+  // A message wraps whole (up to MESSAGE_LINES lines), never cut at the first line.
+  const lines = wrap(full, width, MESSAGE_LINES, t.sym.ellipsis);
+  return {lines: lines.length ? lines : [' '], isError};
+}
+
+/** The error about an open prompt or question, on the lines above it, wrapped whole. */
+function promptErrorLines(state: WorkbenchState, width: number, t: Theme): string[] {
+  const text = (state.prompt || state.confirm) && state.message?.level === 'error' ? state.message.text : undefined;
+  return text === undefined ? [] : wrap(`! ${withLabels(text)}`, width, MESSAGE_LINES, t.sym.ellipsis);
+}
+
+function MessageLine({state, message, width}: {state: WorkbenchState; message: {lines: string[]; isError: boolean}; width: number}) {
+  const t = useTheme();
+  // A prompt or question keeps its line; an error about it goes on the line above.
+  const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? state.message.text : undefined;
   const line = (
-    <Text color={isError ? t.tone('fail') : state.prompt || state.confirm || state.unsaved || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.unsaved || state.draftOffer)}>
-      {fit(`${isError ? '! ' : ''}${withLabels(text)}`, width, t.sym.ellipsis) || ' '}
-    </Text>
+    <Box flexDirection="column">
+      {message.lines.map((l, i) => (
+        <Text key={i} color={message.isError ? t.tone('fail') : state.prompt || state.confirm || state.unsaved || state.draftOffer ? t.tone('info') : undefined} bold={Boolean(state.confirm || state.unsaved || state.draftOffer)}>
+          {l || ' '}
+        </Text>
+      ))}
+    </Box>
   );
   if (!promptError) return line;
   return (
     <Box flexDirection="column">
-      <Text color={t.tone('fail')}>{fit(`! ${promptError}`, width, t.sym.ellipsis)}</Text>
+      {promptErrorLines(state, width, t).map((l, i) => (
+        <Text key={`e${i}`} color={t.tone('fail')}>
+          {l}
+        </Text>
+      ))}
       {line}
     </Box>
   );
@@ -151,8 +184,9 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
   // (counted with every conditional key shown, so moving between fields does not change it)
   const hintRows = Math.max(hints.length, hintLines([state.screen, 'screens', 'any'], t.ascii, columns, new Set<HintCondition>(['field-has-table', 'window-open'])).length);
   while (hints.length < hintRows) hints.push('');
-  const promptError = (state.prompt || state.confirm) && state.message?.level === 'error' ? 1 : 0;
-  const bodyH = bodyHeight({columns, rows}) - (hintRows - 1) - promptError;
+  const promptError = promptErrorLines(state, columns, t).length;
+  const message = messageOf(state, state.screen === 'joint' && derived.sev ? derived.sev : derived.ev, columns, t);
+  const bodyH = bodyHeight({columns, rows}, state.screen) - (hintRows - 1) - promptError - (message.lines.length - 1);
   const {View} = screenRow(state.screen);
   const body = <View state={state} derived={derived} svc={svc} width={columns} height={bodyH} />;
   return (
@@ -162,8 +196,8 @@ function Frame({state, svc, columns, rows}: {state: WorkbenchState; svc: Workben
       <Box height={bodyH} width={columns} overflow="hidden">
         <ScreenGuard resetKey={`${state.screen}.${state.mode}.${state.units}.${snapshot(shownValues(state))}`}>{body}</ScreenGuard>
       </Box>
-      <MessageLine state={state} ev={state.screen === 'joint' && derived.sev ? derived.sev : derived.ev} width={columns} />
-      <Caution columns={columns} />
+      <MessageLine state={state} message={message} width={columns} />
+      <Caution columns={columns} screen={state.screen} />
       <Lines lines={hints.map(text => ({text, color: t.tone('dim')}))} width={columns} />
     </Box>
   );
@@ -199,11 +233,7 @@ export function App({initial, svc, theme, onState, onQuit}: AppProps) {
   return (
     <ThemeProvider theme={theme}>
       {small ? (
-        <Box flexDirection="column">
-          {wrap(`Terminal is ${columns}x${rows}; tapwright needs at least ${MIN_COLUMNS}x${MIN_ROWS}. Enlarge it, or press q to quit.`, Math.max(10, columns - 1), Math.max(1, rows - 1), '').map((l, i) => (
-            <Text key={i}>{l}</Text>
-          ))}
-        </Box>
+        <TooSmall columns={columns} rows={rows} minColumns={MIN_COLUMNS} minRows={MIN_ROWS} />
       ) : (
         <Frame state={state} svc={svc} columns={columns} rows={rows} />
       )}

@@ -79,6 +79,9 @@ export const KEYMAP = [
   {command: 'window.middle', keys: [c('b')], context: 'joint', hint: 'band middle', hintWhen: 'window-open', description: "On the Tightening step: set the torque to the middle of the tightening window's band (tightening switches to torque)"},
   {command: 'mode.toggle', keys: [c('m')], context: 'joint', hint: 'joint/screw', description: 'Switch between a threaded joint and a power screw (lead screw and nut)'},
   {command: 'panel.flags', keys: [c('f')], context: 'joint', hint: 'flags', description: 'Show all flags in full / back to the results'},
+  {command: 'flags.pageUp', keys: [k('pageup')], context: 'joint', description: 'In the full flag view (f): scroll the flags up a page'},
+  {command: 'flags.pageDown', keys: [k('pagedown'), c(' ')], context: 'joint', description: 'In the full flag view (f): scroll the flags down a page (every flag can be read whole)'},
+  {command: 'preset.new', keys: [c('N')], context: 'joint', description: 'Start a new blank joint (asks first about unsaved edits, as loading a preset does)'},
   {command: 'preset.save', keys: [c('s')], context: 'joint', hint: 'save', description: 'Save into the current preset (a shipped demo asks for a new name)'},
 
   {command: 'edit.commit', keys: [k('enter')], context: 'edit', hint: 'keep', description: 'Keep the typed value'},
@@ -101,6 +104,7 @@ export const KEYMAP = [
   {command: 'list.down', keys: [k('down')], context: 'presets', description: 'Next preset'},
   {command: 'preset.load', keys: [k('enter')], context: 'presets', hint: 'load', description: 'Load the marked preset into the joint screen'},
   {command: 'preset.search', keys: [c('/')], context: 'presets', hint: 'search', description: 'Search presets by name or notes'},
+  {command: 'preset.new', keys: [c('N')], context: 'presets', hint: 'new', description: 'Start a new blank joint (asks first about unsaved edits, as loading a preset does)'},
   {command: 'preset.save', keys: [c('s')], context: 'presets', hint: 'save', description: 'Save the joint into the current preset'},
   {command: 'preset.saveAs', keys: [c('a')], context: 'presets', hint: 'save as', description: 'Save the joint under a new name'},
   {command: 'preset.rename', keys: [c('n')], context: 'presets', hint: 'rename', description: 'Rename the marked preset'},
@@ -123,6 +127,8 @@ export const KEYMAP = [
   {command: 'list.up', keys: [k('up')], context: 'repairs', hint: 'mark', description: 'Previous repair'},
   {command: 'list.down', keys: [k('down')], context: 'repairs', description: 'Next repair'},
   {command: 'repair.choose', keys: [c('c')], context: 'repairs', hint: 'choose', description: 'Choose the marked repair for the work order (kept with the preset and named on the report); c on the chosen one clears the choice'},
+  {command: 'detail.pageUp', keys: [k('pageup')], context: 'repairs', hint: 'detail', description: 'Scroll the detail of the marked repair up a page'},
+  {command: 'detail.pageDown', keys: [k('pagedown'), c(' ')], context: 'repairs', description: 'Scroll the detail of the marked repair down a page (every line of it can be read)'},
   {command: 'repair.hole', keys: [k('enter')], context: 'repairs', hint: 'hole state', description: 'Edit the hole state (joint screen, Hole state step)'},
   {command: 'screen.back', keys: [k('escape')], context: 'repairs', description: 'Back to the joint screen'},
 
@@ -206,7 +212,11 @@ export function hintLines(contexts: readonly Context[], ascii: boolean, width: n
       seen.add(b.command);
       const same = table.filter(x => x.context === ctx && x.hint === undefined && pairOf(b.command) === x.command);
       const keys = [b.keys[0], ...same.map(x => x.keys[0])].filter((x): x is KeySpec => x !== undefined);
-      parts.push(`${keys.map(s => keyLabel(s, ascii)).join(ascii ? '/' : '')} ${b.hint}`);
+      // In ASCII the arrow pairs are written short (Up/Dn, Lt/Rt) so the hints keep to one line at 80 columns.
+      const short: Partial<Record<KeyName, string>> = {down: 'Dn', left: 'Lt', right: 'Rt'};
+      const labels = keys.map(s => (ascii && keys.length > 1 && short[s.name] ? short[s.name]! : keyLabel(s, ascii)));
+      // Arrows sit together (↑↓); named keys are kept apart (PgUp/PgDn).
+      parts.push(`${labels.join(ascii || labels.some(l => Array.from(l).length > 1) ? '/' : '')} ${b.hint}`);
     }
   }
   const lines: string[] = [''];
@@ -223,7 +233,7 @@ export function hintLines(contexts: readonly Context[], ascii: boolean, width: n
 /** Commands whose key is shown together with another's on the hint line (↑↓ field). */
 function pairOf(command: string): string | undefined {
   const pairs: Record<string, string> = {
-    'field.prev': 'field.next', 'step.prev': 'step.next', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down',
+    'field.prev': 'field.next', 'step.prev': 'step.next', 'pick.up': 'pick.down', 'list.up': 'list.down', 'scroll.up': 'scroll.down', 'detail.pageUp': 'detail.pageDown', 'flags.pageUp': 'flags.pageDown',
   };
   return pairs[command];
 }

@@ -17,6 +17,7 @@ import {yogaReady} from './terminal/yoga-ready.js';
 import {configDir} from '../store/paths.js';
 import {readSettingsFile} from '../store/settings-schema.js';
 import {realServices} from './real-services.js';
+import {openingPreset} from './opening-preset.js';
 import {App} from './app.js';
 import {initialState, isDirty, type Message, type WorkbenchState} from './state/workbench.js';
 import {makeTheme} from './theme.js';
@@ -73,7 +74,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   let values: FormValues;
   let mode: 'joint' | 'screw' = 'joint';
   try {
-    const p = svc.presets.load(presetName);
+    const p = openingPreset(svc.presets, opts.preset, saved.lastPreset);
     ({name, readOnly, values} = p);
     if (p.kind === 'screw') mode = 'screw';
   } catch (e) {
@@ -101,7 +102,10 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
     stdout.rows = Number(io.env.LINES) || 24;
   }
   const units = opts.units ?? saved.units ?? 'si';
-  const initial = initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}});
+  const initial = {
+    ...initialState({name, readOnly, values, units, ascii, draft, message, mode, size: {columns: stdout.columns, rows: stdout.rows}}),
+    ...(saved.lastReportDir ? {reportDir: saved.lastReportDir} : {}),
+  };
   const theme = makeTheme(wantsColor(tenv, opts.color), ascii);
 
   let latest: WorkbenchState = initial;
@@ -196,7 +200,7 @@ export async function launch(args: string[], io: CliIo, term: LaunchTerminal = {
   }
   try {
     settings ??= await openHandle();
-    settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64)});
+    settings?.set({units: latest.units, lastPreset: latest.preset.name.slice(0, 64), ...(latest.reportDir ? {lastReportDir: latest.reportDir.slice(0, 1024)} : {})});
   } catch {
     // Settings are a convenience.
   }

@@ -4,6 +4,7 @@
  * one writeFile for reports).
  */
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import {checkJoint} from '../core/joint/index.js';
 import type {JointInput} from '../core/joint/input.js';
@@ -112,7 +113,16 @@ function designations(query: string, limit: number): string[] {
   return out;
 }
 
+/** A typed path as a full path: "~" and "~/x" from the home folder, a relative path from `cwd`. */
+export function expandPath(typed: string, cwd: string, home: string = os.homedir()): string {
+  const p = typed.trim();
+  if (p === '~') return home;
+  if (p.startsWith('~/')) return path.join(home, p.slice(2));
+  return path.resolve(cwd, p);
+}
+
 export function realServices(opts: {configDir: string; cwd: string; now: () => Date; store?: PresetStore}): WorkbenchServices & {store: PresetStore} {
+  const resolvePath = (p: string) => expandPath(p, opts.cwd);
   const store = opts.store ?? openPresetStore(opts.configDir);
   const loaded = new Map<string, {revision: number; notes: Preset['notes']}>();
   const getPreset = (name: string): Preset => {
@@ -230,17 +240,23 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
       return format === 'markdown' ? screwMarkdown(result, input, {...m, units: meta.units}, flags) : screwText(result, meta.units, meta.presetName, m, flags);
     },
     writeFile(file, text, overwrite) {
-      const full = path.resolve(opts.cwd, file);
+      const full = resolvePath(file);
       try {
         fs.writeFileSync(full, text, {flag: overwrite ? 'w' : 'wx'});
       } catch (e) {
+        // The error keeps its code: the workbench decides by the code, never by the words.
         const code = (e as NodeJS.ErrnoException).code;
-        if (code === 'EEXIST') throw new Error(`${full} exists`);
-        if (code === 'ENOENT') throw new Error(`folder ${path.dirname(full)} does not exist`);
-        if (code === 'EACCES' || code === 'EPERM') throw new Error(`no permission to write ${full}`);
+        const coded = (message: string) => Object.assign(new Error(message), {code});
+        if (code === 'EEXIST') throw coded(`${full} exists`);
+        if (code === 'ENOENT') throw coded(`folder ${path.dirname(full)} does not exist`);
+        if (code === 'ENOTDIR') throw coded(`${path.dirname(full)} is not a folder`);
+        if (code === 'EISDIR') throw coded(`${full} is a folder; give a file name`);
+        if (code === 'EACCES' || code === 'EPERM') throw coded(`no permission to write ${full}`);
         throw e;
       }
     },
+    resolvePath,
+    cwd: opts.cwd,
     defaultPreset: DEFAULT_PRESET,
     now: opts.now,
   };

@@ -29,7 +29,8 @@ export function runEffect(e: Effect, svc: WorkbenchServices): Outcome {
   try {
     return (RUN[e.type] as (e: Effect, svc: WorkbenchServices) => Outcome)(e, svc);
   } catch (err) {
-    return {ok: false, error: errText(err)};
+    const code = (err as {code?: unknown} | null)?.code;
+    return {ok: false, error: errText(err), ...(typeof code === 'string' ? {code} : {})};
   }
 }
 

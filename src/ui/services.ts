@@ -98,8 +98,15 @@ export interface WorkbenchServices {
   report?: (format: 'text' | 'markdown', result: CheckResult, input: JointInput, meta: ReportMeta) => string;
   /** The power-screw work-order report as text or Markdown (flags in the display units); undefined: not in this build. */
   screwReport?: (format: 'text' | 'markdown', result: ScrewResult, input: ScrewInput, meta: ReportMeta) => string;
-  /** Write a file; throws when it exists and overwrite is false. */
+  /**
+   * Write a file; throws when it cannot. The error's `code` says why: 'EEXIST' (it
+   * exists and overwrite is false), 'ENOENT' (its folder does not exist), 'EACCES'.
+   */
   writeFile(path: string, text: string, overwrite: boolean): void;
+  /** A typed path as a full path: `~` and `~/` expanded, relative to the current folder. Absent: as typed. */
+  resolvePath?: (path: string) => string;
+  /** The current folder (the report prompt's default folder when no report was written yet). */
+  cwd?: string;
   /** The user's settings the joint depends on (the default scatter); absent: none. */
   settings?: () => {scatterDefault?: number};
   /** The user's own parent materials, attached to a joint whose parent names one. */

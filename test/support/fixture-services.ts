@@ -163,7 +163,7 @@ export function fixtureServices(overrides: Partial<WorkbenchServices> = {}, with
     report: (format, result, input, meta) =>
       [format === 'markdown' ? '# Joint check report' : 'JOINT CHECK REPORT', `Preset: ${meta.presetName}`, `Thread: ${input.thread}`, `Bolt break force: ${result.stripping.boltBreakForce} N`, '', ...Array.from({length: 40}, (_, i) => `line ${i + 1}`)].join('\n'),
     writeFile(path, text, overwrite) {
-      if (store.files.has(path) && !overwrite) throw new Error(`${path} exists`);
+      if (store.files.has(path) && !overwrite) throw Object.assign(new Error(`${path} exists`), {code: 'EEXIST'});
       store.files.set(path, text);
     },
     defaultPreset: 'demo-fixture',

@@ -6,6 +6,7 @@ import {FIXTURE_VALUES, fixtureServices} from '../support/fixture-services.js';
 import {checkJoint} from '../../src/core/joint/index.js';
 import {strippedHoleFlag} from '../../src/ui/screens/joint/reducer.js';
 import {initialState} from '../../src/ui/state/workbench.js';
+import {cautionLine} from '../../src/core/cautions.js';
 import {makeTheme} from '../../src/ui/theme.js';
 
 afterEach(() => cleanup());
@@ -17,7 +18,7 @@ describe('joint screen', () => {
     const lines = app.frame().split('\n');
     expect(lines.length).toBeLessThanOrEqual(23);
     expect(lines.every(l => l.length <= 80)).toBe(true);
-    expect(app.frame()).toContain('Estimates only. Follow the equipment maker, local codes and licensed');
+    expect(app.frame()).toContain(cautionLine(80));
     expect(app.frame()).toContain('q quit');
     expect(app.frame()).toContain('Preset: demo-fixture (shipped demo, read-only)  saved');
     app.unmount();

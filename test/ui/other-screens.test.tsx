@@ -45,7 +45,7 @@ describe('repairs screen', () => {
     expect(app.frame()).toMatch(/>\s*1 Longer engagement\s+OK\s+1\.90\s+1\.20\s+E2/);
     expect(app.frame()).toMatch(/2 Re-use as it is\s+SHORT/);
     expect(app.frame()).toMatch(/3 Through-bolt with a nut\s+NO/);
-    expect(app.frame()).toContain('work E2 deepen: drill and tap deeper');
+    expect(app.frame()).toContain('Effort E2 deepen: drill and tap deeper');
     await app.press([KEY.down, KEY.down], 'Through-bolt with a nut: cannot be done here: the hole is blind');
     await app.press(KEY.enter, '> Hole');
     app.unmount();

@@ -4,6 +4,7 @@
  */
 import type {JointInput} from '../joint/input.js';
 import type {CheckResult} from '../joint/result.js';
+import {flagsInUnits} from '../joint/index.js';
 import type {RepairDeps} from './context.js';
 import type {RepairInput} from './input.js';
 import type {ThreadBasics} from './helical.js';
@@ -34,10 +35,15 @@ export interface PlanContext {
 
 export type Checked = {ok: true; result: CheckResult} | {ok: false; error: string};
 
-/** Call the mechanics core; a rejection becomes a message, never an exception. */
+/**
+ * Call the mechanics core; a rejection becomes a message, never an exception.
+ * The result's flag messages are written in the plan's units (an option carries
+ * them to the screen); codes, levels and numbers stay those of the core.
+ */
 export function safeCheck(ctx: PlanContext, input: JointInput): Checked {
   try {
-    const result = ctx.deps.check(input);
+    const checked = ctx.deps.check(input);
+    const result = ctx.units === 'us' ? {...checked, flags: flagsInUnits(checked, input, 'us')} : checked;
     const m = result.margin;
     if (!Number.isFinite(m.stripping) || !Number.isFinite(m.boltBreaksFirst)) {
       return {ok: false, error: 'the mechanics core returned no finite margin'};

@@ -21,7 +21,8 @@ export type Effect =
   /** On quit: keep the unsaved edits as the draft for the next start (none to keep: clear it). */
   | {type: 'keepDraft'; draft?: Draft};
 
-export type Outcome = {ok: true; imported?: {imported: string[]; skipped: string[]}} | {ok: false; error: string};
+/** A failed outcome keeps the error's code (EEXIST, ENOENT, ...): decisions go by the code, not the words. */
+export type Outcome = {ok: true; imported?: {imported: string[]; skipped: string[]}} | {ok: false; error: string; code?: string};
 
 /** What a key handler gives back: the next state and the writes it asks for. */
 export interface Step {
@@ -47,6 +48,12 @@ export function quitWith(s: WorkbenchState, how: 'quit' | 'interrupt', svc: Work
  * reducer, so this module does not import the screens.
  */
 export type Loader = (s: WorkbenchState, svc: WorkbenchServices, name: string) => WorkbenchState;
+
+/** The folder part of a path ("/a/b/r.md" -> "/a/b"); "." for a bare file name. */
+export function folderOf(p: string): string {
+  const i = Math.max(p.lastIndexOf('/'), p.lastIndexOf('\\'));
+  return i < 0 ? '.' : i === 0 ? p.slice(0, 1) : p.slice(0, i);
+}
 
 /** The state after an effect ran (pure): its message, a question, or what follows. */
 export function settle(s: WorkbenchState, e: Effect, o: Outcome, svc: WorkbenchServices, load: Loader): Step {
@@ -79,14 +86,18 @@ export function settle(s: WorkbenchState, e: Effect, o: Outcome, svc: WorkbenchS
     }
     case 'exportPresets':
       if (o.ok) return {state: {...s, message: info(`Exported ${e.preset ? `"${e.preset}"` : 'all presets'} to ${e.path}.`)}, effects: []};
-      if (!e.overwrite && /exist/i.test(o.error)) {
+      if (!e.overwrite && (o.code === 'EEXIST' || (o.code === undefined && /\bexists\b/i.test(o.error) && !/does not exist/i.test(o.error)))) {
         return {state: {...s, confirm: {kind: 'overwriteExport', question: `${e.path} exists. Replace it?`, target: e.path, ...(e.preset ? {preset: e.preset} : {})}}, effects: []};
       }
       return {state: e.prompt ? {...s, prompt: e.prompt, message: fail(o.error)} : {...s, message: fail(o.error)}, effects: []};
-    case 'writeReport':
-      if (o.ok) return {state: {...s, message: info(`Wrote the ${e.format === 'markdown' ? 'Markdown' : 'text'} report to ${e.path}`)}, effects: []};
-      if (!e.overwrite && /exist/i.test(o.error)) return {state: {...s, confirm: {kind: 'overwriteFile', question: `${e.path} exists. Replace it?`, target: e.path}}, effects: []};
-      return {state: {...s, message: fail(`Could not write ${e.path}: ${o.error}`)}, effects: []};
+    case 'writeReport': {
+      if (o.ok) return {state: {...s, ...(/[\\/]/.test(e.path) ? {reportDir: folderOf(e.path)} : {}), message: info(`Wrote the ${e.format === 'markdown' ? 'Markdown' : 'text'} report to ${e.path}`)}, effects: []};
+      if (!e.overwrite && o.code === 'EEXIST') return {state: {...s, confirm: {kind: 'overwriteFile', question: `${e.path} exists. Replace it?`, target: e.path}}, effects: []};
+      // Anything else (the folder does not exist, no permission): said plainly, and the path can be corrected.
+      const again = {kind: 'reportPath' as const, title: 'Write the report to file', buffer: e.path};
+      const why = o.code === 'ENOENT' ? `folder ${folderOf(e.path)} does not exist; create it or type another path` : o.error;
+      return {state: {...s, prompt: again, message: fail(`Could not write ${e.path}: ${why}`)}, effects: []};
+    }
     case 'clearDraft':
       // A draft that cannot be removed is offered again next time; nothing is lost.
       return {state: s, effects: []};

@@ -72,6 +72,31 @@ function checkBounds(f: FieldDef, v: number, typed: string, units: UnitSystem, a
   return undefined;
 }
 
+/**
+ * Text that is not a number but a word the row's CLI reader takes ("all"): read
+ * through that reader, so the workbench and the CLI accept the same words.
+ */
+function ownWords(f: FieldDef, t: string, units: UnitSystem): FieldParse | undefined {
+  const read = f.row.cli?.read;
+  if (!read || /^[-+.\d]/.test(t)) return undefined;
+  try {
+    const out = read(t, {
+      option: f.row.cli?.name ?? f.label,
+      units,
+      row: f.row,
+      quantity: () => {
+        throw new Error('not a word');
+      },
+      range: () => {
+        throw new Error('not a word');
+      },
+    });
+    return Object.hasOwn(out, f.row.key) ? {ok: true, value: out[f.row.key]} : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
 /** Parse typed text for a field into a working-unit value (undefined = empty). */
 export function parseField(f: FieldDef, text: string, units: UnitSystem, ascii: boolean): FieldParse {
   const t = text.trim();
@@ -89,6 +114,9 @@ export function parseField(f: FieldDef, text: string, units: UnitSystem, ascii: 
   switch (f.kind) {
     case 'quantity': {
       const dim = f.dimension ?? 'ratio';
+      // Words the row's own reader takes (the same as its CLI option: "all" for the stripped depth).
+      const own = ownWords(f, t, units);
+      if (own) return own;
       const p = parseQuantity(t, dim, displayUnit(dim, units, false));
       if (!p.ok) return {ok: false, error: `${f.label} ${p.error}; accepted ${rangeText(f, units, ascii)}`};
       const bad = checkBounds(f, p.value, t, units, ascii);

@@ -49,7 +49,10 @@ const promptText = (change: (b: string, ch: string) => string): Handler => (s, e
   const b = s.prompt!.buffer;
   const buffer = change(b, ev.char ?? '');
   if (s.prompt!.kind === 'note') return setNoteBuffer(s, buffer);
-  return buffer.length > b.length && b.length >= 200 ? s : {...s, message: undefined, prompt: {...s.prompt!, buffer}};
+  if (buffer.length > b.length && b.length >= 200) return s;
+  // The preset search filters the list as you type.
+  const list = s.prompt!.kind === 'search' ? {presetList: {query: buffer, index: 0}} : {};
+  return {...s, ...list, message: undefined, prompt: {...s.prompt!, buffer}};
 };
 
 const prompt = {
@@ -60,7 +63,12 @@ const prompt = {
     if (text === '' && p.kind !== 'search' && p.kind !== 'note') return {...s, message: fail(`${p.title}: type a value, or Esc to cancel`)};
     return PROMPTS[p.kind](s, svc, text);
   },
-  'prompt.cancel': s => (s.prompt!.kind === 'note' ? cancelNotes(s) : {...s, prompt: undefined, message: info('Cancelled')}),
+  'prompt.cancel': s =>
+    s.prompt!.kind === 'note'
+      ? cancelNotes(s)
+      : s.prompt!.kind === 'search'
+        ? {...s, prompt: undefined, presetList: {query: s.prompt!.target ?? '', index: 0}, message: info('Search as before')}
+        : {...s, prompt: undefined, message: info('Cancelled')},
   'prompt.erase': promptText(b => Array.from(b).slice(0, -1).join('')),
   'prompt.clear': promptText(() => ''),
   'prompt.type': promptText((b, ch) => b + ch),

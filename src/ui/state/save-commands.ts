@@ -22,6 +22,7 @@ export function saveOpen(s: WorkbenchState, thenLoad?: string): WorkbenchState |
   const name = s.preset.name;
   const kind = s.preset.kind ?? 'joint';
   const then = thenLoad ? {thenLoad} : {};
+  if (s.preset.unnamed) return {...s, prompt: {kind: 'saveAs', title: 'A new joint; save it as', buffer: '', ...then}};
   if (s.preset.readOnly) return {...s, prompt: {kind: 'saveAs', title: `"${name}" is a shipped demo; save as`, buffer: `${name} copy`, ...then}};
   if (kind !== s.mode) {
     const what = s.mode === 'screw' ? 'power screw' : 'joint';

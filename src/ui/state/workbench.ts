@@ -88,7 +88,7 @@ export interface WorkbenchState {
   ascii: boolean;
   showFlags: boolean;
   /** The open preset; `kind` is what it was saved as (a joint preset stays a joint preset). */
-  preset: {name: string; readOnly: boolean; saved: string; kind?: Mode};
+  preset: {name: string; readOnly: boolean; saved: string; kind?: Mode; /** A new blank joint not saved yet: s asks for a name. */ unnamed?: boolean};
   /** Loading another preset while the open one has unsaved edits: save, discard or cancel. */
   unsaved?: {target: string};
   message?: Message;
@@ -96,6 +96,12 @@ export interface WorkbenchState {
   report: {format: 'text' | 'markdown'; scroll: number};
   helpScroll: number;
   repairIndex: number;
+  /** The folder of the last report written (kept in the settings): the report path prompt starts there. */
+  reportDir?: string;
+  /** The first line of the marked repair's detail on the Repairs screen (PgUp/PgDn). */
+  repairDetailScroll: number;
+  /** The first line of the full flag view (f) on the joint screen (PgUp/PgDn). */
+  flagScroll: number;
   draftOffer?: Draft;
   size: {columns: number; rows: number};
   quit?: 'quit' | 'interrupt';
@@ -133,6 +139,8 @@ export function initialState(opts: {
     report: {format: 'markdown', scroll: 0},
     helpScroll: 0,
     repairIndex: 0,
+    repairDetailScroll: 0,
+    flagScroll: 0,
     draftOffer: opts.draft,
     message: opts.message,
     size: opts.size ?? {columns: 80, rows: 24},

@@ -9,6 +9,7 @@ import {CONTEXT_TITLES, KEYMAP, keyLabel, type Binding, type Context} from '../.
 import type {WorkbenchServices} from '../../services.js';
 import {bodyHeight} from '../../layout.js';
 import {wrapLines} from '../../components/scroll-view.js';
+import {wrap} from '../../theme.js';
 import {evaluate, evaluateRepairs} from '../../state/evaluate.js';
 import {shownValues, type WorkbenchState} from '../../state/workbench.js';
 
@@ -34,7 +35,14 @@ export const SCREEN_GUIDE: readonly string[] = [
   '  length each method needs (FED-STD-H28, Alexander).',
 ];
 
-export function helpLines(opts: {ascii: boolean; sources: readonly string[]; rankingRule?: string}): string[] {
+/** Key column width: the longest key text of the table, so every description starts in one column. */
+const KEY_COLUMN = 18;
+
+/**
+ * The help text. With `width`, a key's description wraps under itself (a hanging
+ * indent at the description column), so the key column stays clear for every key.
+ */
+export function helpLines(opts: {ascii: boolean; sources: readonly string[]; rankingRule?: string; width?: number}): string[] {
   const lines: string[] = ['Screens', ...SCREEN_GUIDE.map(l => `  ${l.replace('SELECT', opts.ascii ? '>' : '▶')}`), ''];
   const table: readonly Binding[] = KEYMAP;
   const contexts = [...new Set(table.map(b => b.context))] as Context[];
@@ -43,7 +51,10 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
     lines.push(`  ${CONTEXT_TITLES[ctx]}`);
     for (const b of table.filter(x => x.context === ctx)) {
       const keys = b.keys.map(k => keyLabel(k, opts.ascii)).join(' / ');
-      lines.push(`    ${keys.padEnd(16)} ${b.description}`);
+      const head = `    ${keys.padEnd(KEY_COLUMN)} `;
+      const room = opts.width ? opts.width - head.length : Infinity;
+      const parts = Number.isFinite(room) && room >= 20 ? wrap(b.description, room, 1000, '') : [b.description];
+      parts.forEach((p, i) => lines.push(`${i === 0 ? head : ' '.repeat(head.length)}${p}`));
     }
   }
   lines.push('', 'Methods and their sources');
@@ -51,7 +62,7 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
   for (const s of opts.sources) lines.push(`  - ${s}`);
   lines.push('', 'Ranking of repairs');
   lines.push(`  ${opts.rankingRule ?? 'The repair planner is not available in this workbench; tapwright repair --help describes the ranking.'}`);
-  lines.push('', 'Work grades (the Work column of the Repairs screen)', ...EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`));
+  lines.push('', 'Effort grades (the Effort column of the Repairs screen)', ...EFFORT_SCALE_TEXT.split('\n').map(l => `  ${l}`));
   lines.push('', 'Cautions', ...CAUTION_LINES.map(l => `  ${l}`));
   return lines;
 }
@@ -60,7 +71,7 @@ export function helpLines(opts: {ascii: boolean; sources: readonly string[]; ran
 export function scrollHelp(s: WorkbenchState, svc: WorkbenchServices, d: number): WorkbenchState {
   const ev = evaluate(shownValues(s), svc, s.units, s.ascii);
   const rule = evaluateRepairs(shownValues(s), svc, ev, s.units).plan?.rankingRule;
-  const lines = wrapLines(helpLines({ascii: s.ascii, sources: ev.result?.sources ?? [], rankingRule: rule}), s.size.columns);
+  const lines = wrapLines(helpLines({ascii: s.ascii, sources: ev.result?.sources ?? [], rankingRule: rule, width: s.size.columns}), s.size.columns);
   const rows = bodyHeight(s.size) - 1;
   return {...s, helpScroll: Math.max(0, Math.min(s.helpScroll + d, lines.length - rows))};
 }

@@ -8,7 +8,7 @@ export function HelpView({state, derived, width, height}: ScreenProps) {
   const sources = [...(derived.ev.result?.sources ?? []), ...(derived.sev?.result?.sources ?? [])];
   return (
     <ScrollView
-      lines={helpLines({ascii: state.ascii, sources, rankingRule: derived.rep?.plan?.rankingRule})}
+      lines={helpLines({ascii: state.ascii, sources, rankingRule: derived.rep?.plan?.rankingRule, width})}
       scroll={state.helpScroll}
       width={width}
       height={height}

@@ -6,6 +6,8 @@ import {currentField, fail, info, pickerItems} from '../../state/workbench.js';
 import {saveOpen} from '../../state/save-commands.js';
 import {setChosen} from '../../state/chosen.js';
 import {bandMiddle} from '../../state/band-middle.js';
+import {scrollFlags} from './flag-scroll.js';
+import {newJoint} from '../presets/reducer.js';
 import {clearField, commitEdit, moveField, moveStep, startEdit, startTablePick, toggleMode, withEditPreview, withPickerPreview} from './reducer.js';
 
 const joint = {
@@ -28,8 +30,11 @@ const joint = {
   },
   'window.middle': (s, _ev, svc) => bandMiddle(s, svc),
   'mode.toggle': (s, _ev, svc) => toggleMode(s, svc),
-  'panel.flags': s => ({...s, showFlags: !s.showFlags}),
+  'panel.flags': s => ({...s, showFlags: !s.showFlags, flagScroll: 0}),
+  'flags.pageUp': (s, _ev, svc) => scrollFlags(s, svc, -1),
+  'flags.pageDown': (s, _ev, svc) => scrollFlags(s, svc, 1),
   'preset.save': s => saveOpen(s),
+  'preset.new': s => newJoint(s),
 } satisfies Record<CommandsOf<'joint'>, Handler>;
 
 const typed = (s: Parameters<Handler>[0], buffer: string) => withEditPreview({...s, edit: {...s.edit!, buffer}});

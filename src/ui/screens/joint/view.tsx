@@ -21,6 +21,8 @@ import type {ScreenProps} from '../types.js';
 import {Readout} from './readout.js';
 import {ServicePanel} from '../../components/service-panel.js';
 import {WindowPanel} from '../../components/window-panel.js';
+import {FlagsPanel, sortedFlags} from '../../components/flags-panel.js';
+import {levelWord} from '../../../report/sections.js';
 
 interface Props {
   state: WorkbenchState;
@@ -35,12 +37,8 @@ interface Props {
 /** Square inches per square millimetre, from the core's inch. */
 const IN2_PER_MM2 = 1 / (CONVERSION.IN_MM * CONVERSION.IN_MM);
 
-const LEVEL_WORD: Record<Flag['level'], string> = {fail: 'FAIL', watch: 'WATCH', info: 'NOTE'};
-const LEVEL_ORDER: Record<Flag['level'], number> = {fail: 0, watch: 1, info: 2};
-
-export function sortedFlags(flags: readonly Flag[]): Flag[] {
-  return [...flags].sort((a, b) => LEVEL_ORDER[a.level] - LEVEL_ORDER[b.level]);
-}
+const LEVEL_WORD: Record<Flag['level'], string> = {fail: levelWord('fail'), watch: levelWord('watch'), info: levelWord('info')};
+export {sortedFlags};
 
 /** The "<- -> steps" hint when it fits whole beside the tabs (and the power-screw label). */
 function stepHint(state: WorkbenchState, width: number, t: Theme): string {
@@ -176,16 +174,6 @@ function LeftColumn({state, ev, sev, svc, width, height}: Props) {
 
 const levelTone = (t: Theme, level: Flag['level']) => (level === 'fail' ? t.tone('fail') : level === 'watch' ? t.tone('watch') : undefined);
 
-function FlagsPanel({flags, width, height}: {flags: Flag[]; width: number; height: number}) {
-  const t = useTheme();
-  const lines: Line[] = [{text: `All flags (${flags.length}); f back to results`, bold: true}];
-  if (flags.length === 0) lines.push('No flags: nothing to watch in this joint.');
-  for (const f of sortedFlags(flags)) {
-    wrap(`${LEVEL_WORD[f.level]} ${f.code}: ${f.message}`, width - 2, 5, t.sym.ellipsis).forEach((l, i) => lines.push({text: i ? `  ${l}` : l, color: levelTone(t, f.level)}));
-  }
-  return <Lines lines={lines} width={width} height={height} />;
-}
-
 function FlagSummary({ev, width, lines: rows, what}: {ev: {result?: {flags: Flag[]}}; width: number; lines: number; what: string}) {
   const t = useTheme();
   const flags = sortedFlags(ev.result?.flags ?? []);
@@ -226,7 +214,7 @@ export function JointView({state, derived, svc, width, height}: ScreenProps) {
         <LeftColumn {...props} width={leftW} height={bodyH} />
         <Box width={1} />
         {state.showFlags ? (
-          <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} />
+          <FlagsPanel flags={ev.result?.flags ?? []} width={rightW} height={bodyH} scroll={state.flagScroll ?? 0} />
         ) : state.mode === 'screw' ? (
           <ScrewReadout result={props.sev?.result} units={state.units} width={rightW} height={bodyH} problem={problem} />
         ) : STEPS[state.step]?.id === 'service' ? (

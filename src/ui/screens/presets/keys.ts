@@ -4,7 +4,7 @@ import type {Handler} from '../../state/effects.js';
 import {filteredPresets} from '../../state/workbench.js';
 import {saveOpen} from '../../state/save-commands.js';
 import {back} from '../navigation.js';
-import {loadMarked, onMarked} from './reducer.js';
+import {loadMarked, newJoint, onMarked} from './reducer.js';
 
 const move = (d: number): Handler => (s, _ev, svc) => {
   const n = filteredPresets(s, svc).length;
@@ -15,7 +15,9 @@ const presets = {
   'list.up': move(-1),
   'list.down': move(1),
   'preset.load': (s, _ev, svc) => loadMarked(s, svc),
-  'preset.search': s => ({...s, prompt: {kind: 'search', title: 'Search presets', buffer: s.presetList.query}}),
+  // The list narrows as you type; Esc puts the search before back (kept in the prompt's target).
+  'preset.search': s => ({...s, prompt: {kind: 'search', title: 'Search presets', buffer: s.presetList.query, target: s.presetList.query}}),
+  'preset.new': s => newJoint(s),
   'preset.save': s => saveOpen(s),
   'preset.saveAs': s => ({...s, prompt: {kind: 'saveAs', title: 'Save the joint as', buffer: ''}}),
   'preset.rename': (s, _ev, svc) => onMarked(s, svc, 'preset.rename'),

@@ -6,15 +6,46 @@
 import type {WorkbenchServices} from '../../services.js';
 import type {Mode} from '../../state/fields.js';
 import {withEffects, type Step} from '../../state/effects.js';
-import {errText, fail, filteredPresets, info, isDirty, snapshot, type PromptState, type WorkbenchState} from '../../state/workbench.js';
+import {errText, fail, filteredPresets, info, isDirty, snapshot, type PromptState, type Values, type WorkbenchState} from '../../state/workbench.js';
 import {saveEffect, saveOpen} from '../../state/save-commands.js';
 
 export function markedPreset(s: WorkbenchState, svc: WorkbenchServices): string | undefined {
   return filteredPresets(s, svc)[s.presetList.index]?.name;
 }
 
-/** Load a preset (a read): its values, mode and kind; the screen goes back to the joint. */
+/** The target of "new blank joint" in the unsaved-edits question (no preset name may hold '<'). */
+export const NEW_JOINT = '<new blank joint>';
+
+/** The values of a new blank joint: a thread to start from and nothing else; the fields say what is needed. */
+export const BLANK_VALUES = (): Values => ({joint: {thread: 'M10', engagement: 10}, hole: {}, notes: {}}) as Values;
+
+/** What a newly opened joint starts with: the views at their tops, nothing marked. */
+const fresh = (s: WorkbenchState): Partial<WorkbenchState> => ({
+  screen: 'joint', step: 0, field: 0, edit: undefined, picker: undefined, preview: undefined, showFlags: false,
+  flagScroll: 0, repairIndex: 0, repairDetailScroll: 0, report: {...s.report, scroll: 0},
+});
+
+/** N: a new blank joint; over unsaved edits, ask first as loading a preset does. */
+export function newJoint(s: WorkbenchState): WorkbenchState {
+  if (isDirty(s)) return {...s, unsaved: {target: NEW_JOINT}, message: undefined};
+  return openNew(s);
+}
+
+function openNew(s: WorkbenchState): WorkbenchState {
+  const values = BLANK_VALUES();
+  return {
+    ...s,
+    ...fresh(s),
+    mode: 'joint',
+    values,
+    preset: {name: 'new joint', readOnly: false, saved: snapshot(values), kind: 'joint', unnamed: true},
+    message: info('A new blank joint: fill in the fields; s saves it under a name.'),
+  };
+}
+
+/** Load a preset (a read): its values, mode and kind; the screen goes back to the joint at the top of every view. */
 export function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: string): WorkbenchState {
+  if (name === NEW_JOINT) return openNew(s);
   try {
     const p = svc.presets.load(name);
     const mode: Mode = p.kind === 'screw' ? 'screw' : 'joint';
@@ -23,10 +54,8 @@ export function loadPreset(s: WorkbenchState, svc: WorkbenchServices, name: stri
       ...s,
       mode,
       values: p.values,
+      ...fresh(s),
       preset: {name: p.name, readOnly: p.readOnly, saved: snapshot(p.values), kind: mode},
-      screen: 'joint',
-      step: 0,
-      field: 0,
       message: info(`Loaded preset "${p.name}"${p.readOnly ? ' (shipped demo, read-only: save as to keep changes)' : ''}.`),
     };
   } catch (e) {
@@ -58,10 +87,19 @@ export function unsavedCancel(s: WorkbenchState): WorkbenchState {
 export function onMarked(s: WorkbenchState, svc: WorkbenchServices, command: 'preset.rename' | 'preset.duplicate' | 'preset.export' | 'preset.delete'): WorkbenchState {
   const name = markedPreset(s, svc);
   if (!name) return {...s, message: fail('No preset marked')};
+  if (command === 'preset.delete' && readOnlyPreset(svc, name)) return {...s, message: fail(`"${name}" is a shipped demo preset (read-only): it cannot be deleted`)};
   if (command === 'preset.delete') return {...s, confirm: {kind: 'delete', question: `Delete preset "${name}"? This cannot be undone.`, target: name}};
   if (command === 'preset.rename') return {...s, prompt: {kind: 'rename', title: `Rename "${name}" to`, buffer: name, target: name}};
   if (command === 'preset.duplicate') return {...s, prompt: {kind: 'duplicate', title: `Copy "${name}" as`, buffer: `${name} copy`, target: name}};
   return {...s, prompt: {kind: 'export', title: `Export "${name}" to file`, buffer: `${slug(name)}.json`, target: name}};
+}
+
+function readOnlyPreset(svc: WorkbenchServices, name: string): boolean {
+  try {
+    return svc.presets.list().some(p => p.name === name && p.readOnly);
+  } catch {
+    return false;
+  }
 }
 
 /** Enter in a presets prompt (the text is not empty). */

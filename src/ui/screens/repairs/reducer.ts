@@ -6,6 +6,9 @@
 import type {RepairOption, RepairPlan} from '../../../core/repair/types.js';
 import type {WorkbenchServices} from '../../services.js';
 import {evaluate, evaluateRepairs, type RepairEvaluation} from '../../state/evaluate.js';
+import {bodyHeight} from '../../layout.js';
+import {hintLines} from '../../keymap.js';
+import {clampDetail, detailLines, repairsLayout} from './detail.js';
 import {fail, info, shownValues, type RepairChoice, type WorkbenchState} from '../../state/workbench.js';
 
 /** The ranked repairs of the joint on screen (memoised by the evaluation). */
@@ -46,7 +49,22 @@ export function chosenStatus(plan: RepairPlan | undefined, c: RepairChoice | und
 export function moveRepair(s: WorkbenchState, svc: WorkbenchServices, d: number): WorkbenchState {
   if (s.mode !== 'joint') return s;
   const n = repairsOf(s, svc).plan?.options.length ?? 0;
-  return {...s, repairIndex: Math.max(0, Math.min(n - 1, s.repairIndex + d))};
+  return {...s, repairIndex: Math.max(0, Math.min(n - 1, s.repairIndex + d)), repairDetailScroll: 0};
+}
+
+/** PgDn/PgUp: the marked repair's detail by a page (the window drawn by the view, less its marker line). */
+export function scrollRepairDetail(s: WorkbenchState, svc: WorkbenchServices, pages: number): WorkbenchState {
+  if (s.mode !== 'joint') return s;
+  const plan = repairsOf(s, svc).plan;
+  const marked = plan?.options[Math.min(s.repairIndex, plan.options.length - 1)];
+  if (!plan || !marked) return s;
+  const hintRows = hintLines(['repairs', 'screens', 'any'], s.ascii, s.size.columns, new Set(['field-has-table'])).length;
+  const height = bodyHeight(s.size, 'repairs') - (hintRows - 1);
+  const {room} = repairsLayout(height, plan.options.length);
+  const total = detailLines(marked, s.units, s.size.columns, s.ascii).length;
+  if (total <= room) return {...s, repairDetailScroll: 0};
+  const shown = Math.max(1, room - 1);
+  return {...s, repairDetailScroll: clampDetail((s.repairDetailScroll ?? 0) + pages * shown, total, shown)};
 }
 
 /** c: choose the marked repair (c on the chosen one clears it); a repair that will not serve is chosen with a warning. */

@@ -73,17 +73,26 @@ function screwReportText(s: WorkbenchState, svc: WorkbenchServices): {text?: str
 export function writeReport(s: WorkbenchState, svc: WorkbenchServices, path: string, overwrite: boolean): WorkbenchState | Step {
   const r = reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii));
   if (!r.text) return {...s, message: fail(r.why ?? 'No report')};
-  return withEffects(s, {type: 'writeReport', path, text: r.text, format: s.report.format, overwrite});
+  // "~" and "~/" expanded and a relative path made full, so every message names the real file.
+  const full = svc.resolvePath ? svc.resolvePath(path) : path;
+  return withEffects(s, {type: 'writeReport', path: full, text: r.text, format: s.report.format, overwrite});
 }
 
+/**
+ * The path the report prompt offers: the folder of the last report written (kept in
+ * the settings), else the current folder, in full; then a file name of the preset and date.
+ */
 export function defaultReportPath(s: WorkbenchState, svc: WorkbenchServices): string {
   const d = svc.now().toISOString().slice(0, 10);
-  return `tapwright-${slug(s.preset.name)}-${d}.${s.report.format === 'markdown' ? 'md' : 'txt'}`;
+  const name = `tapwright-${slug(s.preset.name)}-${d}.${s.report.format === 'markdown' ? 'md' : 'txt'}`;
+  const dir = s.reportDir ?? svc.cwd;
+  if (!dir) return name;
+  return `${dir.replace(/[\\/]+$/, '')}/${name}`;
 }
 
 /** Scroll the preview by d lines, within the report as drawn. */
 export function scrollReport(s: WorkbenchState, svc: WorkbenchServices, d: number): WorkbenchState {
-  const rows = bodyHeight(s.size) - 1;
+  const rows = bodyHeight(s.size, 'report') - 1;
   const lines = wrapLines((reportText(s, svc, evaluate(s.values, svc, s.units, s.ascii)).text ?? '').split('\n'), s.size.columns);
   return {...s, report: {...s.report, scroll: Math.max(0, Math.min(s.report.scroll + d, lines.length - rows))}};
 }
@@ -91,7 +100,7 @@ export function scrollReport(s: WorkbenchState, svc: WorkbenchServices, d: numbe
 /** n: the work-order notes, with the preview scrolled to its work-order section. */
 export function openNotes(s: WorkbenchState, svc: WorkbenchServices): WorkbenchState {
   return startNotes(s, md => {
-    const rows = bodyHeight(md.size) - 1;
+    const rows = bodyHeight(md.size, 'report') - 1;
     const lines = wrapLines((reportText(md, svc, evaluate(md.values, svc, md.units, md.ascii)).text ?? '').split('\n'), md.size.columns);
     const at = lines.findIndex(l => /^#+ *work order/i.test(l));
     return Math.max(0, Math.min(at - 1, lines.length - rows));
