@@ -29,7 +29,7 @@ const COVER = {
 async function atMeasured() {
   const app = startApp({svc: services() as never, state: {values: structuredClone(COVER)}});
   await app.see('> Designation');
-  await app.press([KEY.right, KEY.right, KEY.right, KEY.right], '> Bolt pitch dia');
+  await app.press([KEY.right, KEY.right, KEY.right, KEY.right, KEY.right], '> Bolt pitch dia');
   expect(app.frame()).toContain('least-material limits');
   return app;
 }

@@ -60,7 +60,7 @@ describe('the Tightening step', () => {
     await app.press(KEY.enter, /Source: from memory: VDI/);
     await app.press(['m', 'o', 's', '2', KEY.enter], /Thread friction\s+0\.040\.\.0\.10/);
     expect(app.frame()).toMatch(/Head friction\s+0\.040\.\.0\.10/);
-    await app.press([KEY.down, KEY.down, KEY.down, KEY.down, KEY.down, KEY.down, KEY.down], '> Locking element');
+    await app.press([KEY.down, KEY.down, KEY.down, KEY.down, KEY.down, KEY.down], '> Locking element');
     await app.press(KEY.enter, /ISO 2320:2008, table/);
     await app.press(['p', 'o', 'l', 'y', KEY.enter], /Wrench [0-9.]+ to [0-9.]+ N\*m \(\+10\.5 locking\)/);
     app.unmount();
