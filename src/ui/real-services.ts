@@ -223,15 +223,17 @@ export function realServices(opts: {configDir: string; cwd: string; now: () => D
     },
     report(format, result, input, meta) {
       const rep = meta.repairs;
+      // The hole as recorded (stripped or intact) among the inputs, as check --preset reports it.
+      const hole = rep ? {hole: {state: rep.plan.hole.state, strippedDepth: rep.plan.hole.strippedDepth}} : {};
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;
       if (format === 'text') {
         const extra = rep ? [planText(rep.plan, meta.units, 'REPAIR PLAN (ranked)', {cautions: false, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})}), ...(rep.chosenNote ? [wrapText(rep.chosenNote, '', '  ').join('\n')] : [])] : [];
-        return formatCheckText(result, input, {units: meta.units, extraSections: [...outlookSection('text', result, input, meta.units), ...extra], presetName: meta.presetName, date: meta.date, ...(notes ? {notes} : {})});
+        return formatCheckText(result, input, {units: meta.units, extraSections: [...outlookSection('text', result, input, meta.units), ...extra], presetName: meta.presetName, date: meta.date, ...hole, ...(notes ? {notes} : {})});
       }
       const extra = rep
         ? [['## Repair plan', '', ...(rep.chosenNote ? [`**${rep.chosenNote}**`, ''] : []), ...planSectionLines(rep.plan, meta.units, {level: 3, ...(rep.chosen !== undefined ? {chosen: rep.chosen} : {})})].join('\n')]
         : [];
-      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: [...outlookSection('markdown', result, input, meta.units), ...extra], ...(notes ? {notes} : {})});
+      return formatCheckMarkdown(result, input, {presetName: meta.presetName, date: meta.date, units: meta.units, extraSections: [...outlookSection('markdown', result, input, meta.units), ...extra], ...hole, ...(notes ? {notes} : {})});
     },
     screwReport(format, result, input, meta) {
       const notes = meta.notes ?? loaded.get(meta.presetName)?.notes;

@@ -110,3 +110,15 @@ describe('the hole-state flag on the workbench report', () => {
     expect(reportText({...s, report: {format: 'text', scroll: 0}}, svc, ev).text).toContain('The hole is recorded as stripped to 7.00 mm');
   });
 });
+
+describe('report of a stripped hole (demo preset)', () => {
+  it('the hole state stands among the inputs of both renderings, as check --preset reports it', () => {
+    const svc = services();
+    const demo = svc.presets.load(svc.defaultPreset);
+    const values = {...demo.values, hole: {...demo.values.hole, holeState: 'stripped' as const, strippedDepth: 5}};
+    const s: WorkbenchState = {...initialState({name: demo.name, readOnly: demo.readOnly, values, units: 'si', ascii: true}), screen: 'report'};
+    const ev = evaluate(s.values, svc, 'si', true);
+    expect(reportText(s, svc, ev).text ?? '').toMatch(/\| Hole state \| stripped to 5\.00 mm from the face \|/);
+    expect(reportText({...s, report: {format: 'text', scroll: 0}}, svc, ev).text ?? '').toMatch(/Hole state +stripped to 5\.00 mm from the face/);
+  });
+});
