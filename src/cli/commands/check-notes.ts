@@ -17,6 +17,14 @@ export const NOTE_OPTIONS: Record<string, keyof WorkOrderNotes> = {
   '--note': 'text',
 };
 
+/** --help lines of the work-order options, the same for check and screw. */
+export const NOTE_OPTIONS_HELP = `Work order, for text and markdown (default: the notes of the --preset)
+  --asset TEXT         asset tag of the machine
+  --location TEXT      where it is
+  --work-order TEXT    work-order number
+  --note TEXT          free text under the work-order fields
+                       each replaces the preset's entry; empty clears it`;
+
 export const NOTE_OPTION_SPEC: OptionSpec = Object.fromEntries(Object.keys(NOTE_OPTIONS).map(o => [o.slice(2), {type: 'string'}]));
 
 /** The note options given on the command line, e.g. ['--asset']. */

@@ -11,7 +11,7 @@ import {CAUTION_LINES} from '../../core/cautions.js';
 import type {JointInputDraft} from '../../core/joint/input.js';
 import {checkJoint} from '../../core/joint/index.js';
 import {formatCheckMarkdown, formatCheckText, type WorkOrderNotes} from '../../report/index.js';
-import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
+import {NOTE_OPTION_SPEC, NOTE_OPTIONS_HELP, noteOptionsGiven, workOrderNotes} from './check-notes.js';
 import {holeReport, type ChosenRepair} from './check-hole.js';
 import type {RepairInputDraft} from '../../core/repair/input.js';
 import {JOINT_OPTIONS, UNITS_HELP, jointFromOptions, jointHelp, jointUsageError} from '../joint-options.js';
@@ -32,12 +32,7 @@ Output
 ${UNITS_HELP.join('\n')}
   --format text|markdown|json   (--json is short for --format json)
   --ascii              plain ASCII text
-Work order, for text and markdown (default: the notes of the --preset)
-  --asset TEXT         asset tag of the machine
-  --location TEXT      where it is
-  --work-order TEXT    work-order number
-  --note TEXT          free text under the work-order fields
-                       each replaces the preset's entry; empty clears it
+${NOTE_OPTIONS_HELP}
 
 Exit codes: 0 no failed check; 3 computed, but a check failed; 2 bad input
 or usage.

@@ -18,7 +18,7 @@ import {screwMarkdown} from '../../report/screw-markdown.js';
 import {screwFlagsInUnits} from '../../core/screw/flags.js';
 import {wrapText} from '../../report/wrap.js';
 import type {WorkOrderNotes} from '../../report/work-order.js';
-import {NOTE_OPTION_SPEC, noteOptionsGiven, workOrderNotes} from './check-notes.js';
+import {NOTE_OPTION_SPEC, NOTE_OPTIONS_HELP, noteOptionsGiven, workOrderNotes} from './check-notes.js';
 
 const HELP = `tapwright screw - power screw (lead screw and nut): torque, efficiency,
 self-locking, stresses, nut pressure and stripping, buckling
@@ -36,12 +36,7 @@ ${rowHelp(SCREW_ROWS).join('\n')}
   --format F           text (default), markdown (the work-order report) or
                        json; --json is short for json (JSON is always SI)
   --help               this text
-Work order, for text and markdown (default: the notes of the --preset)
-  --asset TEXT         asset tag of the machine
-  --location TEXT      where it is
-  --work-order TEXT    work-order number
-  --note TEXT          free text under the work-order fields
-                       each replaces the preset's entry; empty clears it
+${NOTE_OPTIONS_HELP}
 
 Torques: Shigley, Mechanical Engineering Design, 9th ed., Eqs. 8-1 to 8-6.
 With a friction range the raise torque uses the max and lowering and
