@@ -83,6 +83,8 @@ function unitText(setting: string, f: WindowFmt): string {
   if (m) return formatQuantity(Number(m[1]), 'torque', f.units, {ascii: f.ascii});
   const mm = /^([0-9.]+) mm$/.exec(setting);
   if (mm && f.units === 'us') return formatQuantity(Number(mm[1]), 'length', 'us', {ascii: f.ascii});
+  const rm = /^Rm ([0-9.]+) MPa$/.exec(setting);
+  if (rm && f.units === 'us') return `Rm ${formatQuantity(Number(rm[1]), 'stress', 'us', {ascii: f.ascii})}`;
   return f.ascii ? setting.replace(/\u00b7/g, '*') : setting;
 }
 
