@@ -4,6 +4,7 @@
  * workbench field of the power-screw mode. Friction may be given as a pick
  * of the published tables (the readers below).
  */
+import {parseDecimal} from '../core/number-text.js';
 import {
   collarFrictionPick,
   COLLAR_FRICTION,
@@ -44,7 +45,8 @@ const collarFriction: OptionReader = (text, {option, quantity}) => {
 
 /** A whole number of starts. */
 const starts: OptionReader = (text, {option}) => {
-  const n = Number(text.trim());
+  // Decimal digits only: Number() would also read 0x2 or 0b10.
+  const n = parseDecimal(text) ?? Number.NaN;
   if (!Number.isInteger(n) || n < 1 || n > 8) throw new UsageError(`${option} is ${text}; accepted: a whole number 1 to 8`, option);
   return {starts: n};
 };

@@ -4,6 +4,7 @@
  * rows. A bare number is read in the --units system (mm, N, N·m, MPa, m/s or
  * in, lbf, ft·lbf, ksi, ft/min), whatever the command.
  */
+import {bareFractionInSi} from '../core/number-text.js';
 import {setPath} from '../app/key-path.js';
 import {bareUnit, boundsOf, optionRangeText} from '../app/field-table.js';
 import type {FieldRow} from '../app/fields-types.js';
@@ -83,7 +84,12 @@ export function readRowOptions(rows: readonly FieldRow[], values: ParsedOptions[
       const unit = bareUnit(row, units);
       return {...b, ...(unit ? {defaultUnit: unit} : {}), rangeText: optionRangeText(row, units)};
     };
-    const q = (t: string) => quantity(o, t, row.dimension ?? 'ratio', rule());
+    const q = (t: string) => {
+      // A bare fraction is read as inches; in SI on the command line it is refused with both readings.
+      const frac = row.dimension === 'length' ? bareFractionInSi(t, units) : undefined;
+      if (frac) throw new UsageError(`${o} ${frac}`, o);
+      return quantity(o, t, row.dimension ?? 'ratio', rule());
+    };
     const r = (t: string) => range(o, t, rule());
     if (cli.read) {
       Object.assign(out, cli.read(text, {option: o, units, row, quantity: q, range: r, other: n => str(values, n)}));

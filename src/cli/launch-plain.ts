@@ -58,7 +58,7 @@ export async function printWithoutTerminal(why: string, opts: LaunchOptions, ten
     const userMaterials = wantsUserMaterials(draft) ? (await import('../store/presets.js')).openPresetStore(dir).userMaterials() : [];
     const r = resolveJointInput(draft, {settings, userMaterials, units});
     if (r.errors) throw new Error(r.errors.map(labelMessage).join('; '));
-    const report = formatCheckText(checkJoint(r.input), r.input, {units: 'si', ascii});
+    const report = formatCheckText(checkJoint(r.input), r.input, {units, ascii});
     io.out(report.endsWith('\n') ? report : `${report}\n`);
     io.err(`${hint}Printed above: the check report of preset "${p.name}".\n`);
   } catch (e) {

@@ -26,6 +26,14 @@ describe('launch without a terminal', () => {
     expect(io.stdout()).not.toContain('\u001B[');
   });
 
+  it('prints that report in the units asked for (--units us: lbf, in; was SI whatever was asked)', async () => {
+    const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: tmp()}, stdinIsTTY: false, stdoutIsTTY: false});
+    expect(await launch(['--units', 'us'], io)).toBe(2);
+    expect(io.stdout()).toMatch(/Units +US customary/);
+    expect(io.stdout()).toMatch(/\d lbf/);
+    expect(io.stdout()).not.toMatch(/\d kN\b/);
+  });
+
   it('treats TERM=dumb as no terminal', async () => {
     const io = memoryIo({env: {TAPWRIGHT_CONFIG_DIR: tmp(), TERM: 'dumb'}, stdinIsTTY: true, stdoutIsTTY: true});
     expect(await launch(['--preset', 'demo-gearbox-cover'], io)).toBe(2);

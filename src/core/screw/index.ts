@@ -87,6 +87,11 @@ function checkScrewAsGiven(input: ScrewInput): ScrewResult {
   // Body torsion carries the full raising torque (conservative); only the thread torque passes the flanks.
   const root = threadRootStresses({load: F, torque: raise, threadTorque: raiseThread, rootDiameter: g.rootDiameter, meanDiameter: g.meanDiameter, pitch: g.pitch, share, threads: 1, compression, family: g.spec.family});
 
+  // Wear can take at most the whole nut-thread thickness at the screw's major diameter (w P).
+  const threadThickness = g.shearWidthFactor * g.pitch;
+  if (input.nutWear >= threadThickness) {
+    throw new ScrewInputError('nutWear', `nut wear ${input.nutWear} mm is not less than the nut thread's thickness at the screw's major diameter (${threadThickness.toFixed(3)} mm): no thread would be left`);
+  }
   const tolerance = classShearAreaFactor(g);
   const strip = stripping({
     load: F, major: g.major, nutMinor: g.nutMinorDiameter, pitch: g.pitch, nutLength: input.nutLength,
