@@ -7,14 +7,9 @@
  * friction classes; prevailing torques ISO 2320:2008 (M10: 10.5 N·m first installation max).
  */
 import {describe, expect, it} from 'vitest';
-import {runCli} from '../../src/cli/main.js';
-import {memoryIo} from '../../src/cli/io.js';
+import {runCheck} from '../support/run-check.js';
 
-async function check(args: string[]) {
-  const io = memoryIo({env: {}});
-  const code = await runCli(['check', ...args], io);
-  return {code, out: io.stdout(), err: io.stderr()};
-}
+const check = runCheck;
 
 async function json(args: string[]) {
   const r = await check([...args, '--json']);
